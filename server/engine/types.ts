@@ -1,0 +1,87 @@
+/**
+ * The engine's input and output contract. Units: kW, kWh, hours; prices in
+ * currency/MWh (divide by 1000 for kWh). Everything here is plain readonly data.
+ */
+
+/** Battery parameters, the same keys as the command line's battery JSON. */
+export interface BatteryParams {
+  readonly powerChargeKw: number;
+  readonly powerDischargeKw: number;
+  readonly energyKwh: number;
+  readonly socMinPct: number;
+  readonly socMaxPct: number;
+  readonly socInitialPct: number;
+  /** Charging efficiency η_ch in (0, 1]. */
+  readonly efficiencyCharge: number;
+  /** Discharging efficiency η_dis in (0, 1]. */
+  readonly efficiencyDischarge: number;
+  /** Self-discharge σ in % of stored energy per hour. */
+  readonly selfDischargePctPerHour: number;
+  /** Degradation cost per MWh discharged. */
+  readonly degradationCostPerMwh: number;
+  /** Daily cap on equivalent full cycles (discharged energy / usable energy); null = none. */
+  readonly maxCyclesPerDay: number | null;
+}
+
+/** Site parameters, the same keys as the command line's site JSON. */
+export interface SiteParams {
+  /** IANA time zone name, used for local days and clock slots. */
+  readonly timezone: string;
+  readonly importLimitKw: number | null;
+  readonly exportLimitKw: number | null;
+  /** Demand charge in currency per kW of peak import over the model; null = none. */
+  readonly demandChargePerKw: number | null;
+}
+
+export type TerminalRule =
+  | { readonly kind: 'free' }
+  | { readonly kind: 'cyclic' }
+  /** End SoC at least socPct % of nameplate energy. */
+  | { readonly kind: 'target'; readonly socPct: number }
+  /** End energy valued at valuePerMwh (the steady cycle's stored-energy value at the end time of day). */
+  | { readonly kind: 'steady-value'; readonly valuePerMwh: number };
+
+/** One dispatch problem on a regular time grid of N steps. */
+export interface DispatchProblem {
+  readonly stepHours: number;
+  /** UTC epoch milliseconds of the start of each step (length N). */
+  readonly timesMs: readonly number[];
+  /** Import price per step, currency/MWh (length N). */
+  readonly priceImport: readonly number[];
+  /** Export price per step, currency/MWh (length N); equal to priceImport for pure arbitrage. */
+  readonly priceExport: readonly number[];
+  /** Site load per step, kW (length N); all zeros for pure arbitrage. */
+  readonly loadKw: readonly number[];
+  /** On-site generation per step, kW (length N); all zeros when none. */
+  readonly generationKw: readonly number[];
+  readonly battery: BatteryParams;
+  readonly site: SiteParams;
+  /** Energy at the start of step 0, kWh. */
+  readonly initialEnergyKwh: number;
+  readonly terminal: TerminalRule;
+  /** Local-day index per step (length N), used by the daily throughput cap. */
+  readonly dayIndex: readonly number[];
+}
+
+export type SolveStatus = 'optimal' | 'infeasible' | 'unbounded' | 'error';
+
+/** The solution of a DispatchProblem. Series have length N except socKwh (N + 1, starting at e_0). */
+export interface DispatchSolution {
+  readonly status: SolveStatus;
+  /** Which algorithm produced it. */
+  readonly method: 'dp' | 'lp';
+  /** Human-readable reason when status is not optimal. */
+  readonly message?: string;
+  /** Objective value: money paid incl. degradation and demand charge, minus terminal value. */
+  readonly objective: number;
+  /** Money paid incl. degradation and demand charge, excluding any terminal value (negative = earnings). */
+  readonly cost: number;
+  readonly chargeKw: readonly number[];
+  readonly dischargeKw: readonly number[];
+  readonly gridImportKw: readonly number[];
+  readonly gridExportKw: readonly number[];
+  readonly socKwh: readonly number[];
+  /** Value of one more MWh stored at the end of each step (dual of the SoC equation for e_{t+1}), currency/MWh. */
+  readonly storedEnergyValue: readonly number[];
+  readonly peakImportKw: number;
+}
