@@ -1,0 +1,60 @@
+/** Builds the Express application: security headers, the JSON API under /api, the built client. */
+import express, { type Router } from 'express';
+import helmet from 'helmet';
+import { existsSync } from 'node:fs';
+import path from 'node:path';
+import type { AppConfig } from './config';
+import { errorHandler } from './http/error-handler';
+import { AppError } from './http/app-error';
+import { healthRouter } from './health/health.routes';
+
+const clientDir = path.resolve(import.meta.dirname, '..', 'dist', 'client');
+
+/** Routers mounted under /api, in order. Each module adds its router here. */
+function apiRouters(): Router[] {
+  return [healthRouter];
+}
+
+export function createApp(config: AppConfig) {
+  const app = express();
+  app.disable('x-powered-by');
+  app.set('trust proxy', 'loopback');
+  app.locals.config = config;
+
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        useDefaults: true,
+        directives: {
+          'default-src': ["'self'"],
+          'object-src': ["'none'"],
+          'base-uri': ["'none'"],
+          'frame-ancestors': ["'none'"],
+          'img-src': ["'self'", 'data:', 'blob:'],
+          'style-src': ["'self'", "'unsafe-inline'"],
+          'upgrade-insecure-requests': null,
+        },
+      },
+      referrerPolicy: { policy: 'same-origin' },
+      strictTransportSecurity: config.appOrigin.startsWith('https:'),
+    }),
+  );
+
+  const api = express.Router();
+  api.use((_req, res, next) => {
+    res.setHeader('Cache-Control', 'no-store');
+    next();
+  });
+  api.use(express.json({ limit: '1mb' }));
+  for (const router of apiRouters()) api.use(router);
+  api.use((req, _res, next) => next(new AppError('not_found', `No API route ${req.method} ${req.path}.`, 404)));
+  app.use('/api', api);
+
+  if (existsSync(clientDir)) {
+    app.use(express.static(clientDir, { index: false, maxAge: '1h' }));
+    app.get(['/', '/*splat'], (_req, res) => res.sendFile(path.join(clientDir, 'index.html')));
+  }
+
+  app.use(errorHandler);
+  return app;
+}

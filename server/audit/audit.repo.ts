@@ -1,0 +1,52 @@
+import { and, desc, eq, gte, lte, type SQL } from 'drizzle-orm';
+import type { DbOrTx } from '../db/client';
+import { auditEvents } from './audit.schema';
+
+export interface AuditInput {
+  actorId?: string | null;
+  actorEmail?: string | null;
+  action: string;
+  entityType?: string;
+  entityId?: string;
+  ip?: string | null;
+  details?: Record<string, unknown>;
+}
+
+/** Appends one audit event; pass the transaction so the event commits with the change it records. */
+export async function insertAuditEvent(db: DbOrTx, event: AuditInput): Promise<void> {
+  await db.insert(auditEvents).values({
+    actorId: event.actorId ?? null,
+    actorEmail: event.actorEmail ?? null,
+    action: event.action,
+    entityType: event.entityType ?? null,
+    entityId: event.entityId ?? null,
+    ip: event.ip ?? null,
+    details: event.details ?? {},
+  });
+}
+
+export interface AuditFilter {
+  action?: string;
+  actorEmail?: string;
+  entityType?: string;
+  entityId?: string;
+  from?: Date;
+  to?: Date;
+  limit: number;
+}
+
+export async function listAuditEvents(db: DbOrTx, f: AuditFilter) {
+  const where: SQL[] = [];
+  if (f.action) where.push(eq(auditEvents.action, f.action));
+  if (f.actorEmail) where.push(eq(auditEvents.actorEmail, f.actorEmail));
+  if (f.entityType) where.push(eq(auditEvents.entityType, f.entityType));
+  if (f.entityId) where.push(eq(auditEvents.entityId, f.entityId));
+  if (f.from) where.push(gte(auditEvents.at, f.from));
+  if (f.to) where.push(lte(auditEvents.at, f.to));
+  return db
+    .select()
+    .from(auditEvents)
+    .where(where.length ? and(...where) : undefined)
+    .orderBy(desc(auditEvents.id))
+    .limit(f.limit);
+}

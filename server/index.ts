@@ -1,0 +1,37 @@
+/** Starts the web server (and, by default, a job worker) against the configured database. */
+import { loadConfig } from './config';
+import { createApp } from './app';
+import { closeDb, initDb } from './db/client';
+import { logger } from './logger';
+
+async function main() {
+  const config = loadConfig();
+  initDb(config.DATABASE_URL);
+  const app = createApp(config);
+  const server = app.listen(config.PORT, () => logger.info(`Slackwater listening on ${config.appOrigin}`));
+  server.on('error', (error: NodeJS.ErrnoException) => {
+    if (error.code === 'EADDRINUSE') {
+      console.error(`Port ${config.PORT} is already in use. Stop the program using it or start with PORT=<another port>.`);
+    } else {
+      console.error(`The web server could not start: ${error.message}`);
+    }
+    process.exit(1);
+  });
+
+  let stopping = false;
+  const stop = async () => {
+    if (stopping) return;
+    stopping = true;
+    logger.info('Stopping Slackwater…');
+    server.close();
+    await closeDb();
+    process.exit(0);
+  };
+  process.on('SIGINT', stop);
+  process.on('SIGTERM', stop);
+}
+
+main().catch((error: unknown) => {
+  console.error(error instanceof Error ? error.message : error);
+  process.exit(1);
+});

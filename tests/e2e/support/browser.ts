@@ -1,0 +1,43 @@
+/** Debian's Chromium through playwright-core, with a guard that no request leaves localhost. */
+import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
+import { mkdirSync } from 'node:fs';
+import path from 'node:path';
+
+const chromiumPath = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium';
+export const screenshotDir = path.resolve(import.meta.dirname, '..', '..', '..', 'test-results', 'screenshots');
+
+export async function launchBrowser(): Promise<Browser> {
+  return chromium.launch({
+    executablePath: chromiumPath,
+    args: [
+      '--headless',
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-dev-shm-usage',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+      '--disable-quic',
+      '--no-first-run',
+    ],
+  });
+}
+
+/** A context that records (and blocks) every request to a host other than localhost. */
+export async function newLocalContext(browser: Browser, options: Parameters<Browser['newContext']>[0] = {}) {
+  const context: BrowserContext = await browser.newContext({ viewport: { width: 1360, height: 900 }, acceptDownloads: true, ...options });
+  const offsite: string[] = [];
+  await context.route('**/*', (route) => {
+    const url = new URL(route.request().url());
+    const local = ['localhost', '127.0.0.1', '[::1]'].includes(url.hostname) || url.protocol === 'data:' || url.protocol === 'blob:';
+    if (local) return route.continue();
+    offsite.push(url.toString());
+    return route.abort();
+  });
+  return { context, offsite };
+}
+
+export async function screenshot(page: Page, name: string) {
+  mkdirSync(screenshotDir, { recursive: true });
+  await page.screenshot({ path: path.join(screenshotDir, `${name}.png`), fullPage: true });
+}
