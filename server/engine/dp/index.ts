@@ -1,0 +1,10 @@
+/**
+ * The exact dynamic-programming path of the dispatch engine (DESIGN section 3):
+ * for one battery whose steps are coupled only through the SoC, the cost-to-go
+ * is convex piecewise linear in the stored energy and a backward pass of
+ * sorted-slope merges solves the LP exactly, with the stored-energy value at
+ * every SoC as a by-product.
+ */
+export { canSolveWithDp, checkDpInput, type DpEligibility } from './can-solve';
+export { solveDispatchDp, type DpSolution, type DpSolveOptions } from './solve';
+export { DpValueFunctions, type ValueFunctionShape } from './value-functions';

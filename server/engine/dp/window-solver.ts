@@ -1,0 +1,144 @@
+import type { TerminalRule } from '../types';
+import { backwardStep } from './backward-step';
+import { writeTerminal, type DpContext } from './context';
+import { diagnoseInfeasible } from './diagnose';
+import { forwardStep, newForwardStepResult } from './forward-step';
+import { PlanRing } from './plan-ring';
+import { ValueStore } from './value-store';
+
+/** Work counters, for the benchmark and for tests that check reuse happened. */
+export interface DpWorkStats {
+  backwardSteps: number;
+  backwardStepsReused: number;
+  forwardSteps: number;
+  forwardStepsReused: number;
+}
+
+/**
+ * Solves windows [start, end) of one problem by backward and forward passes
+ * over rings indexed by absolute step (t mod size), so consecutive receding-
+ * horizon windows share storage. With `warm`, the backward pass stops as soon
+ * as a recomputed V_t equals the stored one bit for bit: every earlier V is
+ * then what a cold pass would compute (same inputs, same operations), and a
+ * stored forward decision is reused when its V_{t+1}, start energy and
+ * upstream dual interval are the ones it was made with. Results are therefore
+ * bit-identical to a cold solve.
+ */
+export class WindowSolver {
+  readonly store: ValueStore;
+  readonly plan: PlanRing;
+  readonly stats: DpWorkStats = { backwardSteps: 0, backwardStepsReused: 0, forwardSteps: 0, forwardStepsReused: 0 };
+  private readonly size: number;
+  private readonly map: Int32Array;
+  private readonly tOf: Int32Array;
+  private readonly vid: Float64Array;
+  private spare: number;
+  private version = 0;
+  private readonly fs = newForwardStepResult();
+
+  constructor(private readonly ctx: DpContext, maxWindowSteps: number) {
+    this.size = maxWindowSteps + 1;
+    this.store = new ValueStore(this.size + 1);
+    this.map = new Int32Array(this.size);
+    for (let r = 0; r < this.size; r++) this.map[r] = r;
+    this.spare = this.size;
+    this.tOf = new Int32Array(this.size).fill(-1);
+    this.vid = new Float64Array(this.size + 1);
+    this.plan = new PlanRing(this.size);
+  }
+
+  /** Index of step t in the plan ring. */
+  ringIndex(t: number): number {
+    return t % this.size;
+  }
+
+  /** Physical store slot of V_t (valid for t of the last solved window). */
+  slotOf(t: number): number {
+    return this.map[t % this.size] ?? 0;
+  }
+
+  /**
+   * Backward pass over [start, end] then forward pass over [start, forwardTo).
+   * Returns null on success, else a message naming the first offending step.
+   */
+  solveWindow(start: number, end: number, e0: number, rule: TerminalRule, forwardTo: number, warm: boolean): string | null {
+    const failure = this.backward(start, end, e0, rule, warm);
+    if (failure !== null) return failure;
+    return this.forward(start, forwardTo, e0, warm) ? null : this.explain(start, end, e0, rule);
+  }
+
+  private explain(start: number, end: number, e0: number, rule: TerminalRule): string {
+    return diagnoseInfeasible(this.ctx, start, end, e0, rule)
+      ?? `numerical trouble between steps ${start} and ${end}: the exact dynamic program lost feasibility; use the LP path`;
+  }
+
+  private backward(start: number, end: number, e0: number, rule: TerminalRule, warm: boolean): string | null {
+    const { ctx, store, map, tOf, size } = this;
+    for (let t = end; t >= start; t--) {
+      const r = t % size;
+      const out = this.spare;
+      const ok = t === end
+        ? writeTerminal(ctx, store, out, rule, e0)
+        : backwardStep(store, out, map[(t + 1) % size] ?? 0, ctx.stages, t, ctx.retention, ctx.emin, ctx.emax, ctx.tol);
+      if (!ok) return this.explain(start, end, e0, rule);
+      this.stats.backwardSteps++;
+      if (warm && tOf[r] === t && store.sameShape(out, map[r] ?? 0) && this.storedDown(start, t)) {
+        this.stats.backwardStepsReused += t - start;
+        return null;
+      }
+      this.spare = map[r] ?? 0;
+      map[r] = out;
+      tOf[r] = t;
+      this.vid[out] = ++this.version;
+    }
+    return null;
+  }
+
+  /** True when V_s is stored for every s in [start, t). */
+  private storedDown(start: number, t: number): boolean {
+    for (let s = start; s < t; s++) if (this.tOf[s % this.size] !== s) return false;
+    return true;
+  }
+
+  private forward(start: number, to: number, e0: number, warm: boolean): boolean {
+    const { ctx, store, plan, fs, size } = this;
+    const a = ctx.retention;
+    const net = ctx.stages.netLoadKw;
+    let e = e0;
+    let muLo = -Infinity;
+    let muHi = Infinity;
+    for (let t = start; t < to; t++) {
+      const r = t % size;
+      const w = map1(this.map, (t + 1) % size);
+      const v = this.vid[w] ?? 0;
+      if (t > start) {
+        // Link the upstream dual interval through e_t: μ_{t−1} = a·μ_t inside the
+        // window, one-sided at a bound (its multiplier takes the rest).
+        const atMax = e >= ctx.emax - 1e-12 * ctx.emax;
+        const atMin = e <= ctx.emin + 1e-12 * ctx.emax;
+        const lo = atMin ? -Infinity : muLo / a;
+        const hi = atMax ? Infinity : muHi / a;
+        muLo = lo;
+        muHi = hi;
+      } else {
+        muLo = -Infinity;
+        muHi = Infinity;
+      }
+      if (warm && plan.matches(r, t, v, e, muLo, muHi)) {
+        this.stats.forwardStepsReused++;
+      } else {
+        if (!forwardStep(store, w, ctx.stages, t, a * e, ctx.tol, fs)) return false;
+        this.stats.forwardSteps++;
+        plan.record(r, t, v, e, muLo, muHi, fs, net[t] ?? 0);
+      }
+      e = plan.y[r] ?? 0;
+      muLo = plan.muLo[r] ?? 0;
+      muHi = plan.muHi[r] ?? 0;
+    }
+    return true;
+  }
+}
+
+function map1(map: Int32Array, r: number): number {
+  return map[r] ?? 0;
+}
