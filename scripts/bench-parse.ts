@@ -63,4 +63,6 @@ const results = variants.map((v) => ({
   megabytes: Number((new TextEncoder().encode(v.text).length / 1e6).toFixed(2)),
   ...measure(v),
 }));
-console.log(JSON.stringify({ benchmark: 'parse-profile-csv', node: process.version, runs: RUNS, targetMs: 2000, results }, null, 2));
+console.log(
+  JSON.stringify({ benchmark: 'parse-profile-csv', node: process.version, runs: RUNS, targetMs: 2000, results }, null, 2),
+);

@@ -74,7 +74,11 @@ export function checkSequence(rows: readonly TimedRow[], fillGaps: boolean, issu
     }
     const first = byInstant.get(row.ms);
     if (first) {
-      issues.add('order', row.line, `Line ${row.line}: the time ${row.timeText} is the same interval as ${at(first)}. Keep only one of the two rows.`);
+      issues.add(
+        'order',
+        row.line,
+        `Line ${row.line}: the time ${row.timeText} is the same interval as ${at(first)}. Keep only one of the two rows.`,
+      );
       return;
     }
     byInstant.set(row.ms, row);
@@ -87,7 +91,11 @@ export function checkSequence(rows: readonly TimedRow[], fillGaps: boolean, issu
     const cur = (unique[i] as Indexed).row;
     if (cur.ms < prev.ms) {
       outOfOrder = true;
-      issues.add('order', cur.line, `Line ${cur.line}: ${cur.timeText} is earlier than ${at(prev)}. Sort the rows by time, earliest first.`);
+      issues.add(
+        'order',
+        cur.line,
+        `Line ${cur.line}: ${cur.timeText} is earlier than ${at(prev)}. Sort the rows by time, earliest first.`,
+      );
     }
   }
   // Gaps and steps measured on unsorted rows would only repeat the same problem.
@@ -96,7 +104,11 @@ export function checkSequence(rows: readonly TimedRow[], fillGaps: boolean, issu
   const first = unique[0];
   if (first === undefined) return null;
   if (rows.length === 1) {
-    issues.add('structure', first.row.line, `Line ${first.row.line} is the only data row; at least two rows are needed to tell the resolution. Upload the whole series.`);
+    issues.add(
+      'structure',
+      first.row.line,
+      `Line ${first.row.line} is the only data row; at least two rows are needed to tell the resolution. Upload the whole series.`,
+    );
     return null;
   }
   // Null only when unreadable rows separate every pair: those are already reported.
@@ -105,7 +117,11 @@ export function checkSequence(rows: readonly TimedRow[], fillGaps: boolean, issu
   const { stepMs, example, previous } = common;
   const stepMinutes = stepMs / MINUTE_MS;
   if (!(SUPPORTED_STEPS_MINUTES as readonly number[]).includes(stepMinutes)) {
-    issues.add('step', example.row.line, `Line ${example.row.line} is ${describeDuration(stepMs)} after ${at(previous.row)}, the most common step in this file; Slackwater takes 5, 15, 30 or 60 minute intervals. Resample the series to one of these.`);
+    issues.add(
+      'step',
+      example.row.line,
+      `Line ${example.row.line} is ${describeDuration(stepMs)} after ${at(previous.row)}, the most common step in this file; Slackwater takes 5, 15, 30 or 60 minute intervals. Resample the series to one of these.`,
+    );
     return null;
   }
 
@@ -120,15 +136,24 @@ export function checkSequence(rows: readonly TimedRow[], fillGaps: boolean, issu
       // A jump across unreadable rows is those rows, already reported, not a gap.
       const acrossUnreadable = cur.unreadableBefore > anchor.unreadableBefore;
       if (missing > 0 && !fillGaps && !acrossUnreadable) {
-        const what = missing === 1 ? `1 interval of ${stepMinutes} minutes is` : `${missing} intervals of ${stepMinutes} minutes are`;
-        issues.add('gap', cur.row.line, `Line ${cur.row.line}: ${cur.row.timeText} comes ${describeDuration(diff)} after ${at(anchor.row)}, so ${what} missing. Add the missing rows, or upload with gap filling turned on.`);
+        const what =
+          missing === 1 ? `1 interval of ${stepMinutes} minutes is` : `${missing} intervals of ${stepMinutes} minutes are`;
+        issues.add(
+          'gap',
+          cur.row.line,
+          `Line ${cur.row.line}: ${cur.row.timeText} comes ${describeDuration(diff)} after ${at(anchor.row)}, so ${what} missing. Add the missing rows, or upload with gap filling turned on.`,
+        );
       }
       anchor = cur;
       onGrid.push(cur.row);
       continue;
     }
     irregular = true;
-    issues.add('step', cur.row.line, `Line ${cur.row.line}: ${cur.row.timeText} comes ${describeDuration(diff)} after ${at(anchor.row)}, which is not a whole number of ${stepMinutes}-minute intervals. Correct the time so every row is ${stepMinutes} minutes after the previous one.`);
+    issues.add(
+      'step',
+      cur.row.line,
+      `Line ${cur.row.line}: ${cur.row.timeText} comes ${describeDuration(diff)} after ${at(anchor.row)}, which is not a whole number of ${stepMinutes}-minute intervals. Correct the time so every row is ${stepMinutes} minutes after the previous one.`,
+    );
     // A stray row leaves the grid intact; a shifted series continues from here.
     const next = unique[i + 1];
     if (next === undefined || (next.row.ms - anchor.row.ms) % stepMs !== 0) anchor = cur;

@@ -11,29 +11,24 @@ export interface ProfileIssue {
 }
 
 export type IssueCategory =
-  | 'options'
-  | 'file'
-  | 'structure'
-  | 'time'
-  | 'local-time'
-  | 'offset'
-  | 'number'
-  | 'order'
-  | 'gap'
-  | 'step';
+  'options' | 'file' | 'structure' | 'time' | 'local-time' | 'offset' | 'number' | 'order' | 'gap' | 'step';
 
 export const DEFAULT_MAX_ISSUES = 50;
 
-const EXAMPLE_TIMES = '2026-03-29T03:00:00+02:00 (with UTC offset) or 2026-03-29T03:00 (local time in the site\'s zone)';
+const EXAMPLE_TIMES = "2026-03-29T03:00:00+02:00 (with UTC offset) or 2026-03-29T03:00 (local time in the site's zone)";
 
 const CATEGORY_HINTS: Readonly<Record<IssueCategory, string>> = {
   options: 'Choose a kind and a unit from the lists offered.',
   file: 'Export the data from your spreadsheet or system as a CSV text file (UTF-8) and upload that file.',
-  structure: 'The file needs a header row, then one row per interval with a time column and a value column, separated by commas or semicolons.',
+  structure:
+    'The file needs a header row, then one row per interval with a time column and a value column, separated by commas or semicolons.',
   time: `Write times in ISO 8601, e.g. ${EXAMPLE_TIMES}.`,
-  'local-time': 'On daylight-saving days local times can be missing or repeated; write every time with its UTC offset (RFC 3339), e.g. 2026-10-25T02:00:00+02:00 and 2026-10-25T02:00:00+01:00.',
-  offset: 'Use the same UTC offset throughout, or the offsets of the site\'s time zone (they change only on its daylight-saving days).',
-  number: 'Values must be plain numbers such as -12.5 (or -12,5 in a semicolon-separated file): no units, thousands separators, NaN or Infinity.',
+  'local-time':
+    'On daylight-saving days local times can be missing or repeated; write every time with its UTC offset (RFC 3339), e.g. 2026-10-25T02:00:00+02:00 and 2026-10-25T02:00:00+01:00.',
+  offset:
+    "Use the same UTC offset throughout, or the offsets of the site's time zone (they change only on its daylight-saving days).",
+  number:
+    'Values must be plain numbers such as -12.5 (or -12,5 in a semicolon-separated file): no units, thousands separators, NaN or Infinity.',
   order: 'Sort the rows by time, earliest first, with each interval once.',
   gap: 'To fill missing intervals by linear interpolation between their neighbours, upload again with gap filling turned on.',
   step: 'Every row must be one interval after the previous one: 5, 15, 30 or 60 minutes throughout.',

@@ -7,8 +7,7 @@
 import { truncate } from './parse-timestamp';
 
 export type NumberReading =
-  | { readonly ok: true; readonly value: number }
-  | { readonly ok: false; readonly blank: boolean; readonly reason: string };
+  { readonly ok: true; readonly value: number } | { readonly ok: false; readonly blank: boolean; readonly reason: string };
 
 const DOT_NUMBER = /^[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?$/;
 const COMMA_NUMBER = /^[+-]?(?:\d+(?:,\d*)?|,\d+)(?:[eE][+-]?\d+)?$/;

@@ -53,18 +53,25 @@ export interface ParsedProfile {
   notes: string[];
 }
 
-export type ParseProfileResult =
-  | { ok: true; profile: ParsedProfile }
-  | { ok: false; issues: ProfileIssue[]; hint: string };
+export type ParseProfileResult = { ok: true; profile: ParsedProfile } | { ok: false; issues: ProfileIssue[]; hint: string };
 
 function checkOptions(options: ParseProfileOptions, issues: IssueList): ZoneClock | null {
   if (!(PROFILE_KINDS as readonly string[]).includes(options.kind)) {
     issues.add('options', 0, `The kind "${String(options.kind)}" is not known; choose price, load or generation.`);
   } else if (!isAcceptedUnit(options.kind, options.unit)) {
-    issues.add('options', 0, `The unit "${options.unit}" does not fit a ${options.kind} profile; choose one of ${ACCEPTED_UNITS[options.kind].join(', ')}.`);
+    issues.add(
+      'options',
+      0,
+      `The unit "${options.unit}" does not fit a ${options.kind} profile; choose one of ${ACCEPTED_UNITS[options.kind].join(', ')}.`,
+    );
   }
   const clock = createZoneClock(options.timezone);
-  if (clock === null) issues.add('options', 0, `The site's time zone "${options.timezone}" is not a known IANA time zone name (such as Europe/Berlin); correct the site first.`);
+  if (clock === null)
+    issues.add(
+      'options',
+      0,
+      `The site's time zone "${options.timezone}" is not a known IANA time zone name (such as Europe/Berlin); correct the site first.`,
+    );
   return issues.count === 0 ? clock : null;
 }
 
@@ -73,7 +80,8 @@ function failure(issues: IssueList): ParseProfileResult {
 }
 
 export function parseProfileCsv(text: string, options: ParseProfileOptions): ParseProfileResult {
-  const maxIssues = options.maxIssues !== undefined && options.maxIssues >= 1 ? Math.floor(options.maxIssues) : DEFAULT_MAX_ISSUES;
+  const maxIssues =
+    options.maxIssues !== undefined && options.maxIssues >= 1 ? Math.floor(options.maxIssues) : DEFAULT_MAX_ISSUES;
   const issues = new IssueList(maxIssues);
   const intervalEnding = options.intervalEnding ?? false;
   const fillGaps = options.fillGaps ?? false;
@@ -86,15 +94,27 @@ export function parseProfileCsv(text: string, options: ParseProfileOptions): Par
   const { header } = table;
   const headerCells = header.fields;
   if (headerCells.some((cell) => parseTimestamp(cell).ok)) {
-    issues.add('structure', header.line, `Line ${header.line} holds data, not column names: the file needs a header row. Add a first line such as time${table.delimiter}value.`);
+    issues.add(
+      'structure',
+      header.line,
+      `Line ${header.line} holds data, not column names: the file needs a header row. Add a first line such as time${table.delimiter}value.`,
+    );
     return failure(issues);
   }
   if (headerCells.length < 2) {
-    issues.add('structure', header.line, `Line ${header.line} has a single column "${headerCells[0] ?? ''}"; a profile needs a time column and a value column separated by a comma or a semicolon${headerCells[0]?.includes('\t') ? ' (tabs are not accepted)' : ''}.`);
+    issues.add(
+      'structure',
+      header.line,
+      `Line ${header.line} has a single column "${headerCells[0] ?? ''}"; a profile needs a time column and a value column separated by a comma or a semicolon${headerCells[0]?.includes('\t') ? ' (tabs are not accepted)' : ''}.`,
+    );
     return failure(issues);
   }
   if (table.rows.length === 0) {
-    issues.add('structure', header.line, `The file has a header row (line ${header.line}) but no data rows. Add one row per interval below the header.`);
+    issues.add(
+      'structure',
+      header.line,
+      `The file has a header row (line ${header.line}) but no data rows. Add one row per interval below the header.`,
+    );
     return failure(issues);
   }
 
@@ -125,7 +145,11 @@ export function parseProfileCsv(text: string, options: ParseProfileOptions): Par
     if (!Number.isNaN(values[end])) continue;
     const row = timed.rows.find((r) => r.ms === series.firstMs + end * stepMinutes * 60_000);
     const line = row?.line ?? header.line + 1;
-    issues.add('gap', line, `Line ${line}: the ${end === 0 ? 'first' : 'last'} value is empty; gap filling needs a value before and after each missing interval. Enter a number on this line.`);
+    issues.add(
+      'gap',
+      line,
+      `Line ${line}: the ${end === 0 ? 'first' : 'last'} value is empty; gap filling needs a value before and after each missing interval. Enter a number on this line.`,
+    );
   }
   if (issues.count > 0) return failure(issues);
 

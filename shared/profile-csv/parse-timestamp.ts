@@ -68,9 +68,7 @@ export function parseTimestamp(cell: string): TimestampReading {
   }
 
   const wallMs =
-    Date.UTC(year, month - 1, day, endOfDay ? 0 : hour, minute, second) +
-    Math.round(fraction * 1000) +
-    (endOfDay ? DAY_MS : 0);
+    Date.UTC(year, month - 1, day, endOfDay ? 0 : hour, minute, second) + Math.round(fraction * 1000) + (endOfDay ? DAY_MS : 0);
   return { ok: true, wallMs, offsetMinutes };
 }
 

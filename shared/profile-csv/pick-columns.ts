@@ -15,7 +15,14 @@ export interface ColumnChoice {
 }
 
 const TIME_WORDS: Readonly<Record<string, number>> = {
-  timestamp: 3, datetime: 3, time: 2, ts: 2, date: 1, utc: 1, interval: 1, period: 1,
+  timestamp: 3,
+  datetime: 3,
+  time: 2,
+  ts: 2,
+  date: 1,
+  utc: 1,
+  interval: 1,
+  period: 1,
 };
 const START_WORDS = ['start', 'begin', 'beginning', 'from'];
 const END_WORDS = ['end', 'ending', 'to'];
@@ -28,7 +35,10 @@ const KIND_WORDS: Readonly<Record<ProfileKind, readonly string[]>> = {
 const VALUE_WORDS = ['value', 'values', 'power', 'energy', 'kw', 'mw', 'kwh', 'mwh', 'currency', 'eur', 'usd', 'gbp'];
 
 function words(header: string): string[] {
-  return header.toLowerCase().split(/[^a-z0-9]+/).filter((w) => w !== '');
+  return header
+    .toLowerCase()
+    .split(/[^a-z0-9]+/)
+    .filter((w) => w !== '');
 }
 
 function timeScore(header: string, intervalEnding: boolean): number {

@@ -32,7 +32,9 @@ export function describeProfile(f: ProfileFacts): string[] {
   const zone = f.clock.timeZone;
   const notes: string[] = [];
   const semicolon = f.table.delimiter === ';';
-  notes.push(`Read as ${semicolon ? 'semicolon' : 'comma'}-separated values${semicolon ? ' (a decimal comma is read as a decimal point)' : ''}.`);
+  notes.push(
+    `Read as ${semicolon ? 'semicolon' : 'comma'}-separated values${semicolon ? ' (a decimal comma is read as a decimal point)' : ''}.`,
+  );
   if (f.table.hadByteOrderMark) notes.push('A byte order mark at the start of the file was ignored.');
   notes.push(f.columns.note);
   if (f.columns.ignored.length > 0) notes.push(`Ignored columns: ${f.columns.ignored.map((c) => `"${c}"`).join(', ')}.`);
@@ -41,18 +43,27 @@ export function describeProfile(f: ProfileFacts): string[] {
   if (f.timed.localTimes > 0) notes.push(`Times have no UTC offset and were read as local times in ${zone}.`);
   const foreign = f.timed.foreignOffset;
   if (foreign) {
-    notes.push(`${plural(f.timed.foreignOffsetRows, 'row')} carry a UTC offset other than ${zone}'s (first on line ${foreign.line}: ${formatOffset(foreign.offset)} where ${zone} is at ${formatOffset(foreign.zoneOffset)}); they were read as the instants they state.`);
+    notes.push(
+      `${plural(f.timed.foreignOffsetRows, 'row')} carry a UTC offset other than ${zone}'s (first on line ${foreign.line}: ${formatOffset(foreign.offset)} where ${zone} is at ${formatOffset(foreign.zoneOffset)}); they were read as the instants they state.`,
+    );
   }
 
   const stepMs = f.stepMinutes * 60_000;
   const endMs = f.startMs + f.values.length * stepMs;
-  notes.push(`${plural(f.values.length, 'interval')} of ${describeDuration(stepMs)} from ${formatInstant(f.startMs, f.clock)} to ${formatInstant(endMs, f.clock)}.`);
+  notes.push(
+    `${plural(f.values.length, 'interval')} of ${describeDuration(stepMs)} from ${formatInstant(f.startMs, f.clock)} to ${formatInstant(endMs, f.clock)}.`,
+  );
   const timeHeader = f.table.header.fields[f.columns.timeColumn] ?? '';
-  if (f.intervalEnding) notes.push(`Times mark the end of each interval; each was moved back by ${describeDuration(stepMs)} to the interval's start.`);
+  if (f.intervalEnding)
+    notes.push(
+      `Times mark the end of each interval; each was moved back by ${describeDuration(stepMs)} to the interval's start.`,
+    );
   else {
     notes.push('Times mark the start of each interval.');
     if (/\bend(ing)?\b/i.test(timeHeader)) {
-      notes.push(`The time column "${timeHeader}" is named like an interval end: if its times mark the end of each interval, upload again with interval-ending labels.`);
+      notes.push(
+        `The time column "${timeHeader}" is named like an interval end: if its times mark the end of each interval, upload again with interval-ending labels.`,
+      );
     }
   }
 
@@ -63,7 +74,9 @@ export function describeProfile(f: ProfileFacts): string[] {
   } else if (factor !== 1) notes.push(`Converted ${f.unit} to ${canonical} (×${factor}).`);
 
   if (f.filledIndexes.length > 0) {
-    notes.push(`Filled ${plural(f.filledIndexes.length, 'missing interval')} by linear interpolation between neighbours (indexes ${describeIndexRuns(f.filledIndexes)}).`);
+    notes.push(
+      `Filled ${plural(f.filledIndexes.length, 'missing interval')} by linear interpolation between neighbours (indexes ${describeIndexRuns(f.filledIndexes)}).`,
+    );
   }
   const negatives = f.values.filter((v) => v < 0).length;
   if (negatives > 0) {

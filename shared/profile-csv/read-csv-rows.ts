@@ -34,7 +34,11 @@ export function readCsvRows(input: string, issues: IssueList): CsvTable | null {
   if (binaryAt >= 0) {
     const line = lineOfOffset(text, binaryAt);
     const what = text.charCodeAt(binaryAt) === 0xfffd ? 'bytes that are not valid UTF-8 text' : 'control bytes (such as NUL)';
-    issues.add('file', line, `Line ${line} contains ${what}: this is not a CSV text file (a spreadsheet, archive or UTF-16 file renamed .csv?). Save the data as CSV (UTF-8).`);
+    issues.add(
+      'file',
+      line,
+      `Line ${line} contains ${what}: this is not a CSV text file (a spreadsheet, archive or UTF-16 file renamed .csv?). Save the data as CSV (UTF-8).`,
+    );
     return null;
   }
 
@@ -66,7 +70,11 @@ export function readCsvRows(input: string, issues: IssueList): CsvTable | null {
   for (const error of parsed.errors) {
     const at = error.row === undefined ? 1 : (lineOfRow[error.row] ?? 1);
     if (error.type === 'Quotes') {
-      issues.add('structure', at, `Line ${at} has a quoted field whose quotes do not match (${error.message}). Close each opening " with a closing one, and write a quote inside a quoted field as "".`);
+      issues.add(
+        'structure',
+        at,
+        `Line ${at} has a quoted field whose quotes do not match (${error.message}). Close each opening " with a closing one, and write a quote inside a quoted field as "".`,
+      );
     }
   }
 

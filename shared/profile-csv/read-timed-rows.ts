@@ -50,7 +50,11 @@ export function readTimedRows(csvRows: readonly CsvRow[], ctx: TimedRowsContext,
   for (const { line, fields } of csvRows) {
     const timeText = fields[ctx.timeColumn] ?? '';
     if (fields.length <= Math.max(ctx.timeColumn, ctx.valueColumn)) {
-      issues.add('structure', line, `Line ${line} has ${fields.length} field${fields.length === 1 ? '' : 's'} but the header has ${ctx.columnCount}. Give every row a time and a value, separated like the header.`);
+      issues.add(
+        'structure',
+        line,
+        `Line ${line} has ${fields.length} field${fields.length === 1 ? '' : 's'} but the header has ${ctx.columnCount}. Give every row a time and a value, separated like the header.`,
+      );
       rows.push({ line, ms: Number.NaN, value: Number.NaN, timeText });
       continue;
     }
@@ -58,12 +62,20 @@ export function readTimedRows(csvRows: readonly CsvRow[], ctx: TimedRowsContext,
     let ms = Number.NaN;
     const time = parseTimestamp(timeText);
     if (!time.ok) {
-      issues.add('time', line, `Line ${line}: ${time.reason}. Write the time like 2026-01-01T00:00:00+01:00, or 2026-01-01T00:00 for local time in ${zone}.`);
+      issues.add(
+        'time',
+        line,
+        `Line ${line}: ${time.reason}. Write the time like 2026-01-01T00:00:00+01:00, or 2026-01-01T00:00 for local time in ${zone}.`,
+      );
     } else {
       const hasOffset = time.offsetMinutes !== null;
       if (firstStyle === null) firstStyle = { line, offset: hasOffset };
       else if (firstStyle.offset !== hasOffset) {
-        issues.add('offset', line, `Line ${line}: ${timeText} has ${hasOffset ? 'a UTC offset' : 'no UTC offset'} but line ${firstStyle.line} ${firstStyle.offset ? 'has one' : 'has none'}. Write every time with its offset, or every time without one (local time in ${zone}).`);
+        issues.add(
+          'offset',
+          line,
+          `Line ${line}: ${timeText} has ${hasOffset ? 'a UTC offset' : 'no UTC offset'} but line ${firstStyle.line} ${firstStyle.offset ? 'has one' : 'has none'}. Write every time with its offset, or every time without one (local time in ${zone}).`,
+        );
       }
       if (time.offsetMinutes !== null) {
         withOffset += 1;
@@ -77,8 +89,13 @@ export function readTimedRows(csvRows: readonly CsvRow[], ctx: TimedRowsContext,
           // A change is explained only when the site's zone changes by the same amount in between.
           const zoneBefore = clock.offsetAt(prevOffsetRow.ms);
           if (time.offsetMinutes - prevOffsetRow.offset !== zoneOffset - zoneBefore) {
-            const zoneSays = zoneBefore === zoneOffset ? `stays at ${utc(zoneOffset)}` : `goes from ${utc(zoneBefore)} to ${utc(zoneOffset)}`;
-            issues.add('offset', line, `Line ${line}: the UTC offset jumps from ${formatOffset(prevOffsetRow.offset)} (line ${prevOffsetRow.line}) to ${formatOffset(time.offsetMinutes)}, but ${zone} ${zoneSays} between these times. Check the times around this line; use one offset throughout or the offsets of ${zone}.`);
+            const zoneSays =
+              zoneBefore === zoneOffset ? `stays at ${utc(zoneOffset)}` : `goes from ${utc(zoneBefore)} to ${utc(zoneOffset)}`;
+            issues.add(
+              'offset',
+              line,
+              `Line ${line}: the UTC offset jumps from ${formatOffset(prevOffsetRow.offset)} (line ${prevOffsetRow.line}) to ${formatOffset(time.offsetMinutes)}, but ${zone} ${zoneSays} between these times. Check the times around this line; use one offset throughout or the offsets of ${zone}.`,
+            );
           }
         }
         prevOffsetRow = { line, ms, offset: time.offsetMinutes };
@@ -89,9 +106,17 @@ export function readTimedRows(csvRows: readonly CsvRow[], ctx: TimedRowsContext,
         const after = clock.offsetAt(time.wallMs + 15 * HOUR_MS);
         if (instants.length === 1) ms = instants[0] as number;
         else if (instants.length === 0) {
-          issues.add('local-time', line, `Line ${line}: ${timeText} does not exist in ${zone}: the clocks jump forward that night (${utc(before)} to ${utc(after)}). Remove the row, or write every time with its UTC offset.`);
+          issues.add(
+            'local-time',
+            line,
+            `Line ${line}: ${timeText} does not exist in ${zone}: the clocks jump forward that night (${utc(before)} to ${utc(after)}). Remove the row, or write every time with its UTC offset.`,
+          );
         } else {
-          issues.add('local-time', line, `Line ${line}: ${timeText} happens twice in ${zone} (the clocks go back from ${utc(before)} to ${utc(after)} that night), so it is ambiguous. Write every time with its UTC offset, e.g. ${timeText}${formatOffset(before)} for the first and ${timeText}${formatOffset(after)} for the second.`);
+          issues.add(
+            'local-time',
+            line,
+            `Line ${line}: ${timeText} happens twice in ${zone} (the clocks go back from ${utc(before)} to ${utc(after)} that night), so it is ambiguous. Write every time with its UTC offset, e.g. ${timeText}${formatOffset(before)} for the first and ${timeText}${formatOffset(after)} for the second.`,
+          );
         }
       }
     }
@@ -101,9 +126,17 @@ export function readTimedRows(csvRows: readonly CsvRow[], ctx: TimedRowsContext,
     if (reading.ok) value = reading.value;
     else if (reading.blank && ctx.fillGaps) blankLines.push(line);
     else if (reading.blank) {
-      issues.add('number', line, `Line ${line}: the value in "${ctx.valueHeader}" is empty. Enter a number, or upload with gap filling turned on to interpolate it.`);
+      issues.add(
+        'number',
+        line,
+        `Line ${line}: the value in "${ctx.valueHeader}" is empty. Enter a number, or upload with gap filling turned on to interpolate it.`,
+      );
     } else {
-      issues.add('number', line, `Line ${line}: ${reading.reason} in "${ctx.valueHeader}". Write a plain number such as -12.5${ctx.decimalComma ? ' or -12,5' : ''}.`);
+      issues.add(
+        'number',
+        line,
+        `Line ${line}: ${reading.reason} in "${ctx.valueHeader}". Write a plain number such as -12.5${ctx.decimalComma ? ' or -12,5' : ''}.`,
+      );
     }
     rows.push({ line, ms, value, timeText });
   }
