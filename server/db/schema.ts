@@ -3,3 +3,9 @@
  * Each module owns its tables in `server/<module>/<module>.schema.ts`.
  */
 export * from '../audit/audit.schema';
+export * from '../sites/sites.schema';
+export * from '../batteries/batteries.schema';
+export * from '../profiles/profiles.schema';
+export * from '../users/users.schema';
+export * from '../auth/auth.schema';
+export * from '../mail/mail.schema';
