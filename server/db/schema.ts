@@ -9,3 +9,6 @@ export * from '../profiles/profiles.schema';
 export * from '../users/users.schema';
 export * from '../auth/auth.schema';
 export * from '../mail/mail.schema';
+export * from '../jobs/jobs.schema';
+export * from '../plans/plans.schema';
+export * from '../studies/studies.schema';
