@@ -12,3 +12,4 @@ export * from '../mail/mail.schema';
 export * from '../jobs/jobs.schema';
 export * from '../plans/plans.schema';
 export * from '../studies/studies.schema';
+export * from '../sign-off/sign-off.schema';
