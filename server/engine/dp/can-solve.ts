@@ -13,6 +13,9 @@ export type DpEligibility = { ok: true } | { ok: false; reason: string };
  * negative prices, every terminal rule) is exact.
  */
 export function canSolveWithDp(problem: DispatchProblem): DpEligibility {
+  if (problem.freeInitialEnergy === true) {
+    return { ok: false, reason: 'a free initial SoC (the steady cycle) makes the start a decision; the LP path solves it' };
+  }
   const demand = problem.site.demandChargePerKw;
   if (demand !== null && demand !== 0) {
     return { ok: false, reason: `a demand charge (${demand} per kW) couples all steps through the peak import; the LP path solves it` };

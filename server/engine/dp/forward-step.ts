@@ -21,27 +21,6 @@ export function newForwardStepResult(): ForwardStepResult {
   return { y: 0, u: 0, c: 0, d: 0, wLeft: 0, wRight: 0, hLeft: 0, hRight: 0 };
 }
 
-// Walk pointers shared by the helpers below (module state keeps the step allocation-free).
-let j = 0;
-let pw = 0;
-let k = 0;
-
-function locate(store: ValueStore, w: number, st: StageTable, base: number, kSeg: number, z: number, y: number): void {
-  const nW = store.count[w] ?? 0;
-  const o = w * store.cap;
-  const hiW = store.hi[w] ?? 0;
-  j = 0;
-  pw = store.lo[w] ?? 0;
-  while (j < nW) {
-    const end = j === nW - 1 ? hiW : pw + (store.len[o + j] ?? 0);
-    if (end > y) break;
-    pw = end;
-    j++;
-  }
-  k = 0;
-  while (k < kSeg && z + (st.u[base + k + 1] ?? 0) <= y) k++;
-}
-
 /**
  * Chooses e_{t+1} = y minimising V_{t+1}(y) + h_t(y − z), z = a·e_t, by walking
  * the breakpoints of both convex functions until the right slope of the sum
@@ -66,19 +45,29 @@ export function forwardStep(
   const yMax = z + (su[base + kSeg] ?? 0);
   let yL = wLo > yMin ? wLo : yMin;
   const yR = wHi < yMax ? wHi : yMax;
-  let y: number;
+  let y = yL;
   if (yL > yR) {
     if (yL - yR > tol) return false;
     // Within rounding: keep the window/terminal bound exact, the power bound absorbs it.
     y = wLo > yMax ? wLo : wHi;
-    locate(store, w, st, base, kSeg, z, y);
-  } else {
-    y = yL;
-    locate(store, w, st, base, kSeg, z, y);
+  }
+  // Locate y: W segment j starting at pw, stage segment k.
+  const len = store.len;
+  let j = 0;
+  let pw = wLo;
+  while (j < nW) {
+    const end = j === nW - 1 ? wHi : pw + (len[o + j] ?? 0);
+    if (end > y) break;
+    pw = end;
+    j++;
+  }
+  let k = 0;
+  while (k < kSeg && z + (su[base + k + 1] ?? 0) <= y) k++;
+  if (yL <= yR) {
     for (;;) {
       const g = (j < nW ? (sl[o + j] ?? 0) : Infinity) + (k < kSeg ? (ss[base + k] ?? 0) : Infinity);
       if (g >= 0 || y >= yR) break;
-      const endW = j < nW ? (j === nW - 1 ? wHi : pw + (store.len[o + j] ?? 0)) : Infinity;
+      const endW = j < nW ? (j === nW - 1 ? wHi : pw + (len[o + j] ?? 0)) : Infinity;
       const endS = k < kSeg ? z + (su[base + k + 1] ?? 0) : Infinity;
       let next = endW < endS ? endW : endS;
       if (next > yR) next = yR;
@@ -91,7 +80,7 @@ export function forwardStep(
       // Flat minimum: walk to its end, then take the point nearest to idling.
       const y0 = y;
       for (;;) {
-        const endW = j < nW ? (j === nW - 1 ? wHi : pw + (store.len[o + j] ?? 0)) : Infinity;
+        const endW = j < nW ? (j === nW - 1 ? wHi : pw + (len[o + j] ?? 0)) : Infinity;
         const endS = k < kSeg ? z + (su[base + k + 1] ?? 0) : Infinity;
         let next = endW < endS ? endW : endS;
         if (next > yR) next = yR;
@@ -102,10 +91,19 @@ export function forwardStep(
         if (g2 !== 0 || y >= yR || y >= z) break;
       }
       if (y > z) {
-        y = z;
-        locate(store, w, st, base, kSeg, z, y);
+        // Idling lies inside the flat minimum: relocate there.
+        y = z > y0 ? z : y0;
+        j = 0;
+        pw = wLo;
+        while (j < nW) {
+          const end = j === nW - 1 ? wHi : pw + (len[o + j] ?? 0);
+          if (end > y) break;
+          pw = end;
+          j++;
+        }
+        k = 0;
+        while (k < kSeg && z + (su[base + k + 1] ?? 0) <= y) k++;
       }
-      if (y < y0) y = y0;
     }
   }
   // Slopes of V_{t+1} at y.

@@ -1,6 +1,7 @@
 import type { DispatchProblem, DispatchSolution, SolveStatus } from '../types';
 import { canSolveWithDp, checkDpInput } from './can-solve';
-import { makeContext, terminalValue, type DpContext } from './context';
+import { makeContext, terminalValue } from './context';
+import { PlanSeries } from './plan-series';
 import type { StageTable } from './stage-cost';
 import { DpValueFunctions } from './value-functions';
 import { WindowSolver } from './window-solver';
@@ -52,57 +53,13 @@ export function solveDispatchDp(problem: DispatchProblem, options: DpSolveOption
   const solver = new WindowSolver(ctx, n);
   const failure = solver.solveWindow(0, n, problem.initialEnergyKwh, problem.terminal, n, false);
   if (failure !== null) return emptyDpSolution('infeasible', failure);
-  const sol = collectSolution(ctx, solver, 0, n, problem.initialEnergyKwh, options.intervals === true);
+  const series = new PlanSeries(n);
+  series.copyFrom(solver, 0, n, 0);
+  const sol = series.toSolution(problem, 0, problem.initialEnergyKwh, options.intervals === true);
   const endE = sol.socKwh[n] ?? 0;
   return {
     ...sol,
     objective: sol.cost - terminalValue(problem.terminal, endE),
     ...(options.keepValueFunctions === true ? { valueFunctions: new DpValueFunctions(ctx, solver, 0, n) } : {}),
-  };
-}
-
-/** Reads the plan of steps [from, to) out of the solver's ring into plain arrays. */
-export function collectSolution(
-  ctx: DpContext, solver: WindowSolver, from: number, to: number, e0: number, intervals: boolean,
-): DpSolution & { objective: number } {
-  const p = ctx.problem;
-  const len = to - from;
-  const chargeKw = new Array<number>(len);
-  const dischargeKw = new Array<number>(len);
-  const gridImportKw = new Array<number>(len);
-  const gridExportKw = new Array<number>(len);
-  const socKwh = new Array<number>(len + 1);
-  const value = new Array<number>(len);
-  const low = intervals ? new Array<number>(len) : [];
-  const high = intervals ? new Array<number>(len) : [];
-  socKwh[0] = e0;
-  const plan = solver.plan;
-  const scale = p.stepHours / 1000;
-  const deg = p.battery.degradationCostPerMwh;
-  let cost = 0;
-  let peak = 0;
-  for (let i = 0; i < len; i++) {
-    const t = from + i;
-    const r = solver.ringIndex(t);
-    const m = plan.m[r] ?? 0;
-    const x = plan.x[r] ?? 0;
-    const d = plan.d[r] ?? 0;
-    chargeKw[i] = plan.c[r] ?? 0;
-    dischargeKw[i] = d;
-    gridImportKw[i] = m;
-    gridExportKw[i] = x;
-    socKwh[i + 1] = plan.y[r] ?? 0;
-    value[i] = plan.value[r] ?? 0;
-    if (intervals) {
-      low[i] = plan.rangeLo[r] ?? 0;
-      high[i] = plan.rangeHi[r] ?? 0;
-    }
-    cost += ((p.priceImport[t] ?? 0) * m - (p.priceExport[t] ?? 0) * x + deg * d) * scale;
-    if (m > peak) peak = m;
-  }
-  return {
-    status: 'optimal', method: 'dp', objective: cost, cost, chargeKw, dischargeKw, gridImportKw, gridExportKw, socKwh,
-    storedEnergyValue: value, peakImportKw: peak,
-    ...(intervals ? { storedEnergyValueRange: { low, high } } : {}),
   };
 }

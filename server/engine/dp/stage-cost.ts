@@ -32,219 +32,249 @@ const MAX_POINTS = 16;
 export function buildStageTable(problem: DispatchProblem): StageTable {
   const n = problem.priceImport.length;
   const b = problem.battery;
-  const dt = problem.stepHours;
-  const off = new Int32Array(n + 1);
-  const cap = n * MAX_POINTS;
-  const u = new Float64Array(cap);
-  const h = new Float64Array(cap);
-  const c = new Float64Array(cap);
-  const d = new Float64Array(cap);
-  const slope = new Float64Array(cap);
-  const netLoadKw = new Float64Array(n);
-  const ctx = makeStepContext(b.powerChargeKw, b.powerDischargeKw, b.efficiencyCharge, b.efficiencyDischarge, dt, b.degradationCostPerMwh / 1000);
+  const x = new StageBuilder(n, b.powerChargeKw, b.powerDischargeKw, b.efficiencyCharge, b.efficiencyDischarge, problem.stepHours, b.degradationCostPerMwh / 1000);
   const importLimit = problem.site.importLimitKw ?? Infinity;
   const exportLimit = problem.site.exportLimitKw ?? Infinity;
-  let at = 0;
+  const { off, netLoadKw } = x;
   for (let t = 0; t < n; t++) {
-    off[t] = at;
+    off[t] = x.at;
     const net = (problem.loadKw[t] ?? 0) - (problem.generationKw[t] ?? 0);
     netLoadKw[t] = net;
-    ctx.net = net;
-    ctx.pImp = (problem.priceImport[t] ?? NaN) / 1000;
-    ctx.pExp = (problem.priceExport[t] ?? NaN) / 1000;
-    ctx.pLo = -exportLimit - net;
-    ctx.pHi = importLimit - net;
-    at += stepPoints(ctx, u, h, c, d, slope, at);
+    x.net = net;
+    x.pImp = (problem.priceImport[t] ?? NaN) / 1000;
+    x.pExp = (problem.priceExport[t] ?? NaN) / 1000;
+    x.pLo = -exportLimit - net;
+    x.pHi = importLimit - net;
+    x.step();
   }
-  off[n] = at;
-  return { steps: n, off, u, h, c, d, slope, netLoadKw };
-}
-
-interface StepContext {
-  readonly pc: number;
-  readonly pd: number;
-  readonly etaC: number;
-  readonly etaD: number;
-  readonly dt: number;
-  readonly deg: number;
-  /** κ = 1/(η_ch·η_dis) − 1: extra site power per kW of simultaneous discharge at fixed u. */
-  readonly kappa: number;
-  net: number;
-  pImp: number;
-  pExp: number;
-  /** Bounds on c − d from the grid limits (kW). */
-  pLo: number;
-  pHi: number;
-  readonly candC: Float64Array;
-  readonly candD: Float64Array;
-  readonly candU: Float64Array;
-  readonly order: Int32Array;
-}
-
-function makeStepContext(pc: number, pd: number, etaC: number, etaD: number, dt: number, deg: number): StepContext {
+  off[n] = x.at;
+  const used = x.at;
   return {
-    pc, pd, etaC, etaD, dt, deg,
-    kappa: 1 / (etaC * etaD) - 1,
-    net: 0, pImp: 0, pExp: 0, pLo: -Infinity, pHi: Infinity,
-    candC: new Float64Array(MAX_POINTS),
-    candD: new Float64Array(MAX_POINTS),
-    candU: new Float64Array(MAX_POINTS),
-    order: new Int32Array(MAX_POINTS),
+    steps: n, off, u: x.u.subarray(0, used), h: x.h.subarray(0, used), c: x.c.subarray(0, used), d: x.d.subarray(0, used),
+    slope: x.slope.subarray(0, used), netLoadKw,
   };
 }
 
-/** Money paid in the step (currency) for charge c and discharge d (kW). */
-function moneyAt(x: StepContext, c: number, d: number): number {
-  const q = x.net + c - d;
-  return x.dt * ((q > 0 ? x.pImp : x.pExp) * q + x.deg * d);
-}
+/** Builds the points step by step into preallocated typed arrays (no allocation per step). */
+class StageBuilder {
+  readonly off: Int32Array;
+  u: Float64Array;
+  h: Float64Array;
+  c: Float64Array;
+  d: Float64Array;
+  slope: Float64Array;
+  readonly netLoadKw: Float64Array;
+  /** κ = 1/(η_ch·η_dis) − 1: extra site power per kW of simultaneous discharge at fixed u. */
+  private readonly kappa: number;
+  private readonly uScale: number;
+  private readonly tolP: number;
+  private readonly candC = new Float64Array(MAX_POINTS);
+  private readonly candD = new Float64Array(MAX_POINTS);
+  private readonly candU = new Float64Array(MAX_POINTS);
+  private readonly order = new Int32Array(MAX_POINTS);
+  private nCand = 0;
+  at = 0;
+  /** Points of the current step so far. */
+  private m = 0;
+  net = 0;
+  pImp = 0;
+  pExp = 0;
+  /** Bounds on c − d from the grid limits (kW). */
+  pLo = -Infinity;
+  pHi = Infinity;
+  private bestC = 0;
+  private bestD = 0;
 
-/** Writes the points of one step at `at`; returns how many. */
-function stepPoints(
-  x: StepContext, u: Float64Array, h: Float64Array, c: Float64Array, d: Float64Array, slope: Float64Array, at: number,
-): number {
-  // Fast path: grid limits never bind and burning energy through simultaneous
-  // charge and discharge never pays (κ·p_exp + c_deg ≥ 0, the cheapest site
-  // price times the extra site power it causes, plus wear): the optimum lies
-  // on the no-waste path c·d = 0, whose kinks are the power limits and q = 0.
-  const limitsSlack = -x.pd >= x.pLo && x.pc <= x.pHi;
-  const noWaste = x.kappa > 0 ? x.kappa * Math.min(x.pExp, x.pImp) + x.deg >= 0 : x.deg >= 0;
-  let count: number;
-  if (limitsSlack && noWaste) count = noWastePoints(x);
-  else count = vertexPoints(x);
-  if (count === 0) return 0;
-  // Evaluate, drop near-duplicates and collinear middles (keeps slopes strictly increasing).
-  let m = 0;
-  const uScale = x.dt * (x.pc * x.etaC + x.pd / x.etaD) + 1e-300;
-  for (let i = 0; i < count; i++) {
-    const k = x.order[i] ?? 0;
-    const uk = x.candU[k] ?? 0;
-    if (m > 0 && uk - (u[at + m - 1] ?? 0) <= 1e-13 * uScale) continue;
-    let ck = x.candC[k] ?? 0;
-    let dk = x.candD[k] ?? 0;
-    if (!limitsSlack || !noWaste) {
-      const best = bestSplit(x, uk);
-      if (best < 0) continue;
-      ck = bestC;
-      dk = bestD;
+  constructor(
+    n: number,
+    private readonly pc: number,
+    private readonly pd: number,
+    private readonly etaC: number,
+    private readonly etaD: number,
+    private readonly dt: number,
+    private readonly deg: number,
+  ) {
+    this.off = new Int32Array(n + 1);
+    // Most steps have at most five points (the no-waste path); grow when not.
+    const cap = n * 5 + MAX_POINTS;
+    this.u = new Float64Array(cap);
+    this.h = new Float64Array(cap);
+    this.c = new Float64Array(cap);
+    this.d = new Float64Array(cap);
+    this.slope = new Float64Array(cap);
+    this.netLoadKw = new Float64Array(n);
+    this.kappa = 1 / (etaC * etaD) - 1;
+    this.uScale = dt * (pc * etaC + pd / etaD) + 1e-300;
+    this.tolP = 1e-12 * (pc + pd + 1);
+  }
+
+  /** Money paid in the step (currency) for charge c and discharge d (kW). */
+  private money(c: number, d: number): number {
+    const q = this.net + c - d;
+    return this.dt * ((q > 0 ? this.pImp : this.pExp) * q + this.deg * d);
+  }
+
+  private grow(): void {
+    const cap = this.u.length * 2;
+    const more = (a: Float64Array): Float64Array => {
+      const b = new Float64Array(cap);
+      b.set(a);
+      return b;
+    };
+    this.u = more(this.u);
+    this.h = more(this.h);
+    this.c = more(this.c);
+    this.d = more(this.d);
+    this.slope = more(this.slope);
+  }
+
+  step(): void {
+    this.m = 0;
+    if (this.at + MAX_POINTS > this.u.length) this.grow();
+    // Fast path: grid limits never bind and burning energy through simultaneous
+    // charge and discharge never pays (κ·p_exp + c_deg ≥ 0: the cheapest site
+    // price times the extra site power it causes, plus wear), so the optimum
+    // lies on the no-waste path c·d = 0, whose kinks are the power limits and
+    // the import/export switch q = 0.
+    const limitsSlack = -this.pd >= this.pLo && this.pc <= this.pHi;
+    const minPrice = this.pExp < this.pImp ? this.pExp : this.pImp;
+    const noWaste = this.kappa > 0 ? this.kappa * minPrice + this.deg >= 0 : this.deg >= 0;
+    if (limitsSlack && noWaste) {
+      const net = this.net;
+      this.add(0, this.pd);
+      if (net > 0 && net < this.pd) this.add(0, net);
+      this.add(0, 0);
+      if (-net > 0 && -net < this.pc) this.add(-net, 0);
+      this.add(this.pc, 0);
+    } else {
+      this.vertexCandidates();
+      for (let i = 0; i < this.nCand; i++) {
+        const k = this.order[i] ?? 0;
+        if (this.bestSplit(this.candU[k] ?? 0)) this.add(this.bestC, this.bestD);
+      }
     }
-    u[at + m] = uk;
-    c[at + m] = ck;
-    d[at + m] = dk;
-    h[at + m] = moneyAt(x, ck, dk);
-    m++;
-    // Remove the middle of three collinear points.
-    while (m >= 3) {
-      const i0 = at + m - 3, i1 = at + m - 2, i2 = at + m - 1;
+    const at = this.at;
+    for (let k = 0; k + 1 < this.m; k++) {
+      this.slope[at + k] = ((this.h[at + k + 1] ?? 0) - (this.h[at + k] ?? 0)) / ((this.u[at + k + 1] ?? 0) - (this.u[at + k] ?? 0));
+    }
+    this.at += this.m;
+  }
+
+  /**
+   * Appends the point (c, d) of ascending u; drops near-duplicates and the
+   * middle of three collinear points, which keeps slopes strictly increasing
+   * (h is convex, so a middle point on the chord adds nothing).
+   */
+  private add(cc: number, dd: number): void {
+    const { u, h, c, d } = this;
+    const uk = this.dt * (this.etaC * cc - dd / this.etaD);
+    const i = this.at + this.m;
+    if (this.m > 0 && uk - (u[i - 1] ?? 0) <= 1e-13 * this.uScale) return;
+    u[i] = uk;
+    c[i] = cc;
+    d[i] = dd;
+    h[i] = this.money(cc, dd);
+    this.m++;
+    while (this.m >= 3) {
+      const i2 = this.at + this.m - 1;
+      const i1 = i2 - 1;
+      const i0 = i2 - 2;
       const s01 = ((h[i1] ?? 0) - (h[i0] ?? 0)) / ((u[i1] ?? 0) - (u[i0] ?? 0));
       const s12 = ((h[i2] ?? 0) - (h[i1] ?? 0)) / ((u[i2] ?? 0) - (u[i1] ?? 0));
       if (s12 - s01 > 1e-12 * (Math.abs(s01) + Math.abs(s12) + 1e-9)) break;
-      u[i1] = u[i2] ?? 0; h[i1] = h[i2] ?? 0; c[i1] = c[i2] ?? 0; d[i1] = d[i2] ?? 0;
-      m--;
+      u[i1] = u[i2] ?? 0;
+      h[i1] = h[i2] ?? 0;
+      c[i1] = c[i2] ?? 0;
+      d[i1] = d[i2] ?? 0;
+      this.m--;
     }
   }
-  for (let k = 0; k + 1 < m; k++) {
-    slope[at + k] = ((h[at + k + 1] ?? 0) - (h[at + k] ?? 0)) / ((u[at + k + 1] ?? 0) - (u[at + k] ?? 0));
-  }
-  return m;
-}
 
-function pushCandidate(x: StepContext, i: number, cc: number, dd: number): number {
-  x.candC[i] = cc;
-  x.candD[i] = dd;
-  x.candU[i] = x.dt * (x.etaC * cc - dd / x.etaD);
-  return i + 1;
-}
-
-/** Points of the no-waste path: full discharge, the q = 0 kink, idle, the kink while charging, full charge. */
-function noWastePoints(x: StepContext): number {
-  let i = 0;
-  i = pushCandidate(x, i, 0, x.pd);
-  if (x.net > 0 && x.net < x.pd) i = pushCandidate(x, i, 0, x.net);
-  i = pushCandidate(x, i, 0, 0);
-  if (-x.net > 0 && -x.net < x.pc) i = pushCandidate(x, i, -x.net, 0);
-  i = pushCandidate(x, i, x.pc, 0);
-  for (let k = 0; k < i; k++) x.order[k] = k;
-  return i;
-}
-
-/**
- * All vertices of the box [0,P_ch]×[0,P_dis] cut by the grid-limit strip and
- * the q = 0 line: the value function of a parametric LP breaks only at
- * projections of such vertices, so these u values contain every kink of h.
- */
-function vertexPoints(x: StepContext): number {
-  const tolP = 1e-12 * (x.pc + x.pd + Math.abs(x.net) + 1);
-  let i = 0;
-  const consider = (cc: number, dd: number): void => {
-    if (cc < -tolP || cc > x.pc + tolP || dd < -tolP || dd > x.pd + tolP) return;
+  private consider(cc: number, dd: number): void {
+    const tol = this.tolP;
+    if (cc < -tol || cc > this.pc + tol || dd < -tol || dd > this.pd + tol) return;
     const p = cc - dd;
-    if (p < x.pLo - tolP || p > x.pHi + tolP) return;
-    i = pushCandidate(x, i, Math.min(Math.max(cc, 0), x.pc), Math.min(Math.max(dd, 0), x.pd));
-  };
-  consider(0, 0);
-  consider(x.pc, 0);
-  consider(0, x.pd);
-  consider(x.pc, x.pd);
-  const lines = [-x.net, x.pLo, x.pHi];
-  for (const r of lines) {
-    if (!Number.isFinite(r)) continue;
-    consider(0, -r);
-    consider(x.pc, x.pc - r);
-    consider(r, 0);
-    consider(r + x.pd, x.pd);
+    if (p < this.pLo - tol || p > this.pHi + tol) return;
+    const i = this.nCand++;
+    const c1 = cc < 0 ? 0 : cc > this.pc ? this.pc : cc;
+    const d1 = dd < 0 ? 0 : dd > this.pd ? this.pd : dd;
+    this.candC[i] = c1;
+    this.candD[i] = d1;
+    this.candU[i] = this.dt * (this.etaC * c1 - d1 / this.etaD);
   }
-  for (let k = 0; k < i; k++) x.order[k] = k;
-  // Insertion sort by u: at most 16 entries.
-  for (let k = 1; k < i; k++) {
-    const v = x.order[k] ?? 0;
-    const uv = x.candU[v] ?? 0;
-    let j = k - 1;
-    while (j >= 0 && (x.candU[x.order[j] ?? 0] ?? 0) > uv) {
-      x.order[j + 1] = x.order[j] ?? 0;
-      j--;
+
+  private considerLine(r: number): void {
+    if (!Number.isFinite(r)) return;
+    this.consider(0, -r);
+    this.consider(this.pc, this.pc - r);
+    this.consider(r, 0);
+    this.consider(r + this.pd, this.pd);
+  }
+
+  /**
+   * All vertices of the box [0,P_ch]×[0,P_dis] cut by the grid-limit strip and
+   * the q = 0 line, sorted by u: the value function of a parametric LP breaks
+   * only at projections of such vertices, so these contain every kink of h.
+   */
+  private vertexCandidates(): void {
+    this.nCand = 0;
+    this.consider(0, 0);
+    this.consider(this.pc, 0);
+    this.consider(0, this.pd);
+    this.consider(this.pc, this.pd);
+    this.considerLine(-this.net);
+    this.considerLine(this.pLo);
+    this.considerLine(this.pHi);
+    const { order, candU } = this;
+    for (let k = 0; k < this.nCand; k++) order[k] = k;
+    for (let k = 1; k < this.nCand; k++) {
+      const v = order[k] ?? 0;
+      const uv = candU[v] ?? 0;
+      let j = k - 1;
+      while (j >= 0 && (candU[order[j] ?? 0] ?? 0) > uv) {
+        order[j + 1] = order[j] ?? 0;
+        j--;
+      }
+      order[j + 1] = v;
     }
-    x.order[j + 1] = v;
   }
-  return i;
-}
 
-let bestC = 0;
-let bestD = 0;
+  private cOf(w: number, dd: number): number {
+    const cc = (w + dd / this.etaD) / this.etaC;
+    return cc < 0 ? 0 : cc > this.pc ? this.pc : cc;
+  }
 
-/**
- * Cheapest (c, d) with energy change u: on the line c = (u/Δt + d/η_dis)/η_ch the
- * money is convex piecewise linear in d with one kink (q = 0), so the minimum
- * is at an end of the feasible d-interval or at the kink. Ties prefer less
- * discharge (less throughput). Sets bestC/bestD; returns -1 when infeasible.
- */
-function bestSplit(x: StepContext, uk: number): number {
-  const w = uk / x.dt; // kW of net stored power
-  const base = w / x.etaC; // c − d when d = 0
-  let lo = Math.max(0, -w * x.etaD);
-  let hi = Math.min(x.pd, (x.pc * x.etaC - w) * x.etaD);
-  if (x.kappa > 0) {
-    lo = Math.max(lo, (x.pLo - base) / x.kappa);
-    hi = Math.min(hi, (x.pHi - base) / x.kappa);
+  /**
+   * Cheapest (c, d) with energy change uk: on the line c = (u/Δt + d/η_dis)/η_ch
+   * the money is convex piecewise linear in d with one kink (q = 0), so the
+   * minimum is at an end of the feasible d-interval or at the kink. Ties
+   * prefer less discharge (less throughput). Sets bestC/bestD; false when infeasible.
+   */
+  private bestSplit(uk: number): boolean {
+    const w = uk / this.dt;
+    const base = w / this.etaC;
+    let lo = Math.max(0, -w * this.etaD);
+    let hi = Math.min(this.pd, (this.pc * this.etaC - w) * this.etaD);
+    if (this.kappa > 0) {
+      lo = Math.max(lo, (this.pLo - base) / this.kappa);
+      hi = Math.min(hi, (this.pHi - base) / this.kappa);
+    }
+    if (lo > hi) {
+      if (lo - hi > 1e-9 * (this.pc + this.pd + 1)) return false;
+      lo = hi = (lo + hi) / 2;
+    }
+    let bd = lo;
+    let bm = this.money(this.cOf(w, lo), lo);
+    if (this.kappa > 0) {
+      const kink = (-this.net - base) / this.kappa;
+      if (kink > lo && kink < hi) {
+        const mk = this.money(this.cOf(w, kink), kink);
+        if (mk < bm) { bm = mk; bd = kink; }
+      }
+    }
+    if (hi > lo && this.money(this.cOf(w, hi), hi) < bm) bd = hi;
+    this.bestD = bd;
+    this.bestC = this.cOf(w, bd);
+    return true;
   }
-  const tol = 1e-9 * (x.pc + x.pd + 1);
-  if (lo > hi) {
-    if (lo - hi > tol) return -1;
-    lo = hi = (lo + hi) / 2;
-  }
-  const cOf = (dd: number): number => Math.min(Math.max((w + dd / x.etaD) / x.etaC, 0), x.pc);
-  let bd = lo;
-  let bm = moneyAt(x, cOf(lo), lo);
-  const tryD = (dd: number): void => {
-    const m = moneyAt(x, cOf(dd), dd);
-    if (m < bm) { bm = m; bd = dd; }
-  };
-  if (x.kappa > 0) {
-    const kink = (-x.net - base) / x.kappa;
-    if (kink > lo && kink < hi) tryD(kink);
-  }
-  if (hi > lo) tryD(hi);
-  bestD = bd;
-  bestC = cOf(bd);
-  return 0;
 }

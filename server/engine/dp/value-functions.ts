@@ -1,4 +1,5 @@
 import type { DpContext } from './context';
+import type { ValueStore } from './value-store';
 import type { WindowSolver } from './window-solver';
 
 /** One value function V_t on the SoC window: breakpoints (kWh) and the slope of each piece (currency/kWh). */
@@ -21,6 +22,15 @@ export class DpValueFunctions {
     readonly from: number,
     readonly to: number,
   ) {}
+
+  /** The value store and the slot of V_t in it (for exact comparisons). */
+  get store(): ValueStore {
+    return this.solver.store;
+  }
+
+  slot(t: number): number {
+    return this.solver.slotOf(t);
+  }
 
   /** V_t for from ≤ t ≤ to. */
   at(t: number): ValueFunctionShape {

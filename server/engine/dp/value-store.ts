@@ -15,7 +15,7 @@ export class ValueStore {
   len: Float64Array;
   slope: Float64Array;
 
-  constructor(slots: number, cap = 16) {
+  constructor(slots: number, cap = 8) {
     this.slots = slots;
     this.cap = cap;
     this.lo = new Float64Array(slots);
@@ -45,18 +45,7 @@ export class ValueStore {
 
   /** True when two slots hold the same shape bit for bit (value offsets may differ). */
   sameShape(a: number, b: number): boolean {
-    const n = this.count[a] ?? 0;
-    if (n !== this.count[b] || !sameBits(this.lo[a] ?? 0, this.lo[b] ?? 0) || !sameBits(this.hi[a] ?? 0, this.hi[b] ?? 0)) {
-      return false;
-    }
-    const len = this.len;
-    const slope = this.slope;
-    const oa = a * this.cap;
-    const ob = b * this.cap;
-    for (let i = 0; i < n; i++) {
-      if (!sameBits(len[oa + i] ?? 0, len[ob + i] ?? 0) || !sameBits(slope[oa + i] ?? 0, slope[ob + i] ?? 0)) return false;
-    }
-    return true;
+    return shapesEqual(this, a, this, b);
   }
 
   /** Copies slot `from` into slot `to`. */
@@ -91,4 +80,20 @@ export class ValueStore {
 /** Equality that also tells 0 from -0, so "same" means bit-identical results downstream. */
 export function sameBits(a: number, b: number): boolean {
   return a === b && (a !== 0 || 1 / a === 1 / b);
+}
+
+/** True when slot a of store sa and slot b of store sb hold the same shape bit for bit. */
+export function shapesEqual(sa: ValueStore, a: number, sb: ValueStore, b: number): boolean {
+  const n = sa.count[a] ?? 0;
+  if (n !== sb.count[b] || !sameBits(sa.lo[a] ?? 0, sb.lo[b] ?? 0) || !sameBits(sa.hi[a] ?? 0, sb.hi[b] ?? 0)) return false;
+  const la = sa.len;
+  const lb = sb.len;
+  const ka = sa.slope;
+  const kb = sb.slope;
+  const oa = a * sa.cap;
+  const ob = b * sb.cap;
+  for (let i = 0; i < n; i++) {
+    if (!sameBits(la[oa + i] ?? 0, lb[ob + i] ?? 0) || !sameBits(ka[oa + i] ?? 0, kb[ob + i] ?? 0)) return false;
+  }
+  return true;
 }
