@@ -1,0 +1,125 @@
+/**
+ * Accepting a profile upload: the server parses the bytes again with the same
+ * reader the browser preview used and is the authority. A rejected file answers
+ * 422 with every problem (up to the reader's cap) and stores nothing; an
+ * accepted one is stored with its original bytes, SHA-256 and uploader, and its
+ * audit row, in one transaction.
+ */
+import { createHash } from 'node:crypto';
+import { decodeProfileBytes, parseProfileCsv } from '@shared/profile-csv';
+import type { ProfileUploadOptions } from '@shared/schemas/profile-upload';
+import { insertAuditEvent } from '../audit/audit.repo';
+import { getDb } from '../db/client';
+import { AppError } from '../http/app-error';
+import { auditActor, type Actor } from '../sites/request-context';
+import { requireSite } from '../sites/sites.service';
+import * as repo from './profiles.repo';
+
+export interface UploadedFile {
+  originalname: string;
+  buffer: Buffer;
+}
+
+const ACCEPTED_EXTENSIONS = ['csv', 'txt'];
+
+/** The file's own name without any client path, control characters or excess length. */
+export function safeFilename(original: string): string {
+  const base = original.split(/[\\/]/).pop() ?? '';
+  const clean = base.replace(/[\u0000-\u001f\u007f"]/g, '').trim().slice(-200);
+  return clean === '' ? 'profile.csv' : clean;
+}
+
+function rejectUpload(message: string, issues: { line: number; message: string }[], hint: string): AppError {
+  return new AppError('invalid_profile', message, 422, issues, { hint });
+}
+
+function checkExtension(filename: string) {
+  const extension = /\.([^.]+)$/.exec(filename)?.[1]?.toLowerCase();
+  if (extension === undefined || !ACCEPTED_EXTENSIONS.includes(extension)) {
+    const message = `"${filename}" is not a CSV file: only .csv (or .txt) text files are accepted.`;
+    throw rejectUpload(message, [{ line: 0, message }], 'Nothing was stored. Export the data from your spreadsheet or system as CSV (UTF-8) and upload that file.');
+  }
+}
+
+function summarise(values: readonly number[]) {
+  let min = Infinity;
+  let max = -Infinity;
+  let sum = 0;
+  for (const v of values) {
+    if (v < min) min = v;
+    if (v > max) max = v;
+    sum += v;
+  }
+  return { minValue: min, maxValue: max, meanValue: sum / values.length };
+}
+
+export async function uploadProfile(
+  siteId: string,
+  file: UploadedFile | undefined,
+  options: ProfileUploadOptions & { name?: string | undefined },
+  actor: Actor,
+): Promise<string> {
+  const site = await requireSite(getDb(), siteId);
+  if (!file) {
+    const message = 'No file was attached: send the CSV in the form field "file".';
+    throw rejectUpload(message, [{ line: 0, message }], 'Nothing was stored. Choose a CSV file and upload again.');
+  }
+  const filename = safeFilename(file.originalname);
+  checkExtension(filename);
+
+  const parsed = parseProfileCsv(decodeProfileBytes(file.buffer), {
+    kind: options.kind,
+    unit: options.unit,
+    timezone: site.timezone,
+    intervalEnding: options.intervalEnding,
+    fillGaps: options.fillGaps,
+  });
+  if (!parsed.ok) {
+    const count = parsed.issues.length;
+    throw rejectUpload(`The file "${filename}" was not accepted: ${count} problem${count === 1 ? '' : 's'} listed by line.`, parsed.issues, parsed.hint);
+  }
+
+  const { profile } = parsed;
+  const sha256 = createHash('sha256').update(file.buffer).digest('hex');
+  const name = options.name ?? filename.replace(/\.[^.]+$/, '');
+  return getDb().transaction(async (tx) => {
+    const id = await repo.insertProfile(tx, {
+      siteId,
+      kind: options.kind,
+      name,
+      unit: profile.unit,
+      sourceUnit: options.unit,
+      intervalEnding: options.intervalEnding,
+      startAt: new Date(profile.startMs),
+      stepMinutes: profile.stepMinutes,
+      valueCount: profile.values.length,
+      values: profile.values,
+      filledIndexes: profile.filledIndexes,
+      ...summarise(profile.values),
+      notes: profile.notes,
+      originalFile: file.buffer,
+      originalFilename: filename,
+      originalSha256: sha256,
+      uploadedBy: actor.id,
+    });
+    await insertAuditEvent(tx, {
+      ...auditActor(actor),
+      action: 'profile.upload',
+      entityType: 'profile',
+      entityId: id,
+      details: {
+        siteId,
+        kind: options.kind,
+        name,
+        sourceUnit: options.unit,
+        filename,
+        sha256,
+        bytes: file.buffer.length,
+        valueCount: profile.values.length,
+        stepMinutes: profile.stepMinutes,
+        filledCount: profile.filledIndexes.length,
+      },
+    });
+    return id;
+  });
+}

@@ -1,0 +1,61 @@
+/**
+ * `POST|GET /api/sites/:id/profiles`, `GET /api/profiles/:id` (DESIGN section 6),
+ * plus `GET /api/profiles/:id/original` (the file as uploaded) and
+ * `DELETE /api/profiles/:id`.
+ */
+import { Router } from 'express';
+import { profileListQuerySchema, profileNameSchema, profileWindowQuerySchema } from '@shared/schemas/profile';
+import { profileUploadOptionsSchema } from '@shared/schemas/profile-upload';
+import { AppError } from '../http/app-error';
+import { actorFrom, pathId } from '../sites/request-context';
+import { receiveProfileUpload } from './profile-upload.middleware';
+import { uploadProfile } from './profile-upload.service';
+import * as service from './profiles.service';
+
+export const profilesRouter = Router();
+
+/** Option errors in the same `{line, message}` shape as file errors (line 0 = the form), so one table shows both. */
+function parseUploadFields(body: unknown) {
+  const options = profileUploadOptionsSchema.safeParse(body);
+  const name = profileNameSchema.safeParse(body);
+  if (options.success && name.success) return { ...options.data, name: name.data.name };
+  const issues = [...(options.error?.issues ?? []), ...(name.error?.issues ?? [])].map((i) => ({
+    line: 0,
+    path: i.path.join('.'),
+    message: `${i.path.join('.') || 'form'}: ${i.message}`,
+  }));
+  throw new AppError('invalid_upload', 'The upload options are invalid: see issues.', 422, issues, {
+    hint: 'Nothing was stored. Choose a kind (price, load or generation) and a unit that fits it, then upload again.',
+  });
+}
+
+profilesRouter.post('/sites/:id/profiles', receiveProfileUpload, async (req, res) => {
+  const siteId = pathId(req, 'site');
+  const options = parseUploadFields(req.body ?? {});
+  const id = await uploadProfile(siteId, req.file, options, actorFrom(req));
+  res.status(201).json(await service.getProfileSummary(id));
+});
+
+profilesRouter.get('/sites/:id/profiles', async (req, res) => {
+  const siteId = pathId(req, 'site');
+  const { kind } = profileListQuerySchema.parse(req.query);
+  res.json(await service.listSiteProfiles(siteId, kind));
+});
+
+profilesRouter.get('/profiles/:id', async (req, res) => {
+  const id = pathId(req, 'profile');
+  res.json(await service.getProfile(id, profileWindowQuerySchema.parse(req.query)));
+});
+
+profilesRouter.get('/profiles/:id/original', async (req, res) => {
+  const file = await service.getOriginalFile(pathId(req, 'profile'));
+  res.attachment(file.filename);
+  res.setHeader('Content-Type', 'text/csv; charset=utf-8');
+  res.setHeader('Digest', `sha-256=${Buffer.from(file.sha256, 'hex').toString('base64')}`);
+  res.send(file.file);
+});
+
+profilesRouter.delete('/profiles/:id', async (req, res) => {
+  await service.deleteProfile(pathId(req, 'profile'), actorFrom(req));
+  res.status(204).end();
+});

@@ -1,0 +1,26 @@
+/** `GET|POST /api/sites`, `GET|PATCH /api/sites/:id` (DESIGN section 6). HTTP only: rules live in the service. */
+import { Router } from 'express';
+import { siteCreateSchema, sitePatchSchema } from '@shared/schemas/site';
+import { actorFrom, pathId } from './request-context';
+import * as service from './sites.service';
+
+export const sitesRouter = Router();
+
+sitesRouter.get('/sites', async (_req, res) => {
+  res.json(await service.listSites());
+});
+
+sitesRouter.post('/sites', async (req, res) => {
+  const fields = siteCreateSchema.parse(req.body);
+  res.status(201).json(await service.createSite(fields, actorFrom(req)));
+});
+
+sitesRouter.get('/sites/:id', async (req, res) => {
+  res.json(await service.getSite(pathId(req, 'site')));
+});
+
+sitesRouter.patch('/sites/:id', async (req, res) => {
+  const id = pathId(req, 'site');
+  const patch = sitePatchSchema.parse(req.body);
+  res.json(await service.updateSite(id, patch, actorFrom(req)));
+});
