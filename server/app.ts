@@ -7,12 +7,24 @@ import type { AppConfig } from './config';
 import { errorHandler } from './http/error-handler';
 import { AppError } from './http/app-error';
 import { healthRouter } from './health/health.routes';
+import { authRouter } from './auth/auth.routes';
+import { usersRouter } from './users/users.routes';
+import { auditRouter } from './audit/audit.routes';
+import { mailRouter } from './mail/mail.routes';
+import { configureMail } from './mail/mail.service';
+import { requireSameOrigin } from './auth/origin-check';
+import { loadSession } from './auth/session-middleware';
+import { accessControl } from './auth/access-control';
+import { listRoutes } from './auth/route-inventory';
+import { sitesRouter } from './sites/sites.routes';
+import { batteriesRouter } from './batteries/batteries.routes';
+import { profilesRouter } from './profiles/profiles.routes';
 
 const clientDir = path.resolve(import.meta.dirname, '..', 'dist', 'client');
 
 /** Routers mounted under /api, in order. Each module adds its router here. */
 function apiRouters(): Router[] {
-  return [healthRouter];
+  return [healthRouter, authRouter, usersRouter, auditRouter, mailRouter, sitesRouter, batteriesRouter, profilesRouter];
 }
 
 export function createApp(config: AppConfig) {
@@ -20,6 +32,7 @@ export function createApp(config: AppConfig) {
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
   app.locals.config = config;
+  configureMail(config);
 
   app.use(
     helmet({
@@ -45,7 +58,12 @@ export function createApp(config: AppConfig) {
     res.setHeader('Cache-Control', 'no-store');
     next();
   });
+  // CSRF: state-changing requests must come from our origin (server/auth/origin-check.ts).
+  api.use(requireSameOrigin(config.appOrigin));
   api.use(express.json({ limit: '1mb' }));
+  // Session → req.user, then the access table decides (server/auth/access-table.ts).
+  api.use(loadSession(config));
+  api.use(accessControl(() => listRoutes(api, '/api')));
   for (const router of apiRouters()) api.use(router);
   api.use((req, _res, next) => next(new AppError('not_found', `No API route ${req.method} ${req.path}.`, 404)));
   app.use('/api', api);

@@ -3,10 +3,15 @@ import { loadConfig } from './config';
 import { createApp } from './app';
 import { closeDb, initDb } from './db/client';
 import { logger } from './logger';
+import { ensureFakeSmtp, stopFakeSmtp } from './mail/mail.service';
 
 async function main() {
   const config = loadConfig();
   initDb(config.DATABASE_URL);
+  if (config.FAKE_SMTP === 'true') {
+    const smtp = await ensureFakeSmtp(config.SMTP_PORT);
+    logger.info(`Fake SMTP server on 127.0.0.1:${smtp.port}: e-mails land in the admin's mail outbox`);
+  }
   const app = createApp(config);
   const server = app.listen(config.PORT, () => logger.info(`Slackwater listening on ${config.appOrigin}`));
   server.on('error', (error: NodeJS.ErrnoException) => {
@@ -24,6 +29,7 @@ async function main() {
     stopping = true;
     logger.info('Stopping Slackwater…');
     server.close();
+    await stopFakeSmtp();
     await closeDb();
     process.exit(0);
   };

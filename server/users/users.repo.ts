@@ -1,0 +1,46 @@
+/** Queries on the users table. */
+import { and, asc, eq } from 'drizzle-orm';
+import type { DbOrTx } from '../db/client';
+import { users, type UserRow } from './users.schema';
+
+export type NewUser = typeof users.$inferInsert;
+export type UserPatch = Partial<Pick<UserRow, 'name' | 'role' | 'disabled'>>;
+
+export async function findUserByEmail(db: DbOrTx, email: string): Promise<UserRow | undefined> {
+  const [row] = await db.select().from(users).where(eq(users.email, email.toLowerCase()));
+  return row;
+}
+
+export async function findUserById(db: DbOrTx, id: string, forUpdate = false): Promise<UserRow | undefined> {
+  const query = db.select().from(users).where(eq(users.id, id));
+  const [row] = await (forUpdate ? query.for('update') : query);
+  return row;
+}
+
+export async function listUsers(db: DbOrTx): Promise<UserRow[]> {
+  return db.select().from(users).orderBy(asc(users.email));
+}
+
+/** Inserts a user; returns undefined when the e-mail is already taken. */
+export async function insertUser(db: DbOrTx, user: NewUser): Promise<UserRow | undefined> {
+  const [row] = await db.insert(users).values(user).onConflictDoNothing({ target: users.email }).returning();
+  return row;
+}
+
+export async function updateUser(db: DbOrTx, id: string, patch: UserPatch): Promise<UserRow | undefined> {
+  const [row] = await db.update(users).set({ ...patch, updatedAt: new Date() }).where(eq(users.id, id)).returning();
+  return row;
+}
+
+/**
+ * Locks every active admin row. Two admins demoting each other at once then queue here,
+ * and the second sees the first's change, so the last admin cannot disappear in a race.
+ */
+export async function lockActiveAdmins(tx: DbOrTx): Promise<string[]> {
+  const rows = await tx
+    .select({ id: users.id })
+    .from(users)
+    .where(and(eq(users.role, 'admin'), eq(users.disabled, false)))
+    .for('update');
+  return rows.map((r) => r.id);
+}
