@@ -61,6 +61,16 @@ export interface DispatchProblem {
   readonly terminal: TerminalRule;
   /** Local-day index per step (length N), used by the daily throughput cap. */
   readonly dayIndex: readonly number[];
+  /**
+   * When true, e_0 is a decision variable inside the SoC window and initialEnergyKwh
+   * is ignored (the steady cycle: terminal `cyclic` with a free start). Only the LP
+   * path solves such problems.
+   */
+  readonly freeInitialEnergy?: boolean;
+  /** Peak import already reached before step 0, kW (receding horizon with a demand charge); default 0. */
+  readonly peakFloorKw?: number;
+  /** Energy already discharged earlier in the local day of step 0, kWh (receding horizon with a throughput cap); default 0. */
+  readonly dischargedFirstDayKwh?: number;
 }
 
 export type SolveStatus = 'optimal' | 'infeasible' | 'unbounded' | 'error';
@@ -84,4 +94,12 @@ export interface DispatchSolution {
   /** Value of one more MWh stored at the end of each step (dual of the SoC equation for e_{t+1}), currency/MWh. */
   readonly storedEnergyValue: readonly number[];
   readonly peakImportKw: number;
+  /** Steps where the schedule charges and discharges at once (only pays at negative prices). */
+  readonly simultaneousSteps?: readonly number[];
+  /** LP backend that solved it (LP path only). */
+  readonly backend?: 'highs' | 'glpk';
+  /** True when a second solve broke a tie between several optimal schedules (LP path). */
+  readonly tieBroken?: boolean;
+  /** Wall-clock seconds of the solve. */
+  readonly seconds?: number;
 }

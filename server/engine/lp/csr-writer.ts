@@ -1,0 +1,73 @@
+/**
+ * Fills the row-wise arrays of an LpModel when the sizes are known up front, so
+ * building a model costs a few typed-array writes per non-zero (the receding-horizon
+ * loop builds thousands of small models and must not be dominated by this).
+ */
+import type { LpModel } from './lp-model';
+
+export class CsrWriter {
+  readonly colCost: Float64Array;
+  readonly colLower: Float64Array;
+  readonly colUpper: Float64Array;
+  private readonly rowLower: Float64Array;
+  private readonly rowUpper: Float64Array;
+  private readonly rowStarts: Int32Array;
+  private readonly colIndex: Int32Array;
+  private readonly values: Float64Array;
+  private row = 0;
+  private nz = 0;
+
+  constructor(
+    readonly numCols: number,
+    readonly numRows: number,
+    maxNonZeros: number,
+  ) {
+    this.colCost = new Float64Array(numCols);
+    this.colLower = new Float64Array(numCols);
+    this.colUpper = new Float64Array(numCols);
+    this.rowLower = new Float64Array(numRows);
+    this.rowUpper = new Float64Array(numRows);
+    this.rowStarts = new Int32Array(numRows + 1);
+    this.colIndex = new Int32Array(maxNonZeros);
+    this.values = new Float64Array(maxNonZeros);
+  }
+
+  setColumn(j: number, cost: number, lower: number, upper: number): void {
+    this.colCost[j] = cost;
+    this.colLower[j] = lower;
+    this.colUpper[j] = upper;
+  }
+
+  /** Starts the next row; entries added until the next call belong to it. */
+  startRow(lower: number, upper: number): number {
+    const i = this.row++;
+    this.rowLower[i] = lower;
+    this.rowUpper[i] = upper;
+    this.rowStarts[i] = this.nz;
+    return i;
+  }
+
+  add(col: number, value: number): void {
+    this.colIndex[this.nz] = col;
+    this.values[this.nz++] = value;
+  }
+
+  finish(offset: number, names?: { cols: string[]; rows: string[] }): LpModel {
+    if (this.row !== this.numRows) throw new Error(`model builder wrote ${this.row} of ${this.numRows} rows`);
+    this.rowStarts[this.numRows] = this.nz;
+    return {
+      numCols: this.numCols,
+      numRows: this.numRows,
+      colCost: this.colCost,
+      colLower: this.colLower,
+      colUpper: this.colUpper,
+      rowLower: this.rowLower,
+      rowUpper: this.rowUpper,
+      rowStarts: this.rowStarts,
+      colIndex: this.colIndex.subarray(0, this.nz),
+      values: this.values.subarray(0, this.nz),
+      offset,
+      ...(names ? { colNames: names.cols, rowNames: names.rows } : {}),
+    };
+  }
+}

@@ -1,0 +1,117 @@
+/**
+ * A plan: the delivery window [start, end) solved over a lookahead of
+ * `horizonHours` from `start` (data beyond `end` used when available) with a
+ * terminal rule at the end of the lookahead. The delivery part is the schedule;
+ * the rest is shown as lookahead. Turnpike figures compare it with the steady
+ * cycle and with a plan of a much longer lookahead, max(4·H, H + 168 h), from the
+ * same state.
+ */
+import type { DispatchSolution, TerminalRule } from '../types';
+import type { AlignedInputs } from '../inputs/align-inputs';
+import type { InputIssue } from '../model/validate-battery';
+import { problemFor, socPctToKwh, stepIndexOf } from '../inputs/problem-for';
+import { solveDispatch, type DispatchOptions } from '../dispatch/solve-dispatch';
+import { solveSteadyCycle, type SteadyCycle } from '../steady/solve-steady-cycle';
+import { terminalRuleFor, type TerminalChoice } from '../terminal/terminal-choice';
+import { DEFAULT_BAND_FRACTION } from '../turnpike/turnpike-figures';
+import { planFlags, settingWarnings } from './plan-flags';
+import { planTurnpike, type PlanTurnpike } from './plan-turnpike';
+
+export interface PlanRequest {
+  readonly startMs: number;
+  readonly endMs: number;
+  readonly horizonHours: number;
+  readonly terminal: TerminalChoice;
+  /** Initial SoC in % of nameplate energy; default the battery's socInitialPct. */
+  readonly initialSocPct?: number;
+  /** SoC band as a fraction of usable energy (default 0.05). */
+  readonly bandFraction?: number;
+  readonly method?: DispatchOptions['method'];
+  readonly steady?: SteadyCycle;
+}
+
+export interface Plan {
+  /** Grid step of the delivery start, end (exclusive) and lookahead end (exclusive). */
+  readonly from: number;
+  readonly to: number;
+  readonly windowEnd: number;
+  readonly lookaheadHours: number;
+  readonly terminalRule: TerminalRule;
+  /** The solution over the whole lookahead window. */
+  readonly solution: DispatchSolution;
+  readonly steady: SteadyCycle;
+  readonly turnpike: PlanTurnpike;
+  readonly warnings: readonly string[];
+}
+
+export type PlanResult = { ok: true; plan: Plan } | { ok: false; issue: InputIssue };
+
+const fail = (field: string, message: string): PlanResult => ({ ok: false, issue: { field, message } });
+
+export function solvePlan(inputs: AlignedInputs, request: PlanRequest): PlanResult {
+  const start = stepIndexOf(inputs, request.startMs, 'the delivery start');
+  if (!start.ok) return fail('start', start.message);
+  const end = stepIndexOf(inputs, request.endMs, 'the delivery end');
+  if (!end.ok) return fail('end', end.message);
+  if (end.index <= start.index) return fail('end', 'the delivery end must be after the delivery start');
+  const horizonSteps = (request.horizonHours * 60) / inputs.stepMinutes;
+  if (!Number.isInteger(horizonSteps) || horizonSteps < 1) {
+    return fail('horizon', `the horizon ${request.horizonHours} h is not a whole number of ${inputs.stepMinutes}-minute steps`);
+  }
+  if (horizonSteps < end.index - start.index) {
+    return fail('horizon', `the horizon ${request.horizonHours} h is shorter than the delivery window (${((end.index - start.index) * inputs.stepMinutes) / 60} h); use a horizon at least as long as the window`);
+  }
+  let steady = request.steady;
+  if (!steady) {
+    const result = solveSteadyCycle(inputs);
+    if (!result.ok) return result;
+    steady = result.cycle;
+  }
+  if (steady.status !== 'optimal') return fail('prices', `the steady cycle could not be solved: ${steady.message ?? steady.status}`);
+  const n = inputs.timesMs.length;
+  const from = start.index;
+  const windowEnd = Math.min(n, from + horizonSteps);
+  const e0 = socPctToKwh(inputs, request.initialSocPct ?? inputs.battery.socInitialPct);
+  if (request.initialSocPct !== undefined && !(request.initialSocPct >= inputs.battery.socMinPct && request.initialSocPct <= inputs.battery.socMaxPct)) {
+    return fail('initialSocPct', `the initial SoC ${request.initialSocPct} % is outside the SoC window ${inputs.battery.socMinPct}–${inputs.battery.socMaxPct} %`);
+  }
+  const options = { method: request.method ?? 'auto' } as const;
+  const solveTo = (to: number) => {
+    const rule = terminalRuleFor(request.terminal, inputs, to, steady);
+    return { rule, solution: solveDispatch(problemFor(inputs, from, to, e0, rule), options) };
+  };
+  const main = solveTo(windowEnd);
+  if (main.solution.status !== 'optimal') return fail('plan', main.solution.message ?? `the plan could not be solved (${main.solution.status})`);
+  const longerHours = Math.max(4 * request.horizonHours, request.horizonHours + 168);
+  const longerEnd = Math.min(n, from + Math.floor((longerHours * 60) / inputs.stepMinutes));
+  const longer = longerEnd > windowEnd ? solveTo(longerEnd).solution : null;
+  const band = request.bandFraction ?? DEFAULT_BAND_FRACTION;
+  const tp = planTurnpike(inputs, from, main.solution, steady, longer?.status === 'optimal' ? longer : null, band);
+  const lookedLongerHours = ((longerEnd - from) * inputs.stepMinutes) / 60;
+  tp.flags.push(
+    ...planFlags(tp, main.solution, {
+      stepMinutes: inputs.stepMinutes,
+      deliverySteps: end.index - from,
+      windowSteps: windowEnd - from,
+      requestedHorizonHours: request.horizonHours,
+      terminalKind: request.terminal.kind,
+      timeOfStep: (t) => new Date(inputs.timesMs[0]! + (from + t) * inputs.stepMinutes * 60_000).toISOString(),
+      longerHours: longer ? lookedLongerHours : null,
+      ...(longer ? {} : { longerMissing: 'the price data end at the horizon, so there is no longer plan to compare with' }),
+    }),
+  );
+  return {
+    ok: true,
+    plan: {
+      from,
+      to: end.index,
+      windowEnd,
+      lookaheadHours: ((windowEnd - from) * inputs.stepMinutes) / 60,
+      terminalRule: main.rule,
+      solution: main.solution,
+      steady,
+      turnpike: tp,
+      warnings: settingWarnings(inputs.battery),
+    },
+  };
+}

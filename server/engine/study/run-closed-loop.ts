@@ -1,0 +1,135 @@
+/**
+ * Closed-loop receding-horizon control (economic MPC) over [from, to): at every
+ * re-plan, solve the window [s, min(s + H, to)) from the current state, apply its
+ * first `replanSteps` steps, move on. The window never reads past `to`, so the
+ * result compares fairly with the reference path over the same period. A demand
+ * charge sees the peak reached so far and a throughput cap the energy already
+ * discharged that day, so each window prices only what it can still change.
+ */
+import type { DispatchSolution } from '../types';
+import type { AlignedInputs } from '../inputs/align-inputs';
+import type { LpBasis } from '../lp/lp-model';
+import { HighsSession } from '../lp/solve';
+import { problemFor, usableEnergyKwh } from '../inputs/problem-for';
+import { validateProblem } from '../model/validate-problem';
+import { scheduleCost } from '../dispatch/schedule-cost';
+import { solveDispatchLp } from '../dispatch/solve-dispatch-lp';
+import { checkDp, solveWithDp } from '../dispatch/dp-bridge';
+import type { SteadyCycle } from '../steady/solve-steady-cycle';
+import { terminalRuleFor, type TerminalChoice } from '../terminal/terminal-choice';
+import { arcFigures, DEFAULT_BAND_FRACTION } from '../turnpike/turnpike-figures';
+
+export interface ClosedLoopRequest {
+  readonly from: number;
+  readonly to: number;
+  readonly horizonSteps: number;
+  readonly replanSteps: number;
+  readonly terminal: TerminalChoice;
+  readonly initialEnergyKwh: number;
+  /** Needed for steady-value. */
+  readonly steady?: SteadyCycle;
+  /** Reference SoC at the end of each step of [from, to), for the open-loop plans' figures. */
+  readonly referenceSoc?: readonly number[];
+  readonly bandFraction?: number;
+  readonly method?: 'auto' | 'lp' | 'dp';
+}
+
+export interface ClosedLoopRun {
+  readonly status: DispatchSolution['status'];
+  readonly message?: string;
+  /** Realised money paid over [from, to), same rule as the reference path. */
+  readonly cost: number;
+  readonly equivalentCycles: number;
+  readonly solves: number;
+  readonly seconds: number;
+  readonly chargeKw: readonly number[];
+  readonly dischargeKw: readonly number[];
+  readonly gridImportKw: readonly number[];
+  readonly gridExportKw: readonly number[];
+  readonly socKwh: readonly number[];
+  /** Mean over open-loop plans of the share of steps within the band of the reference. */
+  readonly nearSteadyShare: number;
+  readonly meanLeavingArcSteps: number;
+  /** Full-length plans whose leaving arc reaches into the steps they commit. */
+  readonly leavingIntoCommitted: number;
+  readonly method: 'lp' | 'dp' | 'mixed';
+}
+
+export function failedRun(status: ClosedLoopRun['status'], message: string, seconds: number): ClosedLoopRun {
+  return {
+    status, message, cost: NaN, equivalentCycles: NaN, solves: 0, seconds,
+    chargeKw: [], dischargeKw: [], gridImportKw: [], gridExportKw: [], socKwh: [],
+    nearSteadyShare: NaN, meanLeavingArcSteps: NaN, leavingIntoCommitted: 0, method: 'lp',
+  };
+}
+
+export function runClosedLoop(inputs: AlignedInputs, req: ClosedLoopRequest): ClosedLoopRun {
+  const started = performance.now();
+  const elapsed = () => (performance.now() - started) / 1000;
+  const whole = problemFor(inputs, req.from, req.to, req.initialEnergyKwh, terminalRuleFor(req.terminal, inputs, req.to, req.steady));
+  const issue = validateProblem(whole);
+  if (issue) return failedRun('error', issue.message, elapsed());
+  const session = new HighsSession();
+  const usable = usableEnergyKwh(inputs.battery);
+  const band = req.bandFraction ?? DEFAULT_BAND_FRACTION;
+  const applied = { chargeKw: [] as number[], dischargeKw: [] as number[], gridImportKw: [] as number[], gridExportKw: [] as number[] };
+  const socKwh = [req.initialEnergyKwh];
+  let basis: LpBasis | undefined;
+  let solves = 0, shareSum = 0, leavingSum = 0, leavingIntoCommitted = 0, peak = 0, dpSolves = 0;
+  try {
+    for (let s = req.from; s < req.to; s += req.replanSteps) {
+      const end = Math.min(req.to, s + req.horizonSteps);
+      const day = inputs.clock.localDay[s]!;
+      let dischargedToday = 0;
+      for (let t = s - 1; t >= req.from && inputs.clock.localDay[t] === day; t--) dischargedToday += applied.dischargeKw[t - req.from]! * inputs.stepHours;
+      const problem = problemFor(inputs, s, end, socKwh[socKwh.length - 1]!, terminalRuleFor(req.terminal, inputs, end, req.steady), {
+        peakFloorKw: peak,
+        dischargedFirstDayKwh: dischargedToday,
+      });
+      let plan: DispatchSolution | null = req.method !== 'lp' && checkDp(problem).ok ? solveWithDp(problem) : null;
+      if (plan) dpSolves++;
+      else {
+        const outcome = solveDispatchLp(problem, { session, validated: true, keepBasis: true, ...(basis ? { warmStart: { previous: basis, shift: req.replanSteps } } : {}) });
+        plan = outcome.solution;
+        basis = outcome.basis;
+      }
+      solves++;
+      if (plan.status !== 'optimal') {
+        return failedRun(plan.status, `window from ${new Date(inputs.timesMs[s]!).toISOString()}: ${plan.message ?? plan.status}`, elapsed());
+      }
+      const steps = Math.min(req.replanSteps, end - s);
+      for (let k = 0; k < steps; k++) {
+        applied.chargeKw.push(plan.chargeKw[k]!);
+        applied.dischargeKw.push(plan.dischargeKw[k]!);
+        applied.gridImportKw.push(plan.gridImportKw[k]!);
+        applied.gridExportKw.push(plan.gridExportKw[k]!);
+        socKwh.push(plan.socKwh[k + 1]!);
+        peak = Math.max(peak, plan.gridImportKw[k]!);
+      }
+      if (req.referenceSoc) {
+        const fig = arcFigures(plan.socKwh.slice(1), req.referenceSoc.slice(s - req.from, end - req.from), usable, band);
+        shareSum += fig.nearSteadyShare;
+        leavingSum += fig.leavingArcSteps;
+        const fullLength = end - s === req.horizonSteps;
+        if (fullLength && fig.leavingArcSteps > 0 && end - s - fig.leavingArcSteps < req.replanSteps) leavingIntoCommitted++;
+      }
+    }
+  } finally {
+    session.dispose();
+  }
+  const cost = scheduleCost({ ...whole, degradationCostPerMwh: inputs.battery.degradationCostPerMwh, demandChargePerKw: inputs.site.demandChargePerKw }, applied);
+  const discharged = applied.dischargeKw.reduce((sum, d) => sum + d * inputs.stepHours, 0);
+  return {
+    status: 'optimal',
+    cost,
+    equivalentCycles: discharged / usable,
+    solves,
+    seconds: elapsed(),
+    ...applied,
+    socKwh,
+    nearSteadyShare: req.referenceSoc ? shareSum / solves : NaN,
+    meanLeavingArcSteps: req.referenceSoc ? leavingSum / solves : NaN,
+    leavingIntoCommitted,
+    method: dpSolves === 0 ? 'lp' : dpSolves === solves ? 'dp' : 'mixed',
+  };
+}

@@ -1,0 +1,129 @@
+/**
+ * Horizon study: closed-loop receding-horizon runs over [start, end) for every
+ * horizon H and terminal rule, each compared with the reference path over the
+ * same period from the same initial SoC with the free terminal rule (fair because
+ * no window reads past `end`). Runs are independent, so they share the cores.
+ */
+import type { AlignedInputs } from '../inputs/align-inputs';
+import type { InputIssue } from '../model/validate-battery';
+import { socPctToKwh, stepIndexOf, usableEnergyKwh } from '../inputs/problem-for';
+import { solveReferencePath, steadyFor } from '../reference/solve-reference-path';
+import { terminalLabel, type TerminalChoice } from '../terminal/terminal-choice';
+import { DEFAULT_BAND_FRACTION } from '../turnpike/turnpike-figures';
+import { DEFAULT_GAP_TARGET_PCT, recommendHorizon, type Recommendation } from './recommend-horizon';
+import { runStudyJob, type StudyJob, type StudyJobContext, type StudyJobResult } from './study-job';
+import { defaultWorkerCount, runJobsOnWorkers } from './worker-pool';
+
+export interface StudyRequest {
+  /** Defaults: the whole period of the inputs. */
+  readonly startMs?: number;
+  readonly endMs?: number;
+  readonly horizonsHours: readonly number[];
+  readonly replanHours: number;
+  readonly terminals: readonly TerminalChoice[];
+  readonly initialSocPct?: number;
+  readonly gapTargetPct?: number;
+  readonly bandFraction?: number;
+  readonly method?: 'auto' | 'lp' | 'dp';
+  /** Worker threads; 0 or 1 runs everything in this thread. Default: one per core (max 4). */
+  readonly workers?: number;
+  readonly onProgress?: (done: number, total: number) => void;
+}
+
+export interface StudyRun extends StudyJobResult {
+  readonly horizonHours: number;
+  readonly terminal: string;
+  /** (cost − reference cost) / |reference cost| in %. */
+  readonly gapPct: number;
+}
+
+export interface HorizonStudy {
+  readonly referenceCost: number;
+  readonly referenceEquivalentCycles: number;
+  readonly runs: readonly StudyRun[];
+  readonly recommendation: Recommendation;
+  readonly seconds: number;
+  readonly workers: number;
+}
+
+export type StudyResult = { ok: true; study: HorizonStudy } | { ok: false; issue: InputIssue };
+
+const fail = (field: string, message: string): StudyResult => ({ ok: false, issue: { field, message } });
+
+function toSteps(inputs: AlignedInputs, hours: number, what: string): number | string {
+  const steps = (hours * 60) / inputs.stepMinutes;
+  return Number.isInteger(steps) && steps >= 1 ? steps : `${what} ${hours} h is not a whole, positive number of ${inputs.stepMinutes}-minute steps`;
+}
+
+export function gapPct(cost: number, referenceCost: number): number {
+  const diff = cost - referenceCost;
+  return Math.abs(diff) <= 1e-9 * Math.max(1, Math.abs(referenceCost)) ? 0 : (100 * diff) / Math.max(Math.abs(referenceCost), 1e-9);
+}
+
+export async function runHorizonStudy(inputs: AlignedInputs, request: StudyRequest): Promise<StudyResult> {
+  const started = performance.now();
+  const start = stepIndexOf(inputs, request.startMs ?? inputs.timesMs[0]!, 'the study start');
+  if (!start.ok) return fail('start', start.message);
+  const end = request.endMs === undefined ? { ok: true as const, index: inputs.timesMs.length } : stepIndexOf(inputs, request.endMs, 'the study end');
+  if (!end.ok) return fail('end', end.message);
+  if (end.index <= start.index) return fail('end', 'the study end must be after its start');
+  if (request.horizonsHours.length === 0 || request.terminals.length === 0) return fail('horizons', 'give at least one horizon and one terminal rule');
+  const replanSteps = toSteps(inputs, request.replanHours, 'the re-plan interval');
+  if (typeof replanSteps === 'string') return fail('replan', replanSteps);
+  const jobs: StudyJob[] = [];
+  for (const hours of request.horizonsHours) {
+    const steps = toSteps(inputs, hours, 'the horizon');
+    if (typeof steps === 'string') return fail('horizons', steps);
+    if (steps < replanSteps) return fail('horizons', `the horizon ${hours} h is shorter than the re-plan interval ${request.replanHours} h`);
+    for (const terminal of request.terminals) jobs.push({ horizonHours: hours, horizonSteps: steps, terminal });
+  }
+  const steady = steadyFor(inputs, request.terminals);
+  if (!steady.ok) return steady;
+  const reference = solveReferencePath(inputs, {
+    from: start.index,
+    to: end.index,
+    terminal: { kind: 'free' },
+    ...(request.initialSocPct !== undefined ? { initialSocPct: request.initialSocPct } : {}),
+    ...(request.method ? { method: request.method } : {}),
+  });
+  if (!reference.ok) return reference;
+  const ref = reference.path.solution;
+  if (ref.status !== 'optimal') return fail('reference', `the reference path could not be solved: ${ref.message ?? ref.status}`);
+  const context: StudyJobContext = {
+    inputs,
+    from: start.index,
+    to: end.index,
+    replanSteps,
+    initialEnergyKwh: socPctToKwh(inputs, request.initialSocPct ?? inputs.battery.socInitialPct),
+    referenceSoc: ref.socKwh.slice(1),
+    bandFraction: request.bandFraction ?? DEFAULT_BAND_FRACTION,
+    method: request.method ?? 'auto',
+    ...(steady.steady ? { steady: steady.steady } : {}),
+  };
+  const workers = request.workers ?? defaultWorkerCount();
+  const results =
+    workers > 1 && jobs.length > 1
+      ? await runJobsOnWorkers(context, jobs, workers, (_, done) => request.onProgress?.(done, jobs.length))
+      : jobs.map((job, i) => {
+          const result = runStudyJob(context, job);
+          request.onProgress?.(i + 1, jobs.length);
+          return result;
+        });
+  const runs: StudyRun[] = results.map((result, i) => ({
+    ...result,
+    horizonHours: jobs[i]!.horizonHours,
+    terminal: terminalLabel(jobs[i]!.terminal),
+    gapPct: result.status === 'optimal' ? gapPct(result.cost, ref.cost) : NaN,
+  }));
+  return {
+    ok: true,
+    study: {
+      referenceCost: ref.cost,
+      referenceEquivalentCycles: ref.dischargeKw.reduce((s, d) => s + d * inputs.stepHours, 0) / usableEnergyKwh(inputs.battery),
+      runs,
+      recommendation: recommendHorizon(runs, request.gapTargetPct ?? DEFAULT_GAP_TARGET_PCT),
+      seconds: (performance.now() - started) / 1000,
+      workers: workers > 1 && jobs.length > 1 ? Math.min(workers, jobs.length) : 1,
+    },
+  };
+}
