@@ -19,12 +19,14 @@ import { listRoutes } from './auth/route-inventory';
 import { sitesRouter } from './sites/sites.routes';
 import { batteriesRouter } from './batteries/batteries.routes';
 import { profilesRouter } from './profiles/profiles.routes';
+import { signOffRouter } from './sign-off/sign-off.routes';
+import { exportRouter } from './export/export.routes';
 
 const clientDir = path.resolve(import.meta.dirname, '..', 'dist', 'client');
 
 /** Routers mounted under /api, in order. Each module adds its router here. */
 function apiRouters(): Router[] {
-  return [healthRouter, authRouter, usersRouter, auditRouter, mailRouter, sitesRouter, batteriesRouter, profilesRouter];
+  return [healthRouter, authRouter, usersRouter, auditRouter, mailRouter, sitesRouter, batteriesRouter, profilesRouter, signOffRouter, exportRouter];
 }
 
 export function createApp(config: AppConfig) {

@@ -62,6 +62,9 @@ export const accessTable = {
   'POST /api/plans/:id/approve': approvers,
   'POST /api/plans/:id/reject': approvers,
   'GET /api/plans/:id/export.csv': readers, // the export service restricts viewers to approved plans
+  'POST /api/plans/:id/copy': editors, // a rejected plan becomes a new draft
+  'GET /api/plans/:id/sign-off': readers, // who submitted, who signed off, the checksum, the history
+  'GET /api/sign-off/pending': approvers, // plans awaiting my sign-off (never my own submissions)
 
   // Horizon studies
   'POST /api/studies': editors,

@@ -44,6 +44,10 @@ export interface PlanEvent {
   actorId: string | null;
   actorName: string | null;
   actorEmail: string | null;
+  fromStatus: string | null;
+  toStatus: string | null;
+  /** The plan's version after the action. */
+  version: number | null;
   comment: string | null;
   details: Record<string, unknown>;
 }
@@ -60,9 +64,11 @@ export interface SignOffRecord {
   planId: string;
   status: PlanStatus;
   version: number;
+  created: PersonAt | null;
   submitted: PersonAt | null;
   approved: (PersonAt & { comment: string | null }) | null;
   rejected: (PersonAt & { comment: string | null }) | null;
+  superseded: { at: string; byPlanId: string } | null;
   checksum: string | null;
   /** Recomputed now from the stored inputs and results; null when the plan has no checksum yet. */
   checksumVerified: boolean | null;

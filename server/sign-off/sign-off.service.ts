@@ -1,0 +1,147 @@
+/**
+ * The sign-off workflow: draft → submitted → approved | rejected, superseding
+ * and copying (DESIGN sections 2 and 5, SECURITY.md "Data integrity").
+ * Each action is one transaction holding the state change, its history event
+ * and its audit event; e-mails go out only after the commit.
+ */
+import type { SignOffAction } from '@shared/schemas/sign-off';
+import { getDb, type DbOrTx } from '../db/client';
+import { AppError, conflict, forbidden, notFound, unprocessable } from '../http/app-error';
+import { recordAudit } from '../audit/audit.service';
+import type { PlanRow } from '../plans/plans.schema';
+import { planChecksum } from './plan-checksum';
+import {
+  findPlan,
+  insertDraftCopy,
+  insertPlanEvent,
+  lockBatteryApprovals,
+  markApproved,
+  markRejected,
+  markSubmitted,
+  supersedeOverlapping,
+  type NewPlanEvent,
+} from './sign-off.repo';
+import { notifyDecision, notifySubmitted } from './sign-off-notify';
+import type { Actor } from './actor';
+
+type Step = 'submitted' | 'approved' | 'rejected';
+
+const VERB: Record<Step, string> = { submitted: 'submit', approved: 'approve', rejected: 'reject' };
+const NEEDS: Record<Step, PlanRow['status']> = { submitted: 'draft', approved: 'submitted', rejected: 'submitted' };
+
+/** The clearest reason an action cannot go ahead on `plan` as it is now, or null. */
+export function refusal(plan: PlanRow, step: Step, version: number, userId: string): AppError | null {
+  if (step !== 'submitted' && plan.submittedBy === userId) {
+    // Segregation of duties (ASVS 4.0.3 4.3.3): the database CHECK says the same.
+    return forbidden(`You submitted this plan, so you cannot ${VERB[step]} it: another approver must sign it off.`);
+  }
+  if (plan.status !== NEEDS[step]) {
+    return new AppError('wrong_status', `The plan is ${plan.status}; only a ${NEEDS[step]} plan can be ${step}. Reload the plan to see who acted on it.`, 409);
+  }
+  if (plan.version !== version) {
+    return new AppError('stale_version', `The plan changed since you opened it (you sent version ${version}, it is now at version ${plan.version}). Reload it, check it again and retry.`, 409);
+  }
+  if (plan.results === null) {
+    return unprocessable(plan.errorMessage ? `The plan has no results to sign off: ${plan.errorMessage}` : 'The plan has no results yet: wait for its job to finish.');
+  }
+  return null;
+}
+
+async function load(tx: DbOrTx, id: string) {
+  const plan = await findPlan(tx, id);
+  if (!plan) throw notFound('The plan');
+  return plan;
+}
+
+/** After an UPDATE that matched no row: say why from the plan as it is now. */
+async function lostRace(tx: DbOrTx, id: string, step: Step, version: number, userId: string): Promise<AppError> {
+  const now = await load(tx, id);
+  return refusal(now, step, version, userId) ?? conflict('The plan changed while you were signing it off. Reload it and check it again.');
+}
+
+function event(plan: PlanRow, actor: Actor, action: NewPlanEvent['action'], from: string, comment: string | null, details: Record<string, unknown> = {}): NewPlanEvent {
+  return { planId: plan.id, action, actorId: actor.user.id, actorName: actor.user.name, actorEmail: actor.user.email, fromStatus: from, toStatus: plan.status, version: plan.version, comment, details };
+}
+
+const auditActor = (actor: Actor) => ({ actorId: actor.user.id, actorEmail: actor.user.email, ip: actor.ip });
+
+export async function submitPlan(actor: Actor, id: string, body: SignOffAction): Promise<PlanRow> {
+  const plan = await getDb().transaction(async (tx) => {
+    const before = await load(tx, id);
+    const refused = refusal(before, 'submitted', body.version, actor.user.id);
+    if (refused) throw refused;
+    const row = await markSubmitted(tx, id, body.version, actor.user.id);
+    if (!row) throw await lostRace(tx, id, 'submitted', body.version, actor.user.id);
+    await insertPlanEvent(tx, event(row, actor, 'submitted', before.status, body.comment ?? null));
+    await recordAudit(tx, auditActor(actor), { action: 'plan.submitted', entityType: 'plan', entityId: id, details: { version: row.version, comment: body.comment ?? null } });
+    return row;
+  });
+  await notifySubmitted(actor, plan, body.comment);
+  return plan;
+}
+
+export interface Approval {
+  plan: PlanRow;
+  supersededPlanIds: string[];
+}
+
+/**
+ * Approves in one statement that only the first of concurrent approvers can
+ * match, stores the checksum of exactly the content that was read (the
+ * fingerprint condition), and supersedes older approved plans of the battery
+ * whose windows overlap, all in one transaction.
+ */
+export async function approvePlan(actor: Actor, id: string, body: SignOffAction): Promise<Approval> {
+  const outcome = await getDb().transaction(async (tx) => {
+    const before = await load(tx, id);
+    const refused = refusal(before, 'approved', body.version, actor.user.id);
+    if (refused) throw refused;
+    await lockBatteryApprovals(tx, before.batteryId);
+    const checksum = planChecksum({ planId: before.id, inputs: before.inputs, results: before.results });
+    const row = await markApproved(tx, { id, version: body.version, userId: actor.user.id, comment: body.comment ?? null, checksum, fingerprint: before.fingerprint });
+    if (!row) throw await lostRace(tx, id, 'approved', body.version, actor.user.id);
+    await insertPlanEvent(tx, event(row, actor, 'approved', before.status, body.comment ?? null, { checksum }));
+    await recordAudit(tx, auditActor(actor), { action: 'plan.approved', entityType: 'plan', entityId: id, details: { version: row.version, checksum, comment: body.comment ?? null } });
+
+    const superseded = await supersedeOverlapping(tx, { newId: id, batteryId: row.batteryId, start: row.deliveryStart, end: row.deliveryEnd });
+    for (const old of superseded) {
+      await insertPlanEvent(tx, {
+        planId: old.id, action: 'superseded', actorId: actor.user.id, actorName: actor.user.name, actorEmail: actor.user.email,
+        fromStatus: 'approved', toStatus: 'superseded', version: old.version, comment: null, details: { supersededBy: id },
+      });
+      await recordAudit(tx, auditActor(actor), { action: 'plan.superseded', entityType: 'plan', entityId: old.id, details: { supersededBy: id } });
+    }
+    return { plan: row, supersededPlanIds: superseded.map((s) => s.id) };
+  });
+  await notifyDecision(actor, outcome.plan, 'approved', body.comment);
+  return outcome;
+}
+
+export async function rejectPlan(actor: Actor, id: string, body: { comment: string; version: number }): Promise<PlanRow> {
+  const plan = await getDb().transaction(async (tx) => {
+    const before = await load(tx, id);
+    const refused = refusal(before, 'rejected', body.version, actor.user.id);
+    if (refused) throw refused;
+    const row = await markRejected(tx, id, body.version, actor.user.id, body.comment);
+    if (!row) throw await lostRace(tx, id, 'rejected', body.version, actor.user.id);
+    await insertPlanEvent(tx, event(row, actor, 'rejected', before.status, body.comment));
+    await recordAudit(tx, auditActor(actor), { action: 'plan.rejected', entityType: 'plan', entityId: id, details: { version: row.version, comment: body.comment } });
+    return row;
+  });
+  await notifyDecision(actor, plan, 'rejected', body.comment);
+  return plan;
+}
+
+/** A rejected plan becomes a new draft with the same parameters, snapshot and results. */
+export async function copyPlan(actor: Actor, id: string): Promise<PlanRow> {
+  return getDb().transaction(async (tx) => {
+    const source = await load(tx, id);
+    if (source.status !== 'rejected') {
+      throw new AppError('wrong_status', `The plan is ${source.status}; only a rejected plan is copied into a new draft.`, 409);
+    }
+    const copy = await insertDraftCopy(tx, source, actor.user.id);
+    await insertPlanEvent(tx, event(source, actor, 'copied', source.status, null, { copyId: copy.id }));
+    await recordAudit(tx, auditActor(actor), { action: 'plan.copied', entityType: 'plan', entityId: copy.id, details: { copiedFrom: id } });
+    return copy;
+  });
+}
