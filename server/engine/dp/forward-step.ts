@@ -43,7 +43,7 @@ export function forwardStep(
   const wHi = store.hi[w] ?? 0;
   const yMin = z + (su[base] ?? 0);
   const yMax = z + (su[base + kSeg] ?? 0);
-  let yL = wLo > yMin ? wLo : yMin;
+  const yL = wLo > yMin ? wLo : yMin;
   const yR = wHi < yMax ? wHi : yMax;
   let y = yL;
   if (yL > yR) {
@@ -106,9 +106,15 @@ export function forwardStep(
       }
     }
   }
-  // Slopes of V_{t+1} at y.
-  out.wRight = j < nW ? (sl[o + j] ?? 0) : Infinity;
-  out.wLeft = y > pw && j < nW ? (sl[o + j] ?? 0) : j > 0 ? (sl[o + j - 1] ?? 0) : -Infinity;
+  // Slopes of V_{t+1} at y. A breakpoint within tol counts as y's own: W's
+  // positions are sums of lengths while y may come from z + u, so one kink
+  // can land an ulp apart on the two sides.
+  let wl = j < nW ? (sl[o + j] ?? 0) : nW > 0 ? (sl[o + nW - 1] ?? 0) : -Infinity;
+  let wr = j < nW ? wl : Infinity;
+  if (y - pw <= tol) wl = j > 0 ? (sl[o + j - 1] ?? 0) : -Infinity;
+  if (j < nW && (j === nW - 1 ? wHi : pw + (len[o + j] ?? 0)) - y <= tol) wr = j + 1 < nW ? (sl[o + j + 1] ?? 0) : Infinity;
+  out.wLeft = wl;
+  out.wRight = wr;
   // The stage side: at a stage point use its exact optimum, else interpolate.
   const atPoint = k === kSeg || y === z + (su[base + k] ?? 0) || y < yMin;
   if (atPoint) {
@@ -129,8 +135,8 @@ export function forwardStep(
     out.u = uu;
     out.c = c0 + th * ((st.c[base + k + 1] ?? 0) - c0);
     out.d = d0 + th * ((st.d[base + k + 1] ?? 0) - d0);
-    out.hLeft = ss[base + k] ?? 0;
-    out.hRight = out.hLeft;
+    out.hLeft = uu - u0 <= tol ? (k > 0 ? (ss[base + k - 1] ?? 0) : -Infinity) : (ss[base + k] ?? 0);
+    out.hRight = u1 - uu <= tol ? (k + 1 < kSeg ? (ss[base + k + 1] ?? 0) : Infinity) : (ss[base + k] ?? 0);
   }
   out.y = y;
   return true;

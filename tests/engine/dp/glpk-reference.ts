@@ -15,10 +15,12 @@ export interface GlpkOutcome {
 }
 
 export interface GlpkTweaks {
-  /** Replace the initial energy (kWh). */
+  /** Replace the initial energy (kWh); a cyclic end stays at the problem's own initial energy. */
   readonly initialEnergyKwh?: number;
   /** Inject `deltaKwh` into the SoC equation of step `step` (its right-hand side). */
   readonly inject?: { readonly step: number; readonly deltaKwh: number };
+  /** Fix e_1, e_2, … to these energies (kWh): the first decisions of another plan. */
+  readonly fixSocKwh?: readonly number[];
 }
 
 type Row = { name: string; vars: { name: string; coef: number }[]; bnds: { type: number; lb: number; ub: number } };
@@ -42,7 +44,9 @@ export function solveWithGlpk(p: DispatchProblem, tweaks: GlpkTweaks = {}): Glpk
     box(`d${t}`, 0, b.powerDischargeKw);
     box(`m${t}`, 0, p.site.importLimitKw);
     box(`x${t}`, 0, p.site.exportLimitKw);
-    box(`e${t + 1}`, emin, emax);
+    const fixed = tweaks.fixSocKwh?.[t];
+    if (fixed === undefined) box(`e${t + 1}`, emin, emax);
+    else box(`e${t + 1}`, fixed, fixed);
     obj.push({ name: `m${t}`, coef: ((p.priceImport[t] ?? 0) * dt) / 1000 });
     obj.push({ name: `x${t}`, coef: (-(p.priceExport[t] ?? 0) * dt) / 1000 });
     obj.push({ name: `d${t}`, coef: (b.degradationCostPerMwh * dt) / 1000 });
@@ -65,7 +69,8 @@ export function solveWithGlpk(p: DispatchProblem, tweaks: GlpkTweaks = {}): Glpk
   }
   const rule = p.terminal;
   const last = { name: `e${n}`, coef: 1 };
-  if (rule.kind === 'cyclic') rows.push({ name: 'end', vars: [last], bnds: { type: glpk.GLP_FX, lb: e0, ub: e0 } });
+  const e0End = p.initialEnergyKwh;
+  if (rule.kind === 'cyclic') rows.push({ name: 'end', vars: [last], bnds: { type: glpk.GLP_FX, lb: e0End, ub: e0End } });
   if (rule.kind === 'target') {
     const target = (b.energyKwh * rule.socPct) / 100;
     rows.push({ name: 'end', vars: [last], bnds: { type: glpk.GLP_LO, lb: target, ub: 0 } });

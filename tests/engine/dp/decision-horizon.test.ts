@@ -1,0 +1,58 @@
+import { describe, expect, it } from 'vitest';
+import { decisionHorizon, solveDispatchDp } from '../../../server/engine/dp';
+import type { DispatchProblem } from '../../../server/engine/types';
+import { solveWithGlpk } from './glpk-reference';
+import { randomProblem, rng, VARIANTS } from './random-problems';
+
+function truncate(p: DispatchProblem, steps: number): DispatchProblem {
+  const cut = <T>(xs: readonly T[]): T[] => xs.slice(0, steps);
+  return {
+    ...p, timesMs: cut(p.timesMs), priceImport: cut(p.priceImport), priceExport: cut(p.priceExport),
+    loadKw: cut(p.loadKw), generationKw: cut(p.generationKw), dayIndex: cut(p.dayIndex),
+  };
+}
+
+describe('decision horizon', () => {
+  it('certifies first decisions that stay optimal for every lookahead at least that deep', () => {
+    let checked = 0;
+    let shorter = 0;
+    for (let i = 0; i < 40; i++) {
+      const seed = 8_000 + i;
+      const r = rng(seed);
+      const p = randomProblem(VARIANTS[i % VARIANTS.length]!, seed, 30 + Math.floor(r() * 50));
+      const n = p.priceImport.length;
+      const steps = 1 + Math.floor(r() * 5);
+      const dh = decisionHorizon(p, steps);
+      if (!dh.ok) continue;
+      expect(dh.depthSteps).toBeGreaterThanOrEqual(steps);
+      expect(dh.depthSteps).toBeLessThanOrEqual(n);
+      expect(dh.depthHours).toBeCloseTo(dh.depthSteps * p.stepHours, 12);
+      if (dh.depthSteps < n) shorter++;
+      const full = solveDispatchDp(p);
+      const first = full.socKwh.slice(1, steps + 1);
+      for (const depth of [dh.depthSteps, dh.depthSteps + Math.floor(r() * (n - dh.depthSteps + 1))]) {
+        const cut = truncate(p, depth);
+        // The DP with the shorter lookahead takes the same first decisions, bit for bit.
+        const short = solveDispatchDp(cut);
+        expect(short.socKwh.slice(1, steps + 1)).toEqual(first);
+        // [S] GLPK on the truncated problem: fixing the first SoCs to the full
+        // lookahead's costs nothing, i.e. those decisions are optimal at this depth too.
+        const free = solveWithGlpk(cut);
+        const fixed = solveWithGlpk(cut, { fixSocKwh: first });
+        expect(fixed.status, `seed ${seed} depth ${depth}`).toBe('optimal');
+        expect(Math.abs(fixed.objective - free.objective)).toBeLessThanOrEqual(1e-9 * Math.max(1, Math.abs(free.objective)));
+        checked++;
+      }
+    }
+    expect(checked).toBeGreaterThan(60);
+    // Prices far ahead must stop mattering in most instances, else nothing was certified.
+    expect(shorter).toBeGreaterThan(20);
+  });
+
+  it('refuses a number of steps outside the problem', () => {
+    const p = randomProblem('negative prices', 3, 10);
+    const dh = decisionHorizon(p, 11);
+    expect(dh.ok).toBe(false);
+    expect(!dh.ok && dh.error).toMatch(/steps must be a whole number from 1 to 10, got 11/);
+  });
+});
