@@ -33,14 +33,16 @@ export async function updateUser(db: DbOrTx, id: string, patch: UserPatch): Prom
 }
 
 /**
- * Locks every active admin row. Two admins demoting each other at once then queue here,
- * and the second sees the first's change, so the last admin cannot disappear in a race.
+ * Locks every active admin row, always in id order so two transactions cannot deadlock.
+ * Two admins demoting each other at once then queue here, and the second sees the
+ * first's change, so the last admin cannot disappear in a race.
  */
 export async function lockActiveAdmins(tx: DbOrTx): Promise<string[]> {
   const rows = await tx
     .select({ id: users.id })
     .from(users)
     .where(and(eq(users.role, 'admin'), eq(users.disabled, false)))
+    .orderBy(asc(users.id))
     .for('update');
   return rows.map((r) => r.id);
 }

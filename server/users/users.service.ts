@@ -2,7 +2,7 @@
 import { randomUUID } from 'node:crypto';
 import type { Role } from '@shared/schemas/auth';
 import type { InviteResult, User } from '@shared/schemas/users';
-import { getDb, type DbOrTx } from '../db/client';
+import { getDb } from '../db/client';
 import { conflict, notFound } from '../http/app-error';
 import { logger } from '../logger';
 import { recordAudit, type AuditActor } from '../audit/audit.service';
@@ -69,10 +69,9 @@ export async function resendInvitation(id: string, admin: Admin, appOrigin: stri
   return { user: toUser(user), mail: await mailLink(user, token, appOrigin, admin) };
 }
 
-async function guardLastAdmin(tx: DbOrTx, row: UserRow, patch: repo.UserPatch) {
+function guardLastAdmin(admins: string[], row: UserRow, patch: repo.UserPatch) {
   const losesAdmin = row.role === 'admin' && !row.disabled && ((patch.role && patch.role !== 'admin') || patch.disabled === true);
   if (!losesAdmin) return;
-  const admins = await repo.lockActiveAdmins(tx);
   if (admins.filter((id) => id !== row.id).length === 0) {
     throw conflict(`${row.email} is the last active admin. Make another user admin first, so someone can still manage users.`);
   }
@@ -80,9 +79,11 @@ async function guardLastAdmin(tx: DbOrTx, row: UserRow, patch: repo.UserPatch) {
 
 export async function updateUser(id: string, patch: repo.UserPatch, admin: Admin): Promise<User> {
   const updated = await getDb().transaction(async (tx) => {
+    // Admin rows are locked before the target row, in the same order by every transaction.
+    const admins = patch.role !== undefined || patch.disabled !== undefined ? await repo.lockActiveAdmins(tx) : [];
     const row = await repo.findUserById(tx, id, true);
     if (!row) throw notFound('The user');
-    await guardLastAdmin(tx, row, patch);
+    guardLastAdmin(admins, row, patch);
     const next = await repo.updateUser(tx, id, patch);
     if (!next) throw notFound('The user');
     const audit = (action: string, details: Record<string, unknown>) =>
