@@ -194,30 +194,18 @@ function main(): void {
   const load = (ms: number, _s: number, day: Day, r: () => number) => loadKw(ms, day, clock, r);
   const pv = (ms: number, stepMs: number, day: Day, r: () => number) => pvKw(ms, stepMs, day, clock, r);
 
-  const summary = [
-    writeSeries('prices-2026-hourly.csv', series('price', 2, price, 1), YEAR_START, YEAR_END, HOUR_MS, days, clock),
-    writeSeries('prices-week-2026-05-04-15min.csv', series('price', 2, price, 2), WEEK_START, WEEK_END, HOUR_MS / 4, days, clock),
-    writeSeries('site-load-2026-hourly.csv', series('load', 1, load, 3), YEAR_START, YEAR_END, HOUR_MS, days, clock),
-    writeSeries(
-      'site-load-week-2026-05-04-15min.csv',
-      series('load', 1, load, 4),
-      WEEK_START,
-      WEEK_END,
-      HOUR_MS / 4,
-      days,
-      clock,
-    ),
-    writeSeries('pv-generation-2026-hourly.csv', series('generation', 1, pv, 5), YEAR_START, YEAR_END, HOUR_MS, days, clock),
-    writeSeries(
-      'pv-generation-week-2026-05-04-15min.csv',
-      series('generation', 1, pv, 6),
-      WEEK_START,
-      WEEK_END,
-      HOUR_MS / 4,
-      days,
-      clock,
-    ),
-  ];
+  const year = [YEAR_START, YEAR_END, HOUR_MS] as const;
+  const week = [WEEK_START, WEEK_END, HOUR_MS / 4] as const;
+  const demo = [
+    ['prices-2026-hourly.csv', series('price', 2, price, 1), year],
+    ['prices-week-2026-05-04-15min.csv', series('price', 2, price, 2), week],
+    ['site-load-2026-hourly.csv', series('load', 1, load, 3), year],
+    ['site-load-week-2026-05-04-15min.csv', series('load', 1, load, 4), week],
+    ['pv-generation-2026-hourly.csv', series('generation', 1, pv, 5), year],
+    ['pv-generation-week-2026-05-04-15min.csv', series('generation', 1, pv, 6), week],
+  ] as const;
+  const summary = demo.map(([file, s, [from, to, stepMs]]) => writeSeries(file, s, from, to, stepMs, days, clock));
+
   // Other accepted layouts of one day (2026-05-05, no DST change), for the upload journeys.
   const dayStart = WEEK_START + DAY_MS;
   const dayEnd = dayStart + DAY_MS;

@@ -65,23 +65,30 @@ function commonStep(rows: readonly Indexed[]): { stepMs: number; example: Indexe
 
 export function checkSequence(rows: readonly TimedRow[], fillGaps: boolean, issues: IssueList): RegularSeries | null {
   let unreadable = 0;
-  const byInstant = new Map<number, TimedRow>();
+  // Most files are strictly ascending: a row later than every earlier one cannot
+  // repeat one, so the instant map is only built once a row breaks that.
+  let latestMs = Number.NEGATIVE_INFINITY;
+  let byInstant: Map<number, TimedRow> | null = null;
   const unique: Indexed[] = [];
   rows.forEach((row, index) => {
     if (Number.isNaN(row.ms)) {
       unreadable += 1;
       return;
     }
-    const first = byInstant.get(row.ms);
-    if (first) {
-      issues.add(
-        'order',
-        row.line,
-        `Line ${row.line}: the time ${row.timeText} is the same interval as ${at(first)}. Keep only one of the two rows.`,
-      );
-      return;
+    if (row.ms <= latestMs) {
+      byInstant ??= new Map(unique.map((u) => [u.row.ms, u.row]));
+      const first = byInstant.get(row.ms);
+      if (first) {
+        issues.add(
+          'order',
+          row.line,
+          `Line ${row.line}: the time ${row.timeText} is the same interval as ${at(first)}. Keep only one of the two rows.`,
+        );
+        return;
+      }
     }
-    byInstant.set(row.ms, row);
+    latestMs = Math.max(latestMs, row.ms);
+    byInstant?.set(row.ms, row);
     unique.push({ row, index, unreadableBefore: unreadable });
   });
 

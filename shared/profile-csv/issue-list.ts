@@ -51,11 +51,6 @@ export class IssueList {
     return this.total;
   }
 
-  /** True once the cap is reached: callers may stop looking for more. */
-  get full(): boolean {
-    return this.kept.length >= this.max;
-  }
-
   issues(): ProfileIssue[] {
     // Stable sort: problems on one line keep the order they were found in.
     return [...this.kept].sort((a, b) => a.line - b.line);

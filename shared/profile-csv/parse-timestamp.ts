@@ -24,8 +24,12 @@ const DATE_ONLY = /^\d{4}-\d{2}-\d{2}$/;
 
 const DAY_MS = 86_400_000;
 
+const MONTH_DAYS = [31, 28, 31, 30, 31, 30, 31, 31, 30, 31, 30, 31];
+
 function daysInMonth(year: number, month: number): number {
-  return new Date(Date.UTC(year, month, 0)).getUTCDate();
+  // Gregorian leap years: divisible by 4, except centuries not divisible by 400.
+  const leap = year % 4 === 0 && (year % 100 !== 0 || year % 400 === 0);
+  return month === 2 && leap ? 29 : (MONTH_DAYS[month - 1] ?? 0);
 }
 
 const fail = (reason: string): TimestampReading => ({ ok: false, reason });

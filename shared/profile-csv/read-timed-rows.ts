@@ -29,31 +29,103 @@ export interface TimedRows {
   /** First row whose explicit offset differs from the site zone's offset at that instant. */
   readonly foreignOffset: { line: number; offset: number; zoneOffset: number } | null;
   readonly foreignOffsetRows: number;
-  readonly blankLines: number[];
 }
 
 const HOUR_MS = 3_600_000;
 const utc = (minutes: number): string => `UTC${formatOffset(minutes)}`;
 
+/** Follows the explicit offsets through the file and flags changes the site's zone does not make. */
+class OffsetTracker {
+  private previous: { line: number; ms: number; offset: number } | null = null;
+  foreign: TimedRows['foreignOffset'] = null;
+  foreignRows = 0;
+
+  constructor(
+    private readonly clock: ZoneClock,
+    private readonly issues: IssueList,
+  ) {}
+
+  instant(line: number, wallMs: number, offset: number): number {
+    const ms = wallMs - offset * 60_000;
+    const zoneOffset = this.clock.offsetAt(ms);
+    if (zoneOffset !== offset) {
+      this.foreignRows += 1;
+      this.foreign ??= { line, offset, zoneOffset };
+    }
+    const prev = this.previous;
+    if (prev && prev.offset !== offset) {
+      // A change is explained only when the site's zone changes by the same amount in between.
+      const zoneBefore = this.clock.offsetAt(prev.ms);
+      if (offset - prev.offset !== zoneOffset - zoneBefore) {
+        const zone = this.clock.timeZone;
+        const zoneSays =
+          zoneBefore === zoneOffset ? `stays at ${utc(zoneOffset)}` : `goes from ${utc(zoneBefore)} to ${utc(zoneOffset)}`;
+        this.issues.add(
+          'offset',
+          line,
+          `Line ${line}: the UTC offset jumps from ${formatOffset(prev.offset)} (line ${prev.line}) to ${formatOffset(offset)}, but ${zone} ${zoneSays} between these times. Check the times around this line; use one offset throughout or the offsets of ${zone}.`,
+        );
+      }
+    }
+    this.previous = { line, ms, offset };
+    return ms;
+  }
+}
+
+/** The one instant a local wall time names in the site's zone, or NaN after reporting why there is none. */
+function localInstant(line: number, timeText: string, wallMs: number, clock: ZoneClock, issues: IssueList): number {
+  const instants = clock.instantsOf(wallMs);
+  if (instants.length === 1) return instants[0] as number;
+  const zone = clock.timeZone;
+  const before = clock.offsetAt(wallMs - 15 * HOUR_MS);
+  const after = clock.offsetAt(wallMs + 15 * HOUR_MS);
+  issues.add(
+    'local-time',
+    line,
+    instants.length === 0
+      ? `Line ${line}: ${timeText} does not exist in ${zone}: the clocks jump forward that night (${utc(before)} to ${utc(after)}). Remove the row, or write every time with its UTC offset.`
+      : `Line ${line}: ${timeText} happens twice in ${zone} (the clocks go back from ${utc(before)} to ${utc(after)} that night), so it is ambiguous. Write every time with its UTC offset, e.g. ${timeText}${formatOffset(before)} for the first and ${timeText}${formatOffset(after)} for the second.`,
+  );
+  return Number.NaN;
+}
+
+/** The value in the upload unit; NaN when blank (to be filled) or unreadable (reported). */
+function readValue(line: number, cell: string, ctx: TimedRowsContext, issues: IssueList): number {
+  const reading = parseNumber(cell, ctx.decimalComma);
+  if (reading.ok) return reading.value;
+  if (reading.blank && !ctx.fillGaps) {
+    issues.add(
+      'number',
+      line,
+      `Line ${line}: the value in "${ctx.valueHeader}" is empty. Enter a number, or upload with gap filling turned on to interpolate it.`,
+    );
+  } else if (!reading.blank) {
+    issues.add(
+      'number',
+      line,
+      `Line ${line}: ${reading.reason} in "${ctx.valueHeader}". Write a plain number such as -12.5${ctx.decimalComma ? ' or -12,5' : ''}.`,
+    );
+  }
+  return Number.NaN;
+}
+
 export function readTimedRows(csvRows: readonly CsvRow[], ctx: TimedRowsContext, issues: IssueList): TimedRows {
   const { clock } = ctx;
   const zone = clock.timeZone;
+  const offsets = new OffsetTracker(clock, issues);
   const rows: TimedRow[] = [];
   let withOffset = 0;
   let localTimes = 0;
   let firstStyle: { line: number; offset: boolean } | null = null;
-  let prevOffsetRow: { line: number; ms: number; offset: number } | null = null;
-  let foreignOffset: TimedRows['foreignOffset'] = null;
-  let foreignOffsetRows = 0;
-  const blankLines: number[] = [];
 
   for (const { line, fields } of csvRows) {
     const timeText = fields[ctx.timeColumn] ?? '';
     if (fields.length <= Math.max(ctx.timeColumn, ctx.valueColumn)) {
+      const n = fields.length;
       issues.add(
         'structure',
         line,
-        `Line ${line} has ${fields.length} field${fields.length === 1 ? '' : 's'} but the header has ${ctx.columnCount}. Give every row a time and a value, separated like the header.`,
+        `Line ${line} has ${n} field${n === 1 ? '' : 's'} but the header has ${ctx.columnCount}. Give every row a time and a value, separated like the header.`,
       );
       rows.push({ line, ms: Number.NaN, value: Number.NaN, timeText });
       continue;
@@ -79,66 +151,13 @@ export function readTimedRows(csvRows: readonly CsvRow[], ctx: TimedRowsContext,
       }
       if (time.offsetMinutes !== null) {
         withOffset += 1;
-        ms = time.wallMs - time.offsetMinutes * 60_000;
-        const zoneOffset = clock.offsetAt(ms);
-        if (zoneOffset !== time.offsetMinutes) {
-          foreignOffsetRows += 1;
-          foreignOffset ??= { line, offset: time.offsetMinutes, zoneOffset };
-        }
-        if (prevOffsetRow && prevOffsetRow.offset !== time.offsetMinutes) {
-          // A change is explained only when the site's zone changes by the same amount in between.
-          const zoneBefore = clock.offsetAt(prevOffsetRow.ms);
-          if (time.offsetMinutes - prevOffsetRow.offset !== zoneOffset - zoneBefore) {
-            const zoneSays =
-              zoneBefore === zoneOffset ? `stays at ${utc(zoneOffset)}` : `goes from ${utc(zoneBefore)} to ${utc(zoneOffset)}`;
-            issues.add(
-              'offset',
-              line,
-              `Line ${line}: the UTC offset jumps from ${formatOffset(prevOffsetRow.offset)} (line ${prevOffsetRow.line}) to ${formatOffset(time.offsetMinutes)}, but ${zone} ${zoneSays} between these times. Check the times around this line; use one offset throughout or the offsets of ${zone}.`,
-            );
-          }
-        }
-        prevOffsetRow = { line, ms, offset: time.offsetMinutes };
+        ms = offsets.instant(line, time.wallMs, time.offsetMinutes);
       } else {
         localTimes += 1;
-        const instants = clock.instantsOf(time.wallMs);
-        const before = clock.offsetAt(time.wallMs - 15 * HOUR_MS);
-        const after = clock.offsetAt(time.wallMs + 15 * HOUR_MS);
-        if (instants.length === 1) ms = instants[0] as number;
-        else if (instants.length === 0) {
-          issues.add(
-            'local-time',
-            line,
-            `Line ${line}: ${timeText} does not exist in ${zone}: the clocks jump forward that night (${utc(before)} to ${utc(after)}). Remove the row, or write every time with its UTC offset.`,
-          );
-        } else {
-          issues.add(
-            'local-time',
-            line,
-            `Line ${line}: ${timeText} happens twice in ${zone} (the clocks go back from ${utc(before)} to ${utc(after)} that night), so it is ambiguous. Write every time with its UTC offset, e.g. ${timeText}${formatOffset(before)} for the first and ${timeText}${formatOffset(after)} for the second.`,
-          );
-        }
+        ms = localInstant(line, timeText, time.wallMs, clock, issues);
       }
     }
-
-    const reading = parseNumber(fields[ctx.valueColumn] ?? '', ctx.decimalComma);
-    let value = Number.NaN;
-    if (reading.ok) value = reading.value;
-    else if (reading.blank && ctx.fillGaps) blankLines.push(line);
-    else if (reading.blank) {
-      issues.add(
-        'number',
-        line,
-        `Line ${line}: the value in "${ctx.valueHeader}" is empty. Enter a number, or upload with gap filling turned on to interpolate it.`,
-      );
-    } else {
-      issues.add(
-        'number',
-        line,
-        `Line ${line}: ${reading.reason} in "${ctx.valueHeader}". Write a plain number such as -12.5${ctx.decimalComma ? ' or -12,5' : ''}.`,
-      );
-    }
-    rows.push({ line, ms, value, timeText });
+    rows.push({ line, ms, value: readValue(line, fields[ctx.valueColumn] ?? '', ctx, issues), timeText });
   }
-  return { rows, withOffset, localTimes, foreignOffset, foreignOffsetRows, blankLines };
+  return { rows, withOffset, localTimes, foreignOffset: offsets.foreign, foreignOffsetRows: offsets.foreignRows };
 }

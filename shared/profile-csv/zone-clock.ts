@@ -22,8 +22,20 @@ export interface ZoneClock {
   instantsOf(wallMs: number): number[];
 }
 
+// One clock per zone for the life of the page or process, so its hourly offset
+// cache serves every upload (a year of hours is about 9 000 small entries).
+const clocks = new Map<string, ZoneClock>();
+
 /** Returns null when the runtime does not know the zone. */
 export function createZoneClock(timeZone: string): ZoneClock | null {
+  const known = clocks.get(timeZone);
+  if (known) return known;
+  const clock = buildZoneClock(timeZone);
+  if (clock) clocks.set(timeZone, clock);
+  return clock;
+}
+
+function buildZoneClock(timeZone: string): ZoneClock | null {
   try {
     // Throws a RangeError for names the runtime's time-zone database lacks.
     new Intl.DateTimeFormat('en-US', { timeZone });
