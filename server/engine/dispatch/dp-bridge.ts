@@ -1,22 +1,19 @@
 /**
- * INTEGRATION POINT for the exact dynamic-programming path (issue 9), the only
- * place the LP path refers to it. The DP colleague exports from
- * `server/engine/dp/index.ts`:
- *   canSolveWithDp(problem): { ok: true } | { ok: false; reason: string }
- *   solveDispatchDp(problem): DispatchSolution
- * Until that file exists, every problem reports that the DP path is unavailable
- * and `method: 'auto'` falls back to the LP.
+ * The single integration point between the LP path and the exact
+ * dynamic-programming path (issue 9, `server/engine/dp/`). `auto` asks
+ * canSolveWithDp first and uses the dynamic program only where it is exact.
  */
 import type { DispatchProblem, DispatchSolution } from '../types';
+import { canSolveWithDp, solveDispatchDp } from '../dp';
 
 export type DpCheck = { ok: true } | { ok: false; reason: string };
 
 export function checkDp(problem: DispatchProblem): DpCheck {
-  if (problem.freeInitialEnergy) return { ok: false, reason: 'a free initial SoC (steady cycle) is solved by the LP' };
-  return { ok: false, reason: 'the exact dynamic-programming path is not installed (server/engine/dp/index.ts)' };
+  return canSolveWithDp(problem);
 }
 
+/** The DP solution, or null when the DP declines (then the LP solves it). */
 export function solveWithDp(problem: DispatchProblem): DispatchSolution | null {
-  void problem;
-  return null;
+  const solution = solveDispatchDp(problem);
+  return solution.status === 'error' ? null : solution;
 }

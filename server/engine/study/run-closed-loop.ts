@@ -6,7 +6,8 @@
  * charge sees the peak reached so far and a throughput cap the energy already
  * discharged that day, so each window prices only what it can still change.
  */
-import type { DispatchSolution } from '../types';
+import type { DispatchProblem, DispatchSolution } from '../types';
+import { createDpClosedLoop, type DpWindowPlan } from '../dp';
 import type { AlignedInputs } from '../inputs/align-inputs';
 import type { LpBasis } from '../lp/lp-model';
 import { HighsSession } from '../lp/solve';
@@ -69,9 +70,10 @@ export function runClosedLoop(inputs: AlignedInputs, req: ClosedLoopRequest): Cl
   const whole = problemFor(inputs, req.from, req.to, req.initialEnergyKwh, terminalRuleFor(req.terminal, inputs, req.to, req.steady));
   const issue = validateProblem(whole);
   if (issue) return failedRun('error', issue.message, elapsed());
-  const session = new HighsSession();
   const usable = usableEnergyKwh(inputs.battery);
   const band = req.bandFraction ?? DEFAULT_BAND_FRACTION;
+  if (req.method !== 'lp' && checkDp(whole).ok) return runClosedLoopOnDp(inputs, req, whole, usable, band, elapsed);
+  const session = new HighsSession();
   const applied = { chargeKw: [] as number[], dischargeKw: [] as number[], gridImportKw: [] as number[], gridExportKw: [] as number[] };
   const socKwh = [req.initialEnergyKwh];
   let basis: LpBasis | undefined;
@@ -131,5 +133,51 @@ export function runClosedLoop(inputs: AlignedInputs, req: ClosedLoopRequest): Cl
     meanLeavingArcSteps: req.referenceSoc ? leavingSum / solves : NaN,
     leavingIntoCommitted,
     method: dpSolves === 0 ? 'lp' : dpSolves === solves ? 'dp' : 'mixed',
+  };
+}
+
+/**
+ * The same closed loop on the exact dynamic program's warm receding-horizon
+ * runner (issue 9): consecutive windows reuse value functions and decisions,
+ * bit-identical to solving each window cold; figures as in the LP loop above.
+ */
+function runClosedLoopOnDp(
+  inputs: AlignedInputs, req: ClosedLoopRequest, whole: DispatchProblem, usable: number, band: number, elapsed: () => number,
+): ClosedLoopRun {
+  let shareSum = 0, leavingSum = 0, leavingIntoCommitted = 0;
+  const run = createDpClosedLoop(whole).run({
+    horizonSteps: req.horizonSteps,
+    replanSteps: req.replanSteps,
+    terminalForWindow: (_start, end) => terminalRuleFor(req.terminal, inputs, req.from + end, req.steady),
+    ...(req.referenceSoc
+      ? {
+          onPlan: (plan: DpWindowPlan) => {
+            const fig = arcFigures(plan.socKwh.subarray(1), req.referenceSoc!.slice(plan.startStep, plan.endStep), usable, band);
+            shareSum += fig.nearSteadyShare;
+            leavingSum += fig.leavingArcSteps;
+            const steps = plan.endStep - plan.startStep;
+            if (steps === req.horizonSteps && fig.leavingArcSteps > 0 && steps - fig.leavingArcSteps < req.replanSteps) leavingIntoCommitted++;
+          },
+        }
+      : {}),
+  });
+  const sol = run.solution;
+  if (sol.status !== 'optimal') return failedRun(sol.status, sol.message ?? sol.status, elapsed());
+  const discharged = sol.dischargeKw.reduce((sum, d) => sum + d * inputs.stepHours, 0);
+  return {
+    status: 'optimal',
+    cost: scheduleCost({ ...whole, degradationCostPerMwh: inputs.battery.degradationCostPerMwh, demandChargePerKw: inputs.site.demandChargePerKw }, sol),
+    equivalentCycles: discharged / usable,
+    solves: run.windows,
+    seconds: elapsed(),
+    chargeKw: sol.chargeKw,
+    dischargeKw: sol.dischargeKw,
+    gridImportKw: sol.gridImportKw,
+    gridExportKw: sol.gridExportKw,
+    socKwh: sol.socKwh,
+    nearSteadyShare: req.referenceSoc ? shareSum / run.windows : NaN,
+    meanLeavingArcSteps: req.referenceSoc ? leavingSum / run.windows : NaN,
+    leavingIntoCommitted,
+    method: 'dp',
   };
 }
