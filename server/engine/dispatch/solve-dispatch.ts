@@ -23,6 +23,7 @@ export function solveDispatch(problem: DispatchProblem, options: DispatchOptions
     if (check.ok) {
       const solution = solveWithDp(problem);
       if (solution) return solution;
+      // The DP declined (bad input): the LP path's validation words the message.
     } else if (method === 'dp') {
       return failedSolution('error', `the dynamic-programming path cannot solve this problem: ${check.reason}`, 'dp');
     }

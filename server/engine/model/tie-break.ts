@@ -30,11 +30,22 @@ function atBound(value: number, lower: number, upper: number): boolean {
   return Math.abs(value - lower) <= 1e-7 * (1 + Math.abs(lower)) || Math.abs(value - upper) <= 1e-7 * (1 + Math.abs(upper));
 }
 
-function decisionColumns(model: DispatchModel): number[] {
-  const { layout } = model;
-  const offsets = [layout.charge, layout.discharge, layout.gridImport, layout.gridExport].filter((o) => o >= 0);
+/**
+ * Columns whose move would change the schedule. Grid import/export at zero are
+ * left out: at equal import and export prices they tie with each other (import
+ * and export more at once), which netting removes after the solve; at a grid
+ * limit they stay in.
+ */
+function decisionColumns(model: DispatchModel, x: Float64Array): number[] {
+  const { layout, lp } = model;
   const cols: number[] = [];
-  for (let t = 0; t < layout.steps; t++) for (const o of offsets) cols.push(t * layout.colsPerStep + o);
+  for (let t = 0; t < layout.steps; t++) {
+    const base = t * layout.colsPerStep;
+    cols.push(base + layout.charge, base + layout.discharge);
+    for (const o of [layout.gridImport, layout.gridExport]) {
+      if (o >= 0 && x[base + o]! > 1e-7 * (1 + lp.colUpper[base + o]!)) cols.push(base + o);
+    }
+  }
   if (layout.initialEnergyCol >= 0) cols.push(layout.initialEnergyCol);
   if (layout.peakCol >= 0) cols.push(layout.peakCol);
   return cols;
@@ -52,7 +63,7 @@ export function mayHaveTies(model: DispatchModel, stage1: LpResult): boolean {
   const { lp } = model;
   const d = reducedCosts(lp, stage1.rowDual);
   const basic = highsBasisStatus.basic;
-  const columns = decisionColumns(model);
+  const columns = decisionColumns(model, stage1.x);
   if (stage1.basis) {
     const status = stage1.basis.colStatus;
     return columns.some((j) => status[j] !== basic && Math.abs(d[j]!) <= REDUCED_COST_TOL);
