@@ -21,6 +21,7 @@ export type TimestampReading =
 const ISO_PATTERN =
   /^(\d{4})-(\d{2})-(\d{2})[Tt ](\d{2}):(\d{2})(?::(\d{2})(?:[.,](\d{1,9}))?)? ?(?:([Zz])|([+-])(\d{2})(?::?(\d{2}))?)?$/;
 const DATE_ONLY = /^\d{4}-\d{2}-\d{2}$/;
+const TIME_ONLY = /^\d{1,2}:\d{2}(:\d{2})?$/;
 
 const DAY_MS = 86_400_000;
 
@@ -39,6 +40,8 @@ export function parseTimestamp(cell: string): TimestampReading {
   if (m === null) {
     if (cell === '') return fail('the time is empty');
     if (DATE_ONLY.test(cell)) return fail(`"${cell}" has a date but no time of day`);
+    // Spreadsheet exports often split date and time into two columns.
+    if (TIME_ONLY.test(cell)) return fail(`"${cell}" has a time of day but no date (put date and time in one column)`);
     return fail(`"${truncate(cell)}" is not an ISO 8601 date and time`);
   }
   const year = Number(m[1]);

@@ -347,3 +347,13 @@ describe('rejects bad options before reading the file (line 0)', () => {
     });
   });
 });
+
+describe('explains common spreadsheet layouts it does not read', () => {
+  it('rejects date and time split into two columns, saying to join them', () => {
+    const text = csv('date,time,price', '2026-01-01,00:00,10', '2026-01-01,01:00,11');
+    expectIssues(text, [
+      [2, /"00:00" has a time of day but no date \(put date and time in one column\)/],
+      [3, /"01:00" has a time of day but no date/],
+    ]);
+  });
+});
