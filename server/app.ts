@@ -21,12 +21,15 @@ import { batteriesRouter } from './batteries/batteries.routes';
 import { profilesRouter } from './profiles/profiles.routes';
 import { signOffRouter } from './sign-off/sign-off.routes';
 import { exportRouter } from './export/export.routes';
+import { plansRouter } from './plans/plans.routes';
+import { studiesRouter } from './studies/studies.routes';
+import { jobsRouter } from './jobs/jobs.routes';
 
 const clientDir = path.resolve(import.meta.dirname, '..', 'dist', 'client');
 
 /** Routers mounted under /api, in order. Each module adds its router here. */
 function apiRouters(): Router[] {
-  return [healthRouter, authRouter, usersRouter, auditRouter, mailRouter, sitesRouter, batteriesRouter, profilesRouter, signOffRouter, exportRouter];
+  return [healthRouter, authRouter, usersRouter, auditRouter, mailRouter, sitesRouter, batteriesRouter, profilesRouter, signOffRouter, exportRouter, plansRouter, studiesRouter, jobsRouter];
 }
 
 export function createApp(config: AppConfig) {

@@ -4,6 +4,8 @@ import { createApp } from './app';
 import { closeDb, initDb } from './db/client';
 import { logger } from './logger';
 import { ensureFakeSmtp, stopFakeSmtp } from './mail/mail.service';
+import { startJobWorker, type JobWorker } from './jobs/job-worker';
+import { stopBoss } from './jobs/boss';
 
 async function main() {
   const config = loadConfig();
@@ -22,6 +24,8 @@ async function main() {
     }
     process.exit(1);
   });
+  // RUN_WORKER=false leaves the jobs to `npm run worker` processes (README: scaling past one machine).
+  const worker: JobWorker | null = config.RUN_WORKER === 'true' ? await startJobWorker(config.DATABASE_URL) : null;
 
   let stopping = false;
   const stop = async () => {
@@ -29,6 +33,8 @@ async function main() {
     stopping = true;
     logger.info('Stopping Slackwater…');
     server.close();
+    await worker?.stop();
+    await stopBoss();
     await stopFakeSmtp();
     await closeDb();
     process.exit(0);

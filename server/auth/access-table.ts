@@ -68,7 +68,10 @@ export const accessTable = {
 
   // Horizon studies
   'POST /api/studies': editors,
+  'GET /api/studies': readers, // list with status filter
   'GET /api/studies/:id': readers,
+  'GET /api/batteries/:id/plan-defaults': readers, // the plan form's proposed initial SoC and horizon
+  'GET /api/jobs': readers, // background jobs with progress (the home page's attention list)
 
   // Audit trail and mail outbox (admin only)
   'GET /api/audit': admins,

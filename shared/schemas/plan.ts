@@ -168,22 +168,29 @@ export interface PlanSummary {
   simultaneousSteps: number;
 }
 
-export interface TurnpikeFlag {
-  code: string;
-  message: string;
-}
-
 export interface PlanTurnpike {
+  /** Tolerance band around the steady cycle, % of usable energy, and the same in kWh. */
   bandPct: number;
-  /** Share of the delivery window's steps inside the band, 0–1. */
+  bandKwh: number;
+  /** Share of the plan's steps whose SoC is inside the band, 0–1. */
   nearSteadyShare: number;
   entryArcSteps: number;
   leavingArcSteps: number;
-  commitWindowSteps: number;
-  /** Share of steps whose stored-energy value is near its steady value (SoC strictly inside its window), or null. */
-  valueNearSteadyShare: number | null;
-  flags: TurnpikeFlag[];
-  /** The figures in one plain sentence for the plan page. */
+  /** Leading steps that agree with a plan of a much longer lookahead; null when none could be solved. */
+  commitWindowSteps: number | null;
+  /** Hours of that longer lookahead, or null. */
+  longerLookaheadHours: number | null;
+  /** The same figures for the stored-energy value against its steady value (compared where SoC is strictly inside its window). */
+  value: {
+    bandPerMwh: number;
+    nearSteadyShare: number;
+    entryArcSteps: number;
+    leavingArcSteps: number;
+    commitWindowSteps: number | null;
+  };
+  /** Findings a planner can act on, in plain words. */
+  flags: string[];
+  /** The figures in plain sentences for the plan page. */
   summary: string;
 }
 

@@ -87,27 +87,34 @@ export interface StudyInputs {
 export interface StudyRun {
   horizonHours: number;
   terminal: string;
-  /** Realised cost over the period (money paid; negative = earnings). */
-  cost: number;
-  /** (cost − reference cost) / |reference cost| in %. */
-  gapPct: number;
+  /** `optimal` when every window solved; otherwise `message` names the first that did not. */
+  status: 'optimal' | 'infeasible' | 'unbounded' | 'error';
+  message: string | null;
+  /** Realised cost over the period (money paid; negative = earnings); null when the run failed. */
+  cost: number | null;
+  /** (cost − reference cost) / |reference cost| in %; null when the run failed. */
+  gapPct: number | null;
   equivalentCycles: number;
   solves: number;
   seconds: number;
   nearSteadyShare: number;
   meanLeavingArcSteps: number;
-  method: 'dp' | 'lp';
+  /** Open-loop plans whose leaving arc reached into the steps they commit. */
+  leavingIntoCommitted: number;
+  method: 'dp' | 'lp' | 'mixed';
 }
 
 export interface StudyRecommendation {
-  horizonHours: number;
-  terminal: string;
+  /** Null when no run finished. */
+  horizonHours: number | null;
+  terminal: string | null;
   reason: string;
 }
 
 export interface StudyResults {
-  method: 'dp' | 'lp';
+  method: 'dp' | 'lp' | 'mixed';
   referenceCost: number;
+  referenceEquivalentCycles: number;
   steps: number;
   stepMinutes: number;
   runs: StudyRun[];
@@ -133,7 +140,7 @@ export interface Study {
   createdAt: string;
   /** The job's state: the study's status. */
   status: JobState;
-  method: 'dp' | 'lp' | null;
+  method: 'dp' | 'lp' | 'mixed' | null;
   errorMessage: string | null;
   job: JobProgress | null;
   inputs?: StudyInputs;

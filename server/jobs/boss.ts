@@ -1,0 +1,78 @@
+/**
+ * The process's pg-boss instance, in the application's PostgreSQL. Queues are
+ * created before anything is sent or worked (pg-boss 10 requires it); every
+ * work queue sends exhausted jobs to one dead-letter queue.
+ */
+import PgBoss from 'pg-boss';
+import { logger } from '../logger';
+import { loadJobsConfig, type JobsConfig } from './jobs-config';
+
+export const queues = {
+  plan: 'plan-solve',
+  study: 'horizon-study',
+  deadLetter: 'job-dead-letter',
+} as const;
+export type WorkQueue = typeof queues.plan | typeof queues.study;
+
+let starting: Promise<PgBoss> | null = null;
+let current: PgBoss | null = null;
+
+async function ensureQueues(boss: PgBoss, config: JobsConfig): Promise<void> {
+  const dead: PgBoss.Queue = { name: queues.deadLetter, policy: 'standard', retryLimit: 0, retentionMinutes: 7 * 24 * 60 };
+  const work = (name: string): PgBoss.Queue => ({
+    name,
+    policy: 'standard',
+    retryLimit: config.JOB_RETRY_LIMIT,
+    retryDelay: 1,
+    retryBackoff: false,
+    expireInSeconds: config.JOB_EXPIRE_MINUTES * 60,
+    retentionMinutes: 7 * 24 * 60,
+    deadLetter: queues.deadLetter,
+  });
+  // The dead-letter queue first: the work queues reference it.
+  for (const queue of [dead, work(queues.plan), work(queues.study)]) {
+    if (await boss.getQueue(queue.name)) await boss.updateQueue(queue.name, queue);
+    else await boss.createQueue(queue.name, queue);
+  }
+}
+
+/** Starts pg-boss once per process (installing or migrating its schema when needed). */
+export function ensureBoss(databaseUrl: string, config: JobsConfig = loadJobsConfig()): Promise<PgBoss> {
+  if (!starting) {
+    const boss = new PgBoss({
+      connectionString: databaseUrl,
+      schema: config.PGBOSS_SCHEMA,
+      max: 4,
+      application_name: 'slackwater-jobs',
+      // Expired attempts are failed (and retried) by maintenance; check often.
+      maintenanceIntervalSeconds: 30,
+    });
+    boss.on('error', (error) => logger.error('Job queue error', error));
+    starting = boss
+      .start()
+      .then(async () => {
+        await ensureQueues(boss, config);
+        current = boss;
+        return boss;
+      })
+      .catch((error: unknown) => {
+        starting = null;
+        throw error;
+      });
+  }
+  return starting;
+}
+
+export function startedBoss(): PgBoss | null {
+  return current;
+}
+
+/** Stops pg-boss: waits up to `timeoutMs` for running jobs, then fails them so another worker retries. */
+export async function stopBoss(timeoutMs = 10_000): Promise<void> {
+  const pending = starting;
+  starting = null;
+  current = null;
+  if (!pending) return;
+  const boss = await pending.catch(() => null);
+  await boss?.stop({ graceful: true, timeout: timeoutMs, wait: true });
+}

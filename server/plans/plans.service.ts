@@ -1,0 +1,121 @@
+/** Plans: creation (snapshot, validation, job) and reading. */
+import { randomUUID } from 'node:crypto';
+import type { PlanCreate, PlanCreated, PlanDefaults, PlanInputs, PlanListQuery, Plan } from '@shared/schemas/plan';
+import { terminalTargetPct } from '@shared/schemas/terminal-rule';
+import { getDb } from '../db/client';
+import { notFound } from '../http/app-error';
+import { insertAuditEvent } from '../audit/audit.repo';
+import { findBattery } from '../batteries/batteries.repo';
+import { findSite } from '../sites/sites.repo';
+import { inJobTransaction } from '../jobs/job-transaction';
+import { enqueueJob, newJobId } from '../jobs/enqueue';
+import { toJobProgress } from '../jobs/job-serializer';
+import { getJobProgress } from '../jobs/job-progress.repo';
+import type { Actor } from '../sites/request-context';
+import { checkWholeSteps, gridStepMinutes, resolveRunInputs } from './run-inputs';
+import { checkTerminalTarget, resolveInitialSoc } from './initial-soc';
+import { findPlan, insertPlan, listPlans } from './plans.repo';
+import { toPlan } from './plan-serializer';
+
+/** Tolerance band around the steady cycle, % of usable energy (DESIGN section 2). */
+export const DEFAULT_BAND_PCT = 5;
+
+export async function createPlan(body: PlanCreate, actor: Actor, databaseUrl: string): Promise<PlanCreated> {
+  const db = getDb();
+  const run = await resolveRunInputs(db, {
+    batteryId: body.batteryId,
+    priceProfileId: body.priceProfileId,
+    loadProfileId: body.loadProfileId,
+    generationProfileId: body.generationProfileId,
+    start: body.deliveryStart,
+    end: body.deliveryEnd,
+    startField: 'deliveryStart',
+    endField: 'deliveryEnd',
+    what: 'delivery window',
+  });
+  checkWholeSteps([{ hours: body.horizonHours, path: 'horizonHours', what: 'horizon' }], gridStepMinutes(run.profiles));
+  checkTerminalTarget(run.battery, terminalTargetPct(body.terminalRule), 'terminalRule');
+  const soc = await resolveInitialSoc(db, run.battery, body.initialSocPct, body.deliveryStart);
+  const inputs: PlanInputs = {
+    ...run,
+    deliveryStart: body.deliveryStart.toISOString(),
+    deliveryEnd: body.deliveryEnd.toISOString(),
+    horizonHours: body.horizonHours,
+    terminalRule: body.terminalRule,
+    initialSocPct: soc.pct,
+    initialSocSource: soc.source,
+    initialSocPlanId: soc.planId,
+    bandPct: DEFAULT_BAND_PCT,
+  };
+
+  const planId = randomUUID();
+  const jobId = newJobId();
+  await inJobTransaction(async (t) => {
+    await enqueueJob(t, databaseUrl, { jobId, kind: 'plan', entityId: planId, inputVersion: 1 });
+    await insertPlan(t.tx, {
+      id: planId,
+      siteId: run.site.id,
+      batteryId: run.battery.id,
+      priceProfileId: run.profiles.price.id,
+      loadProfileId: run.profiles.load?.id ?? null,
+      generationProfileId: run.profiles.generation?.id ?? null,
+      deliveryStart: body.deliveryStart,
+      deliveryEnd: body.deliveryEnd,
+      horizonHours: body.horizonHours,
+      terminalRule: body.terminalRule,
+      initialSocPct: soc.pct,
+      inputs,
+      createdBy: actor.id,
+      jobId,
+    });
+    await insertAuditEvent(t.tx, {
+      actorId: actor.id,
+      actorEmail: actor.email,
+      ip: actor.ip,
+      action: 'plan.created',
+      entityType: 'plan',
+      entityId: planId,
+      details: {
+        batteryId: run.battery.id,
+        deliveryStart: inputs.deliveryStart,
+        deliveryEnd: inputs.deliveryEnd,
+        horizonHours: body.horizonHours,
+        terminalRule: body.terminalRule,
+        initialSocPct: soc.pct,
+        initialSocSource: soc.source,
+        jobId,
+      },
+    });
+  });
+  const plan = await getPlan(planId);
+  const job = await getJobProgress(db, jobId);
+  if (!job) throw new Error(`job ${jobId} vanished after commit`);
+  return { plan, job: toJobProgress(job) };
+}
+
+export async function getPlan(id: string): Promise<Plan> {
+  const row = await findPlan(getDb(), id);
+  if (!row) throw notFound('The plan');
+  return toPlan(row, true);
+}
+
+export async function listPlanSummaries(query: PlanListQuery): Promise<Plan[]> {
+  const rows = await listPlans(getDb(), query);
+  return rows.map((row) => toPlan(row, false));
+}
+
+/** What the plan form proposes for a battery: its start SoC and the site's default horizon. */
+export async function planDefaults(batteryId: string, deliveryStart: Date): Promise<PlanDefaults> {
+  const db = getDb();
+  const battery = await findBattery(db, batteryId);
+  if (!battery) throw notFound('The battery');
+  const site = await findSite(db, battery.siteId);
+  const soc = await resolveInitialSoc(db, { ...battery, maxCyclesPerDay: battery.maxCyclesPerDay }, null, deliveryStart);
+  return {
+    batteryId,
+    initialSocPct: soc.pct,
+    initialSocSource: soc.source,
+    initialSocPlanId: soc.planId,
+    defaultHorizonHours: site?.defaultHorizonHours ?? null,
+  };
+}

@@ -1,0 +1,98 @@
+/** Horizon studies: creation (snapshot, validation, job) and reading. */
+import { randomUUID } from 'node:crypto';
+import type { Study, StudyCreate, StudyCreated, StudyInputs, StudyListQuery } from '@shared/schemas/study';
+import { terminalTargetPct } from '@shared/schemas/terminal-rule';
+import { getDb } from '../db/client';
+import { notFound } from '../http/app-error';
+import { insertAuditEvent } from '../audit/audit.repo';
+import { inJobTransaction } from '../jobs/job-transaction';
+import { enqueueJob, newJobId } from '../jobs/enqueue';
+import { toJobProgress } from '../jobs/job-serializer';
+import { getJobProgress } from '../jobs/job-progress.repo';
+import type { Actor } from '../sites/request-context';
+import { checkWholeSteps, gridStepMinutes, resolveRunInputs } from '../plans/run-inputs';
+import { checkTerminalTarget, resolveInitialSoc } from '../plans/initial-soc';
+import { DEFAULT_BAND_PCT } from '../plans/plans.service';
+import { findStudy, insertStudy, listStudies } from './studies.repo';
+import { toStudy } from './study-serializer';
+
+export async function createStudy(body: StudyCreate, actor: Actor, databaseUrl: string): Promise<StudyCreated> {
+  const db = getDb();
+  const run = await resolveRunInputs(db, {
+    batteryId: body.batteryId,
+    priceProfileId: body.priceProfileId,
+    loadProfileId: body.loadProfileId,
+    generationProfileId: body.generationProfileId,
+    start: body.start,
+    end: body.end,
+    startField: 'start',
+    endField: 'end',
+    what: 'study period',
+  });
+  checkWholeSteps(
+    [
+      { hours: body.replanHours, path: 'replanHours', what: 're-plan interval' },
+      ...body.horizonsHours.map((hours, i) => ({ hours, path: `horizonsHours.${i}`, what: 'horizon' })),
+    ],
+    gridStepMinutes(run.profiles),
+  );
+  body.terminalRules.forEach((rule, i) => checkTerminalTarget(run.battery, terminalTargetPct(rule), 'terminalRules', i));
+  const soc = await resolveInitialSoc(db, run.battery, body.initialSocPct, body.start);
+  const inputs: StudyInputs = {
+    ...run,
+    start: body.start.toISOString(),
+    end: body.end.toISOString(),
+    horizonsHours: [...body.horizonsHours].sort((a, b) => a - b),
+    replanHours: body.replanHours,
+    terminalRules: body.terminalRules,
+    initialSocPct: soc.pct,
+    initialSocSource: soc.source,
+    bandPct: DEFAULT_BAND_PCT,
+  };
+
+  const studyId = randomUUID();
+  const jobId = newJobId();
+  await inJobTransaction(async (t) => {
+    await enqueueJob(t, databaseUrl, { jobId, kind: 'study', entityId: studyId, inputVersion: 1 });
+    await insertStudy(t.tx, {
+      id: studyId,
+      siteId: run.site.id,
+      batteryId: run.battery.id,
+      priceProfileId: run.profiles.price.id,
+      loadProfileId: run.profiles.load?.id ?? null,
+      generationProfileId: run.profiles.generation?.id ?? null,
+      periodStart: body.start,
+      periodEnd: body.end,
+      horizonsHours: inputs.horizonsHours,
+      replanHours: body.replanHours,
+      terminalRules: body.terminalRules,
+      initialSocPct: soc.pct,
+      inputs,
+      createdBy: actor.id,
+      jobId,
+    });
+    await insertAuditEvent(t.tx, {
+      actorId: actor.id,
+      actorEmail: actor.email,
+      ip: actor.ip,
+      action: 'study.created',
+      entityType: 'study',
+      entityId: studyId,
+      details: { batteryId: run.battery.id, start: inputs.start, end: inputs.end, horizonsHours: inputs.horizonsHours, replanHours: body.replanHours, terminalRules: body.terminalRules, jobId },
+    });
+  });
+  const study = await getStudy(studyId);
+  const job = await getJobProgress(db, jobId);
+  if (!job) throw new Error(`job ${jobId} vanished after commit`);
+  return { study, job: toJobProgress(job) };
+}
+
+export async function getStudy(id: string): Promise<Study> {
+  const row = await findStudy(getDb(), id);
+  if (!row) throw notFound('The horizon study');
+  return toStudy(row, true);
+}
+
+export async function listStudySummaries(query: StudyListQuery): Promise<Study[]> {
+  return (await listStudies(getDb(), query)).map((row) => toStudy(row, false));
+}

@@ -1,0 +1,92 @@
+/**
+ * The horizon-study computation, run in a worker thread: the engine's
+ * closed-loop runs for every horizon and terminal rule against the reference
+ * path, with progress after each run. Pure: no database.
+ */
+import type { StudyInputs, StudyResults } from '@shared/schemas/study';
+import { alignInputs, type ProfileSeries } from '../engine/inputs/align-inputs';
+import { runHorizonStudy } from '../engine/study/run-horizon-study';
+import { DEFAULT_GAP_TARGET_PCT } from '../engine/study/recommend-horizon';
+import { parseTerminal, type TerminalChoice } from '../engine/terminal/terminal-choice';
+import type { ComputeOutcome } from '../plans/plan-compute';
+
+export interface StudyComputeInput {
+  inputs: StudyInputs;
+  price: ProfileSeries;
+  load: ProfileSeries | null;
+  generation: ProfileSeries | null;
+  /** Threads the engine may use for independent runs (1 = this thread only). */
+  threads: number;
+}
+
+type Report = (shareDone: number, message: string | null) => void;
+
+export async function computeStudy(input: StudyComputeInput, report: Report): Promise<ComputeOutcome<StudyResults>> {
+  const { inputs } = input;
+  const aligned = alignInputs({
+    battery: inputs.battery,
+    site: inputs.site,
+    prices: input.price,
+    ...(input.load ? { load: input.load } : {}),
+    ...(input.generation ? { generation: input.generation } : {}),
+  });
+  if (!aligned.ok) return { ok: false, message: aligned.issue.message };
+  const terminals: TerminalChoice[] = [];
+  for (const text of inputs.terminalRules) {
+    const parsed = parseTerminal(text);
+    if (!parsed.ok) return { ok: false, message: parsed.message };
+    terminals.push(parsed.choice);
+  }
+  const total = inputs.horizonsHours.length * terminals.length;
+  report(0.02, `Solving the reference path, then ${total} closed-loop run${total === 1 ? '' : 's'}.`);
+  const outcome = await runHorizonStudy(aligned.inputs, {
+    startMs: Date.parse(inputs.start),
+    endMs: Date.parse(inputs.end),
+    horizonsHours: inputs.horizonsHours,
+    replanHours: inputs.replanHours,
+    terminals,
+    initialSocPct: inputs.initialSocPct,
+    bandFraction: inputs.bandPct / 100,
+    workers: input.threads,
+    onProgress: (done, all) => report(0.1 + (0.88 * done) / all, `${done} of ${all} runs finished.`),
+  });
+  if (!outcome.ok) return { ok: false, message: outcome.issue.message };
+  const { study } = outcome;
+  const finished = study.runs.filter((r) => r.status === 'optimal');
+  if (finished.length === 0) {
+    return { ok: false, message: study.runs[0]?.message ?? 'no closed-loop run could be solved' };
+  }
+  const methods = new Set(study.runs.map((r) => r.method));
+  const a = aligned.inputs;
+  const finite = (v: number) => (Number.isFinite(v) ? v : 0);
+  const finiteOrNull = (v: number) => (Number.isFinite(v) ? v : null);
+  return {
+    ok: true,
+    results: {
+      method: methods.size === 1 ? [...methods][0]! : 'mixed',
+      referenceCost: study.referenceCost,
+      referenceEquivalentCycles: study.referenceEquivalentCycles,
+      steps: Math.round((Date.parse(inputs.end) - Date.parse(inputs.start)) / (a.stepMinutes * 60_000)),
+      stepMinutes: a.stepMinutes,
+      runs: study.runs.map((r) => ({
+        horizonHours: r.horizonHours,
+        terminal: r.terminal,
+        status: r.status,
+        message: r.message ?? null,
+        cost: finiteOrNull(r.cost),
+        gapPct: finiteOrNull(r.gapPct),
+        equivalentCycles: finite(r.equivalentCycles),
+        solves: r.solves,
+        seconds: r.seconds,
+        nearSteadyShare: finite(r.nearSteadyShare),
+        meanLeavingArcSteps: finite(r.meanLeavingArcSteps),
+        leavingIntoCommitted: r.leavingIntoCommitted,
+        method: r.method,
+      })),
+      recommendation: study.recommendation,
+      targetGapPct: DEFAULT_GAP_TARGET_PCT,
+      notes: [...a.notes],
+      seconds: study.seconds,
+    },
+  };
+}
