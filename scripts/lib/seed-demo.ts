@@ -3,11 +3,12 @@
  * through a seeder here; seeders are idempotent (a second run changes nothing).
  */
 import { closeDb, initDb } from '../../server/db/client';
+import { seedDemoAccounts } from '../../server/users/demo-accounts';
 
 type Seeder = (log: (m: string) => void) => Promise<void>;
 
 /** Seeders run in order: accounts first, then sites, batteries, profiles. */
-const seeders: Seeder[] = [];
+const seeders: Seeder[] = [seedDemoAccounts];
 
 export async function seedDemo(url: string, log: (m: string) => void): Promise<void> {
   initDb(url, 2);

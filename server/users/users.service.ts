@@ -10,6 +10,8 @@ import { sendMail } from '../mail/mail.service';
 import { issueLink } from '../auth/password-links.service';
 import { passwordLinkMail, passwordLinkUrl } from '../auth/password-link-mail';
 import { endUserSessions } from '../auth/session';
+import { hashPassword } from '../auth/password-hash';
+import { assertAcceptablePassword } from '../auth/password-policy';
 import * as repo from './users.repo';
 import type { UserRow } from './users.schema';
 
@@ -96,4 +98,19 @@ export async function updateUser(id: string, patch: repo.UserPatch, admin: Admin
   // A disabled account's sessions end now, not at their expiry (ASVS 5.0 7.4.2).
   if (updated.disabled) await endUserSessions(id);
   return toUser(updated);
+}
+
+/**
+ * The first admin of a real installation (`npm run create-admin`): the password passes
+ * the same policy as every other new password.
+ */
+export async function createAdminAccount(input: { email: string; name: string; password: string }): Promise<User> {
+  assertAcceptablePassword(input.password, { email: input.email, name: input.name });
+  const passwordHash = await hashPassword(input.password);
+  return getDb().transaction(async (tx) => {
+    const row = await repo.insertUser(tx, { id: randomUUID(), email: input.email, name: input.name, role: 'admin', passwordHash, passwordChangedAt: new Date() });
+    if (!row) throw conflict(`A user with the e-mail ${input.email} already exists.`);
+    await recordAudit(tx, { actorEmail: 'create-admin script' }, { action: 'user.admin_created', entityType: 'user', entityId: row.id, details: { email: row.email } });
+    return toUser(row);
+  });
 }
