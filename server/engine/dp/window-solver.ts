@@ -34,6 +34,9 @@ export class WindowSolver {
   private readonly vid: Float64Array;
   private spare: number;
   private version = 0;
+  /** Steps [chainFrom, chainTo] whose stored V_t = Bellman_t(stored V_{t+1}) (the last window's range). */
+  private chainFrom = Infinity;
+  private chainTo = -Infinity;
   private readonly fs = newForwardStepResult();
 
   constructor(private readonly ctx: DpContext, maxWindowSteps: number) {
@@ -63,7 +66,13 @@ export class WindowSolver {
    */
   solveWindow(start: number, end: number, e0: number, rule: TerminalRule, forwardTo: number, warm: boolean): string | null {
     const failure = this.backward(start, end, e0, rule, warm);
-    if (failure !== null) return failure;
+    if (failure !== null) {
+      this.chainFrom = Infinity;
+      this.chainTo = -Infinity;
+      return failure;
+    }
+    this.chainFrom = start;
+    this.chainTo = end;
     return this.forward(start, forwardTo, e0, warm) ? null : this.explain(start, end, e0, rule);
   }
 
@@ -74,6 +83,8 @@ export class WindowSolver {
 
   private backward(start: number, end: number, e0: number, rule: TerminalRule, warm: boolean): string | null {
     const { ctx, store, map, tOf, size } = this;
+    // Stopping at t is only sound when every V below t down to start belongs to one consistent chain.
+    const canStop = warm && start >= this.chainFrom;
     for (let t = end; t >= start; t--) {
       const r = t % size;
       const out = this.spare;
@@ -82,7 +93,7 @@ export class WindowSolver {
         : backwardStep(store, out, map[(t + 1) % size] ?? 0, ctx.stages, t, ctx.retention, ctx.emin, ctx.emax, ctx.tol);
       if (!ok) return this.explain(start, end, e0, rule);
       this.stats.backwardSteps++;
-      if (warm && tOf[r] === t && store.sameShape(out, map[r] ?? 0) && this.storedDown(start, t)) {
+      if (canStop && t <= this.chainTo && tOf[r] === t && store.sameShape(out, map[r] ?? 0)) {
         this.stats.backwardStepsReused += t - start;
         return null;
       }
@@ -92,12 +103,6 @@ export class WindowSolver {
       this.vid[out] = ++this.version;
     }
     return null;
-  }
-
-  /** True when V_s is stored for every s in [start, t). */
-  private storedDown(start: number, t: number): boolean {
-    for (let s = start; s < t; s++) if (this.tOf[s % this.size] !== s) return false;
-    return true;
   }
 
   private forward(start: number, to: number, e0: number, warm: boolean): boolean {
