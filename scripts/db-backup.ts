@@ -36,7 +36,9 @@ export function findPgTool(tool: 'pg_dump' | 'pg_restore'): string {
   const versions = existsSync(base) ? readdirSync(base).filter((v) => existsSync(path.join(base, v, 'bin', tool))) : [];
   const newest = versions.sort((a, b) => Number(b) - Number(a))[0];
   if (newest) return path.join(base, newest, 'bin', tool);
-  throw new SetupError(`${tool} was not found. Install the PostgreSQL client tools (Debian: apt-get install -y postgresql-client) and run again.`);
+  throw new SetupError(
+    `${tool} was not found. Install the PostgreSQL client tools (Debian: apt-get install -y postgresql-client) and run again.`,
+  );
 }
 
 /** The database the scripts act on, starting the private cluster when DATABASE_URL is not set. */
@@ -53,7 +55,10 @@ export function databaseName(url: string): string {
 /** Runs pg_dump -Fc; throws with pg_dump's own message when it fails. Returns the archive size in bytes. */
 export function backupDatabase(url: string, file: string): number {
   mkdirSync(path.dirname(path.resolve(file)), { recursive: true });
-  const run = spawnSync(findPgTool('pg_dump'), ['--format=custom', '--no-password', `--file=${file}`], { env: libpqEnv(url), encoding: 'utf8' });
+  const run = spawnSync(findPgTool('pg_dump'), ['--format=custom', '--no-password', `--file=${file}`], {
+    env: libpqEnv(url),
+    encoding: 'utf8',
+  });
   if (run.status !== 0) {
     throw new SetupError(`pg_dump of database "${databaseName(url)}" failed:\n${run.stderr || run.error?.message || ''}`.trim());
   }
@@ -61,7 +66,10 @@ export function backupDatabase(url: string, file: string): number {
 }
 
 function defaultFile(url: string): string {
-  const stamp = new Date().toISOString().replace(/[-:]/g, '').replace(/\.\d+Z$/, 'Z');
+  const stamp = new Date()
+    .toISOString()
+    .replace(/[-:]/g, '')
+    .replace(/\.\d+Z$/, 'Z');
   return path.join(projectRoot, 'backups', `slackwater-${databaseName(url)}-${stamp}.dump`);
 }
 

@@ -28,7 +28,9 @@ function assertCustomArchive(file: string): void {
     closeSync(fd);
   }
   if (head.toString('latin1') !== 'PGDMP') {
-    throw new SetupError(`${file} is not a pg_dump custom-format archive (it does not start with PGDMP). Use a file written by npm run db:backup.`);
+    throw new SetupError(
+      `${file} is not a pg_dump custom-format archive (it does not start with PGDMP). Use a file written by npm run db:backup.`,
+    );
   }
 }
 
@@ -60,9 +62,20 @@ export async function restoreDatabase(file: string, url: string): Promise<void> 
     );
   }
   // One transaction: a failed restore leaves the database as empty as it was.
-  const args = ['--exit-on-error', '--single-transaction', '--no-owner', '--no-privileges', '--no-password', `--dbname=${databaseName(url)}`, file];
+  const args = [
+    '--exit-on-error',
+    '--single-transaction',
+    '--no-owner',
+    '--no-privileges',
+    '--no-password',
+    `--dbname=${databaseName(url)}`,
+    file,
+  ];
   const run = spawnSync(findPgTool('pg_restore'), args, { env: libpqEnv(url), encoding: 'utf8' });
-  if (run.status !== 0) throw new SetupError(`pg_restore into "${databaseName(url)}" failed; nothing was restored:\n${run.stderr || run.error?.message || ''}`.trim());
+  if (run.status !== 0)
+    throw new SetupError(
+      `pg_restore into "${databaseName(url)}" failed; nothing was restored:\n${run.stderr || run.error?.message || ''}`.trim(),
+    );
 }
 
 /** Recomputes the checksum of every approved or superseded plan in the database at `url`. */
@@ -78,7 +91,8 @@ export async function verifyRestoredChecksums(url: string): Promise<ChecksumRepo
 function targetUrl(base: string, into: string | undefined): string {
   if (!into) return base;
   if (into.includes('://')) return into;
-  if (!/^[a-z_][a-z0-9_]*$/.test(into)) throw new SetupError(`"${into}" is not a usable database name: use lower-case letters, digits and _.`);
+  if (!/^[a-z_][a-z0-9_]*$/.test(into))
+    throw new SetupError(`"${into}" is not a usable database name: use lower-case letters, digits and _.`);
   const u = new URL(base);
   u.pathname = `/${into}`;
   return u.toString();

@@ -44,7 +44,9 @@ export function writeCsv(header: readonly string[], rows: Iterable<readonly CsvC
   for (const row of rows) {
     index += 1;
     if (row.length !== header.length) {
-      throw new CsvShapeError(`Row ${index} has ${row.length} fields but the header has ${header.length} (RFC 4180 section 2.4).`);
+      throw new CsvShapeError(
+        `Row ${index} has ${row.length} fields but the header has ${header.length} (RFC 4180 section 2.4).`,
+      );
     }
     lines.push(row.map(field).join(','));
   }

@@ -20,7 +20,10 @@ export interface FileNameParts {
 /** Lower-case ASCII words joined by hyphens; accents dropped, anything else becomes a separator. */
 export function slug(text: string, max = 40): string {
   const ascii = text.normalize('NFKD').replace(/[\u0300-\u036f]/g, '');
-  const words = ascii.toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-+|-+$/g, '');
+  const words = ascii
+    .toLowerCase()
+    .replace(/[^a-z0-9]+/g, '-')
+    .replace(/^-+|-+$/g, '');
   return words.slice(0, max).replace(/-+$/, '') || 'site';
 }
 

@@ -11,6 +11,9 @@ export async function findPlanForExport(db: DbOrTx, id: string) {
 
 export async function namesOf(db: DbOrTx, ids: readonly string[]): Promise<Map<string, string>> {
   if (ids.length === 0) return new Map();
-  const rows = await db.select({ id: users.id, name: users.name }).from(users).where(inArray(users.id, [...new Set(ids)]));
+  const rows = await db
+    .select({ id: users.id, name: users.name })
+    .from(users)
+    .where(inArray(users.id, [...new Set(ids)]));
   return new Map(rows.map((r) => [r.id, r.name]));
 }

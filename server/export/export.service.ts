@@ -34,7 +34,9 @@ export interface Requester {
 function deliverySteps(results: PlanResults): PlanStep[] {
   const steps = results.steps.filter((s) => s.delivery);
   if (steps.length !== results.deliverySteps) {
-    throw new ExportDataError(`The plan's results hold ${steps.length} delivery steps where ${results.deliverySteps} were expected.`);
+    throw new ExportDataError(
+      `The plan's results hold ${steps.length} delivery steps where ${results.deliverySteps} were expected.`,
+    );
   }
   return steps;
 }
@@ -43,7 +45,8 @@ function scheduleOf(plan: PlanRow, results: PlanResults): ExportSchedule {
   const steps = deliverySteps(results);
   const first = steps[0];
   const startMs = first ? Date.parse(first.time) : plan.deliveryStart.getTime();
-  if (startMs !== plan.deliveryStart.getTime()) throw new ExportDataError('The plan\'s first delivery step does not start at the delivery window\'s start.');
+  if (startMs !== plan.deliveryStart.getTime())
+    throw new ExportDataError("The plan's first delivery step does not start at the delivery window's start.");
   return {
     timezone: plan.inputs.site.timezone,
     currency: plan.inputs.site.currency,
@@ -78,12 +81,22 @@ export async function exportPlan(who: Requester, id: string): Promise<PlanExport
     throw forbidden(`Viewers may export approved plans only; this plan is ${plan.status}.`);
   }
   if (plan.results === null) {
-    throw new AppError('no_results', plan.errorMessage ? `The plan has no schedule to export: ${plan.errorMessage}` : 'The plan has no schedule yet: wait for its job to finish.', 409);
+    throw new AppError(
+      'no_results',
+      plan.errorMessage
+        ? `The plan has no schedule to export: ${plan.errorMessage}`
+        : 'The plan has no schedule yet: wait for its job to finish.',
+      409,
+    );
   }
   const signedOff = plan.status === 'approved' || plan.status === 'superseded';
   if (signedOff && !checksumMatches(plan.checksum, { planId: plan.id, inputs: plan.inputs, results: plan.results })) {
     logger.error(`Checksum mismatch on export of plan ${plan.id}: its stored inputs or results changed after approval`);
-    await recordAudit(db, { actorId: who.user.id, actorEmail: who.user.email, ip: who.ip }, { action: 'plan.checksum_mismatch', entityType: 'plan', entityId: plan.id, details: { stored: plan.checksum } });
+    await recordAudit(
+      db,
+      { actorId: who.user.id, actorEmail: who.user.email, ip: who.ip },
+      { action: 'plan.checksum_mismatch', entityType: 'plan', entityId: plan.id, details: { stored: plan.checksum } },
+    );
     throw new AppError(
       'checksum_mismatch',
       'This plan no longer matches the checksum taken when it was approved, so it is not exported. Its stored data was changed outside Slackwater; an administrator must restore it from a backup.',
@@ -104,7 +117,8 @@ export async function exportPlan(who: Requester, id: string): Promise<PlanExport
       notice: notice(plan.status),
     });
   } catch (error) {
-    if (error instanceof ExportDataError) throw new AppError('export_failed', `The plan cannot be exported: ${error.message}`, 500);
+    if (error instanceof ExportDataError)
+      throw new AppError('export_failed', `The plan cannot be exported: ${error.message}`, 500);
     throw error;
   }
   const fileName = exportFileName({
@@ -116,8 +130,15 @@ export async function exportPlan(who: Requester, id: string): Promise<PlanExport
     status: plan.status,
     checksum: signedOff ? plan.checksum : null,
   });
-  await recordAudit(db, { actorId: who.user.id, actorEmail: who.user.email, ip: who.ip }, {
-    action: 'plan.exported', entityType: 'plan', entityId: plan.id, details: { status: plan.status, checksum: signedOff ? plan.checksum : null, fileName },
-  });
+  await recordAudit(
+    db,
+    { actorId: who.user.id, actorEmail: who.user.email, ip: who.ip },
+    {
+      action: 'plan.exported',
+      entityType: 'plan',
+      entityId: plan.id,
+      details: { status: plan.status, checksum: signedOff ? plan.checksum : null, fileName },
+    },
+  );
   return { fileName, csv, status: plan.status, checksum: signedOff ? plan.checksum : null };
 }

@@ -92,7 +92,13 @@ export function statusCell(status: PlanStatus): string {
 }
 
 const SERIES: readonly (keyof ExportSchedule)[] = [
-  'priceCurrencyPerMwh', 'chargeKw', 'dischargeKw', 'socEndKwh', 'gridImportKw', 'gridExportKw', 'storedEnergyValue',
+  'priceCurrencyPerMwh',
+  'chargeKw',
+  'dischargeKw',
+  'socEndKwh',
+  'gridImportKw',
+  'gridExportKw',
+  'storedEnergyValue',
 ];
 
 export function planCsv(schedule: ExportSchedule, meta: ExportMeta): string {
@@ -101,7 +107,8 @@ export function planCsv(schedule: ExportSchedule, meta: ExportMeta): string {
   const n = schedule.priceCurrencyPerMwh.length;
   for (const key of SERIES) {
     const length = (schedule[key] as readonly unknown[]).length;
-    if (length !== n) throw new ExportDataError(`The plan's ${key} series has ${length} entries but the delivery window has ${n} intervals.`);
+    if (length !== n)
+      throw new ExportDataError(`The plan's ${key} series has ${length} entries but the delivery window has ${n} intervals.`);
   }
   const stepMs = schedule.stepMinutes * 60_000;
   const status = statusCell(meta.status);
@@ -126,7 +133,9 @@ export function planCsv(schedule: ExportSchedule, meta: ExportMeta): string {
       meta.siteName,
       meta.planId,
       status,
-      ...(t === 0 ? [meta.approvedBy, meta.approvedAt, meta.approvalComment, meta.checksum, meta.notice] : [null, null, null, null, null]),
+      ...(t === 0
+        ? [meta.approvedBy, meta.approvedAt, meta.approvalComment, meta.checksum, meta.notice]
+        : [null, null, null, null, null]),
     ]);
   }
   return writeCsv(exportColumns(schedule.currency), rows);

@@ -37,7 +37,12 @@ export function submittedMail(facts: PlanMailFacts, submitter: string, comment: 
     `Delivery window: ${facts.window}`,
   ];
   if (comment) lines.push('', 'Comment from the planner:', comment);
-  lines.push('', `Open the plan to approve or reject it: ${facts.link}`, '', 'You cannot sign off a plan you submitted yourself.');
+  lines.push(
+    '',
+    `Open the plan to approve or reject it: ${facts.link}`,
+    '',
+    'You cannot sign off a plan you submitted yourself.',
+  );
   return {
     subject: oneLine(`Plan awaiting your sign-off: ${facts.siteName}, ${facts.window}`),
     text: lines.join('\n'),
@@ -51,7 +56,13 @@ export function decisionMail(
   comment: string | undefined,
   checksum: string | null,
 ): MailText {
-  const lines = [`${oneLine(approver)} ${decision} your plan.`, '', `Site: ${oneLine(facts.siteName)}`, `Battery: ${oneLine(facts.batteryName)}`, `Delivery window: ${facts.window}`];
+  const lines = [
+    `${oneLine(approver)} ${decision} your plan.`,
+    '',
+    `Site: ${oneLine(facts.siteName)}`,
+    `Battery: ${oneLine(facts.batteryName)}`,
+    `Delivery window: ${facts.window}`,
+  ];
   lines.push('', comment ? `Comment: ${comment}` : 'No comment was given.');
   if (decision === 'approved' && checksum) lines.push('', `Checksum (SHA-256): ${checksum}`);
   if (decision === 'rejected') lines.push('', 'You can copy the rejected plan into a new draft, change it and submit it again.');

@@ -16,7 +16,13 @@ import type { Actor } from './actor';
 
 function mailFacts(actor: Actor, plan: PlanRow): PlanMailFacts {
   const facts = planFacts(plan);
-  return { planId: plan.id, siteName: facts.siteName, batteryName: facts.batteryName, window: facts.window, link: planLink(actor.appOrigin, plan.id) };
+  return {
+    planId: plan.id,
+    siteName: facts.siteName,
+    batteryName: facts.batteryName,
+    window: facts.window,
+    link: planLink(actor.appOrigin, plan.id),
+  };
 }
 
 async function deliver(actor: Actor, plan: PlanRow, to: string, mail: MailText, purpose: string): Promise<void> {
@@ -25,9 +31,16 @@ async function deliver(actor: Actor, plan: PlanRow, to: string, mail: MailText, 
   } catch (error) {
     logger.error(`Could not send the ${purpose} e-mail for plan ${plan.id}`, error);
     try {
-      await recordAudit(getDb(), { actorId: actor.user.id, actorEmail: actor.user.email, ip: actor.ip }, {
-        action: 'mail.failed', entityType: 'plan', entityId: plan.id, details: { purpose, to },
-      });
+      await recordAudit(
+        getDb(),
+        { actorId: actor.user.id, actorEmail: actor.user.email, ip: actor.ip },
+        {
+          action: 'mail.failed',
+          entityType: 'plan',
+          entityId: plan.id,
+          details: { purpose, to },
+        },
+      );
     } catch (auditError) {
       logger.error('Could not record the failed e-mail in the audit trail', auditError);
     }
@@ -42,10 +55,21 @@ export async function notifySubmitted(actor: Actor, plan: PlanRow, comment: stri
 }
 
 /** The submitter hears the decision, with the approver's comment. */
-export async function notifyDecision(actor: Actor, plan: PlanRow, decision: 'approved' | 'rejected', comment: string | undefined): Promise<void> {
+export async function notifyDecision(
+  actor: Actor,
+  plan: PlanRow,
+  decision: 'approved' | 'rejected',
+  comment: string | undefined,
+): Promise<void> {
   if (!plan.submittedBy) return;
   const submitter = (await findPeople(getDb(), [plan.submittedBy])).get(plan.submittedBy);
   if (!submitter || submitter.disabled) return;
-  const mail = decisionMail(mailFacts(actor, plan), decision, actor.user.name, comment, decision === 'approved' ? plan.checksum : null);
+  const mail = decisionMail(
+    mailFacts(actor, plan),
+    decision,
+    actor.user.name,
+    comment,
+    decision === 'approved' ? plan.checksum : null,
+  );
   await deliver(actor, plan, submitter.email, mail, `plan ${decision}`);
 }

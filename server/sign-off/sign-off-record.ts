@@ -42,34 +42,42 @@ export async function signOffRecord(id: string, user: AuthUser): Promise<SignOff
   const plan = await findPlan(db, id);
   if (!plan) throw notFound('The plan');
   const events = await listPlanEvents(db, id);
-  const people = await findPeople(db, [plan.createdBy, plan.submittedBy, plan.approvedBy, plan.rejectedBy].filter((x): x is string => !!x));
+  const people = await findPeople(
+    db,
+    [plan.createdBy, plan.submittedBy, plan.approvedBy, plan.rejectedBy].filter((x): x is string => !!x),
+  );
   return {
     planId: plan.id,
     status: plan.status,
     version: plan.version,
     created: personAt(people, plan.createdBy, plan.createdAt),
     submitted: personAt(people, plan.submittedBy, plan.submittedAt),
-    approved: plan.approvedBy && plan.approvedAt ? { ...(personAt(people, plan.approvedBy, plan.approvedAt) as PersonAt), comment: plan.approvalComment } : null,
-    rejected: plan.rejectedBy && plan.rejectedAt ? { ...(personAt(people, plan.rejectedBy, plan.rejectedAt) as PersonAt), comment: plan.rejectionComment } : null,
-    superseded: plan.supersededAt && plan.supersededBy ? { at: plan.supersededAt.toISOString(), byPlanId: plan.supersededBy } : null,
+    approved:
+      plan.approvedBy && plan.approvedAt
+        ? { ...(personAt(people, plan.approvedBy, plan.approvedAt) as PersonAt), comment: plan.approvalComment }
+        : null,
+    rejected:
+      plan.rejectedBy && plan.rejectedAt
+        ? { ...(personAt(people, plan.rejectedBy, plan.rejectedAt) as PersonAt), comment: plan.rejectionComment }
+        : null,
+    superseded:
+      plan.supersededAt && plan.supersededBy ? { at: plan.supersededAt.toISOString(), byPlanId: plan.supersededBy } : null,
     checksum: plan.checksum,
     checksumVerified: verifyPlanChecksum(plan),
     copiedFrom: plan.copiedFrom,
-    events: events.map(
-      (e): PlanEvent => ({
-        id: e.id,
-        at: e.at.toISOString(),
-        action: e.action,
-        actorId: e.actorId,
-        actorName: e.actorName,
-        actorEmail: e.actorEmail,
-        fromStatus: e.fromStatus,
-        toStatus: e.toStatus,
-        version: e.version,
-        comment: e.comment,
-        details: e.details,
-      }),
-    ),
+    events: events.map((e): PlanEvent => ({
+      id: e.id,
+      at: e.at.toISOString(),
+      action: e.action,
+      actorId: e.actorId,
+      actorName: e.actorName,
+      actorEmail: e.actorEmail,
+      fromStatus: e.fromStatus,
+      toStatus: e.toStatus,
+      version: e.version,
+      comment: e.comment,
+      details: e.details,
+    })),
     can: allowedActions(plan, user),
   };
 }
@@ -77,7 +85,10 @@ export async function signOffRecord(id: string, user: AuthUser): Promise<SignOff
 export async function pendingSignOffs(user: AuthUser): Promise<PendingSignOff[]> {
   const db = getDb();
   const rows = await listAwaitingSignOff(db, user.id);
-  const people = await findPeople(db, rows.map((r) => r.submittedBy).filter((x): x is string => !!x));
+  const people = await findPeople(
+    db,
+    rows.map((r) => r.submittedBy).filter((x): x is string => !!x),
+  );
   return rows.map((r) => ({
     planId: r.id,
     version: r.version,
@@ -87,6 +98,10 @@ export async function pendingSignOffs(user: AuthUser): Promise<PendingSignOff[]>
     deliveryStart: r.deliveryStart.toISOString(),
     deliveryEnd: r.deliveryEnd.toISOString(),
     submittedAt: r.submittedAt?.toISOString() ?? null,
-    submittedBy: { id: r.submittedBy ?? '', name: people.get(r.submittedBy ?? '')?.name ?? null, email: people.get(r.submittedBy ?? '')?.email ?? null },
+    submittedBy: {
+      id: r.submittedBy ?? '',
+      name: people.get(r.submittedBy ?? '')?.name ?? null,
+      email: people.get(r.submittedBy ?? '')?.email ?? null,
+    },
   }));
 }

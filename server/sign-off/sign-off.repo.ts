@@ -15,10 +15,7 @@ import { planEvents } from './sign-off.schema';
 const contentFingerprint = sql<string>`md5(${plans.inputs}::text || coalesce(${plans.results}::text, ''))`;
 
 export async function findPlan(db: DbOrTx, id: string): Promise<(PlanRow & { fingerprint: string }) | null> {
-  const [row] = await db
-    .select({ plan: plans, fingerprint: contentFingerprint })
-    .from(plans)
-    .where(eq(plans.id, id));
+  const [row] = await db.select({ plan: plans, fingerprint: contentFingerprint }).from(plans).where(eq(plans.id, id));
   return row ? { ...row.plan, fingerprint: row.fingerprint } : null;
 }
 
@@ -30,7 +27,13 @@ export async function lockBatteryApprovals(tx: DbOrTx, batteryId: string): Promi
 export async function markSubmitted(tx: DbOrTx, id: string, version: number, userId: string): Promise<PlanRow | null> {
   const [row] = await tx
     .update(plans)
-    .set({ status: 'submitted', submittedBy: userId, submittedAt: sql`now()`, version: sql`${plans.version} + 1`, updatedAt: sql`now()` })
+    .set({
+      status: 'submitted',
+      submittedBy: userId,
+      submittedAt: sql`now()`,
+      version: sql`${plans.version} + 1`,
+      updatedAt: sql`now()`,
+    })
     .where(and(eq(plans.id, id), eq(plans.status, 'draft'), eq(plans.version, version), sql`${plans.results} is not null`))
     .returning();
   return row ?? null;
@@ -72,10 +75,23 @@ export async function markApproved(tx: DbOrTx, a: ApprovalWrite): Promise<PlanRo
   return row ?? null;
 }
 
-export async function markRejected(tx: DbOrTx, id: string, version: number, userId: string, comment: string): Promise<PlanRow | null> {
+export async function markRejected(
+  tx: DbOrTx,
+  id: string,
+  version: number,
+  userId: string,
+  comment: string,
+): Promise<PlanRow | null> {
   const [row] = await tx
     .update(plans)
-    .set({ status: 'rejected', rejectedBy: userId, rejectedAt: sql`now()`, rejectionComment: comment, version: sql`${plans.version} + 1`, updatedAt: sql`now()` })
+    .set({
+      status: 'rejected',
+      rejectedBy: userId,
+      rejectedAt: sql`now()`,
+      rejectionComment: comment,
+      version: sql`${plans.version} + 1`,
+      updatedAt: sql`now()`,
+    })
     .where(and(eq(plans.id, id), eq(plans.status, 'submitted'), eq(plans.version, version), ne(plans.submittedBy, userId)))
     .returning();
   return row ?? null;
@@ -85,7 +101,13 @@ export async function markRejected(tx: DbOrTx, id: string, version: number, user
 export async function supersedeOverlapping(tx: DbOrTx, p: { newId: string; batteryId: string; start: Date; end: Date }) {
   return tx
     .update(plans)
-    .set({ status: 'superseded', supersededAt: sql`now()`, supersededBy: p.newId, version: sql`${plans.version} + 1`, updatedAt: sql`now()` })
+    .set({
+      status: 'superseded',
+      supersededAt: sql`now()`,
+      supersededBy: p.newId,
+      version: sql`${plans.version} + 1`,
+      updatedAt: sql`now()`,
+    })
     .where(
       and(
         eq(plans.batteryId, p.batteryId),
@@ -131,7 +153,14 @@ export function listSignOffRecipients(db: DbOrTx, submitterId: string) {
   return db
     .select({ id: users.id, name: users.name, email: users.email })
     .from(users)
-    .where(and(inArray(users.role, ['approver', 'admin']), eq(users.disabled, false), sql`${users.passwordHash} is not null`, ne(users.id, submitterId)))
+    .where(
+      and(
+        inArray(users.role, ['approver', 'admin']),
+        eq(users.disabled, false),
+        sql`${users.passwordHash} is not null`,
+        ne(users.id, submitterId),
+      ),
+    )
     .orderBy(asc(users.email));
 }
 

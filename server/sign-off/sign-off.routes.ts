@@ -38,7 +38,10 @@ signOffRouter.post('/plans/:id/copy', async (req, res) => {
   const { id } = planIdParamsSchema.parse(req.params);
   copyActionSchema.parse(req.body ?? {});
   const copy = await copyPlan(actorOf(req), id);
-  res.status(201).location(`/api/plans/${copy.id}`).json({ id: copy.id, status: copy.status, version: copy.version, copiedFrom: copy.copiedFrom });
+  res
+    .status(201)
+    .location(`/api/plans/${copy.id}`)
+    .json({ id: copy.id, status: copy.status, version: copy.version, copiedFrom: copy.copiedFrom });
 });
 
 signOffRouter.get('/plans/:id/sign-off', async (req, res) => {

@@ -36,13 +36,25 @@ export function refusal(plan: PlanRow, step: Step, version: number, userId: stri
     return forbidden(`You submitted this plan, so you cannot ${VERB[step]} it: another approver must sign it off.`);
   }
   if (plan.status !== NEEDS[step]) {
-    return new AppError('wrong_status', `The plan is ${plan.status}; only a ${NEEDS[step]} plan can be ${step}. Reload the plan to see who acted on it.`, 409);
+    return new AppError(
+      'wrong_status',
+      `The plan is ${plan.status}; only a ${NEEDS[step]} plan can be ${step}. Reload the plan to see who acted on it.`,
+      409,
+    );
   }
   if (plan.version !== version) {
-    return new AppError('stale_version', `The plan changed since you opened it (you sent version ${version}, it is now at version ${plan.version}). Reload it, check it again and retry.`, 409);
+    return new AppError(
+      'stale_version',
+      `The plan changed since you opened it (you sent version ${version}, it is now at version ${plan.version}). Reload it, check it again and retry.`,
+      409,
+    );
   }
   if (plan.results === null) {
-    return unprocessable(plan.errorMessage ? `The plan has no results to sign off: ${plan.errorMessage}` : 'The plan has no results yet: wait for its job to finish.');
+    return unprocessable(
+      plan.errorMessage
+        ? `The plan has no results to sign off: ${plan.errorMessage}`
+        : 'The plan has no results yet: wait for its job to finish.',
+    );
   }
   return null;
 }
@@ -56,11 +68,32 @@ async function load(tx: DbOrTx, id: string) {
 /** After an UPDATE that matched no row: say why from the plan as it is now. */
 async function lostRace(tx: DbOrTx, id: string, step: Step, version: number, userId: string): Promise<AppError> {
   const now = await load(tx, id);
-  return refusal(now, step, version, userId) ?? conflict('The plan changed while you were signing it off. Reload it and check it again.');
+  return (
+    refusal(now, step, version, userId) ??
+    conflict('The plan changed while you were signing it off. Reload it and check it again.')
+  );
 }
 
-function event(plan: PlanRow, actor: Actor, action: NewPlanEvent['action'], from: string, comment: string | null, details: Record<string, unknown> = {}): NewPlanEvent {
-  return { planId: plan.id, action, actorId: actor.user.id, actorName: actor.user.name, actorEmail: actor.user.email, fromStatus: from, toStatus: plan.status, version: plan.version, comment, details };
+function event(
+  plan: PlanRow,
+  actor: Actor,
+  action: NewPlanEvent['action'],
+  from: string,
+  comment: string | null,
+  details: Record<string, unknown> = {},
+): NewPlanEvent {
+  return {
+    planId: plan.id,
+    action,
+    actorId: actor.user.id,
+    actorName: actor.user.name,
+    actorEmail: actor.user.email,
+    fromStatus: from,
+    toStatus: plan.status,
+    version: plan.version,
+    comment,
+    details,
+  };
 }
 
 const auditActor = (actor: Actor) => ({ actorId: actor.user.id, actorEmail: actor.user.email, ip: actor.ip });
@@ -73,7 +106,12 @@ export async function submitPlan(actor: Actor, id: string, body: SignOffAction):
     const row = await markSubmitted(tx, id, body.version, actor.user.id);
     if (!row) throw await lostRace(tx, id, 'submitted', body.version, actor.user.id);
     await insertPlanEvent(tx, event(row, actor, 'submitted', before.status, body.comment ?? null));
-    await recordAudit(tx, auditActor(actor), { action: 'plan.submitted', entityType: 'plan', entityId: id, details: { version: row.version, comment: body.comment ?? null } });
+    await recordAudit(tx, auditActor(actor), {
+      action: 'plan.submitted',
+      entityType: 'plan',
+      entityId: id,
+      details: { version: row.version, comment: body.comment ?? null },
+    });
     return row;
   });
   await notifySubmitted(actor, plan, body.comment);
@@ -98,18 +136,48 @@ export async function approvePlan(actor: Actor, id: string, body: SignOffAction)
     if (refused) throw refused;
     await lockBatteryApprovals(tx, before.batteryId);
     const checksum = planChecksum({ planId: before.id, inputs: before.inputs, results: before.results });
-    const row = await markApproved(tx, { id, version: body.version, userId: actor.user.id, comment: body.comment ?? null, checksum, fingerprint: before.fingerprint });
+    const row = await markApproved(tx, {
+      id,
+      version: body.version,
+      userId: actor.user.id,
+      comment: body.comment ?? null,
+      checksum,
+      fingerprint: before.fingerprint,
+    });
     if (!row) throw await lostRace(tx, id, 'approved', body.version, actor.user.id);
     await insertPlanEvent(tx, event(row, actor, 'approved', before.status, body.comment ?? null, { checksum }));
-    await recordAudit(tx, auditActor(actor), { action: 'plan.approved', entityType: 'plan', entityId: id, details: { version: row.version, checksum, comment: body.comment ?? null } });
+    await recordAudit(tx, auditActor(actor), {
+      action: 'plan.approved',
+      entityType: 'plan',
+      entityId: id,
+      details: { version: row.version, checksum, comment: body.comment ?? null },
+    });
 
-    const superseded = await supersedeOverlapping(tx, { newId: id, batteryId: row.batteryId, start: row.deliveryStart, end: row.deliveryEnd });
+    const superseded = await supersedeOverlapping(tx, {
+      newId: id,
+      batteryId: row.batteryId,
+      start: row.deliveryStart,
+      end: row.deliveryEnd,
+    });
     for (const old of superseded) {
       await insertPlanEvent(tx, {
-        planId: old.id, action: 'superseded', actorId: actor.user.id, actorName: actor.user.name, actorEmail: actor.user.email,
-        fromStatus: 'approved', toStatus: 'superseded', version: old.version, comment: null, details: { supersededBy: id },
+        planId: old.id,
+        action: 'superseded',
+        actorId: actor.user.id,
+        actorName: actor.user.name,
+        actorEmail: actor.user.email,
+        fromStatus: 'approved',
+        toStatus: 'superseded',
+        version: old.version,
+        comment: null,
+        details: { supersededBy: id },
       });
-      await recordAudit(tx, auditActor(actor), { action: 'plan.superseded', entityType: 'plan', entityId: old.id, details: { supersededBy: id } });
+      await recordAudit(tx, auditActor(actor), {
+        action: 'plan.superseded',
+        entityType: 'plan',
+        entityId: old.id,
+        details: { supersededBy: id },
+      });
     }
     return { plan: row, supersededPlanIds: superseded.map((s) => s.id) };
   });
@@ -125,7 +193,12 @@ export async function rejectPlan(actor: Actor, id: string, body: { comment: stri
     const row = await markRejected(tx, id, body.version, actor.user.id, body.comment);
     if (!row) throw await lostRace(tx, id, 'rejected', body.version, actor.user.id);
     await insertPlanEvent(tx, event(row, actor, 'rejected', before.status, body.comment));
-    await recordAudit(tx, auditActor(actor), { action: 'plan.rejected', entityType: 'plan', entityId: id, details: { version: row.version, comment: body.comment } });
+    await recordAudit(tx, auditActor(actor), {
+      action: 'plan.rejected',
+      entityType: 'plan',
+      entityId: id,
+      details: { version: row.version, comment: body.comment },
+    });
     return row;
   });
   await notifyDecision(actor, plan, 'rejected', body.comment);
@@ -141,7 +214,12 @@ export async function copyPlan(actor: Actor, id: string): Promise<PlanRow> {
     }
     const copy = await insertDraftCopy(tx, source, actor.user.id);
     await insertPlanEvent(tx, event(source, actor, 'copied', source.status, null, { copyId: copy.id }));
-    await recordAudit(tx, auditActor(actor), { action: 'plan.copied', entityType: 'plan', entityId: copy.id, details: { copiedFrom: id } });
+    await recordAudit(tx, auditActor(actor), {
+      action: 'plan.copied',
+      entityType: 'plan',
+      entityId: copy.id,
+      details: { copiedFrom: id },
+    });
     return copy;
   });
 }

@@ -23,7 +23,11 @@ export async function verifySignedOffPlans(db: DbOrTx, pageSize = 50): Promise<C
       report.checked += 1;
       if (!plan.checksum) report.mismatches.push({ planId: plan.id, status: plan.status, reason: 'no checksum is stored' });
       else if (!checksumMatches(plan.checksum, { planId: plan.id, inputs: plan.inputs, results: plan.results })) {
-        report.mismatches.push({ planId: plan.id, status: plan.status, reason: 'the stored inputs or results no longer match the checksum taken at approval' });
+        report.mismatches.push({
+          planId: plan.id,
+          status: plan.status,
+          reason: 'the stored inputs or results no longer match the checksum taken at approval',
+        });
       } else report.verified += 1;
     }
     const last = page.at(-1);

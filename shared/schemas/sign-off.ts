@@ -16,7 +16,7 @@ const comment = z
   .transform((c) => (c === '' ? undefined : c));
 
 const version = z
-  .number({ message: 'Send the version of the plan you looked at (a whole number), so a stale page cannot act on a changed plan.' })
+  .number({ error: 'Send the version of the plan you looked at (a whole number), so a stale page cannot act on a changed plan.' })
   .int('The version is a whole number.')
   .min(0, 'The version is not negative.');
 
@@ -26,7 +26,11 @@ export type SignOffAction = z.infer<typeof signOffActionSchema>;
 
 /** reject: the submitter needs to know why, so the comment is required. */
 export const rejectActionSchema = z.strictObject({
-  comment: z.string().trim().min(1, 'Say why the plan is rejected: the planner receives this comment.').max(2000, 'Keep the comment under 2000 characters.'),
+  comment: z
+    .string({ error: 'Say why the plan is rejected: the planner receives this comment.' })
+    .trim()
+    .min(1, 'Say why the plan is rejected: the planner receives this comment.')
+    .max(2000, 'Keep the comment under 2000 characters.'),
   version,
 });
 
@@ -98,7 +102,7 @@ export interface PendingSignOff {
  */
 export const SIGN_OFF_CAUTIONS: readonly string[] = [
   'This schedule is decision support, not an instruction: qualified personnel decide dispatch.',
-  'Check it against the interconnection agreement, the applicable grid code (e.g. IEEE 1547-2018 or IEEE 2800-2022 where they apply) and the system operator\'s instructions, which override any schedule.',
-  'Check it against the battery maker\'s operating limits (power, state-of-charge window, temperature, cycling).',
-  'Check it against the site\'s fire and safety requirements (e.g. NFPA 855, UL 9540 and UL 9540A, IEC 62933-5).',
+  "Check it against the interconnection agreement, the applicable grid code (e.g. IEEE 1547-2018 or IEEE 2800-2022 where they apply) and the system operator's instructions, which override any schedule.",
+  "Check it against the battery maker's operating limits (power, state-of-charge window, temperature, cycling).",
+  "Check it against the site's fire and safety requirements (e.g. NFPA 855, UL 9540 and UL 9540A, IEC 62933-5).",
 ];

@@ -15,14 +15,26 @@ const readBack = (text: string): string[][] =>
 describe('writes RFC 4180 CSV', () => {
   it('ends every record with CRLF, including the last one', () => {
     // [S: RFC 4180 section 2.1-2.2] records are delimited by CRLF; the last may end with one.
-    expect(writeCsv(['a', 'b'], [[1, 2], [3, 4]])).toBe('a,b\r\n1,2\r\n3,4\r\n');
+    expect(
+      writeCsv(
+        ['a', 'b'],
+        [
+          [1, 2],
+          [3, 4],
+        ],
+      ),
+    ).toBe('a,b\r\n1,2\r\n3,4\r\n');
   });
 
   it('quotes fields holding a comma, a quote, CR or LF and doubles inner quotes', () => {
     // [S: RFC 4180 section 2.6-2.7] such fields are enclosed in double quotes; a quote inside is doubled.
     const text = writeCsv(['note'], [['a,b'], ['say "hi"'], ['two\r\nlines'], ['line\nfeed'], ['plain']]);
     expect(text).toBe('note\r\n"a,b"\r\n"say ""hi"""\r\n"two\r\nlines"\r\n"line\nfeed"\r\nplain\r\n');
-    expect(readBack(text).slice(1).map((r) => r[0])).toEqual(['a,b', 'say "hi"', 'two\r\nlines', 'line\nfeed', 'plain']);
+    expect(
+      readBack(text)
+        .slice(1)
+        .map((r) => r[0]),
+    ).toEqual(['a,b', 'say "hi"', 'two\r\nlines', 'line\nfeed', 'plain']);
   });
 
   it('refuses a row whose field count differs from the header', () => {
@@ -34,8 +46,13 @@ describe('writes RFC 4180 CSV', () => {
     // [D] String(x) is the shortest decimal that parses back to x (ECMAScript Number::toString).
     fc.assert(
       fc.property(fc.array(fc.double({ noNaN: true, noDefaultInfinity: true }), { minLength: 1, maxLength: 20 }), (values) => {
-        const text = writeCsv(['v'], values.map((v) => [v]));
-        const cells = readBack(text).slice(1).map((r) => r[0] ?? '');
+        const text = writeCsv(
+          ['v'],
+          values.map((v) => [v]),
+        );
+        const cells = readBack(text)
+          .slice(1)
+          .map((r) => r[0] ?? '');
         expect(cells.some((c) => c.startsWith("'"))).toBe(false);
         expect(cells.map(Number)).toEqual(values.map((v) => (v === 0 ? 0 : v)));
       }),
@@ -46,8 +63,13 @@ describe('writes RFC 4180 CSV', () => {
   it('reads back any text cell unchanged unless it needed a formula guard', () => {
     fc.assert(
       fc.property(fc.array(fc.string({ unit: 'grapheme', maxLength: 12 }), { minLength: 1, maxLength: 10 }), (texts) => {
-        const text = writeCsv(['t'], texts.map((s) => [s]));
-        const cells = readBack(`${text}`).slice(1).map((r) => r[0] ?? '');
+        const text = writeCsv(
+          ['t'],
+          texts.map((s) => [s]),
+        );
+        const cells = readBack(`${text}`)
+          .slice(1)
+          .map((r) => r[0] ?? '');
         // Blank cells make blank lines, which the reader skips: compare the non-blank ones.
         expect(cells).toEqual(texts.map(guardTextCell).filter((s) => s !== ''));
       }),
@@ -60,7 +82,7 @@ describe('guards text cells against formula injection', () => {
   // = + - @ tab CR LF (and NUL, named by ASVS 1.2.10) get a leading single quote.
   it.each([
     ['=HYPERLINK("http://evil.example","click")', `'=HYPERLINK("http://evil.example","click")`],
-    ['+1+cmd|\' /C calc\'!A0', `'+1+cmd|' /C calc'!A0`],
+    ["+1+cmd|' /C calc'!A0", `'+1+cmd|' /C calc'!A0`],
     ['-2+3', "'-2+3"],
     ['@SUM(1,2)', "'@SUM(1,2)"],
     ['\t=1+1', "'\t=1+1"],

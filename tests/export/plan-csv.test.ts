@@ -44,7 +44,8 @@ const meta = (over: Partial<ExportMeta> = {}): ExportMeta => ({
   ...over,
 });
 
-const rowsOf = (text: string) => Papa.parse<Record<string, string>>(text, { header: true, newline: '\r\n', skipEmptyLines: true }).data;
+const rowsOf = (text: string) =>
+  Papa.parse<Record<string, string>>(text, { header: true, newline: '\r\n', skipEmptyLines: true }).data;
 
 describe('plan CSV export', () => {
   it('writes one row per delivery interval with local times and offsets across the DST change', () => {
@@ -82,7 +83,10 @@ describe('plan CSV export', () => {
   });
 
   it('guards user-written text (site name, names, comment) but never a number', () => {
-    const text = planCsv(springDay(), meta({ siteName: '=HYPERLINK("http://x.example")', approvedBy: '@boss', approvalComment: '-1+1' }));
+    const text = planCsv(
+      springDay(),
+      meta({ siteName: '=HYPERLINK("http://x.example")', approvedBy: '@boss', approvalComment: '-1+1' }),
+    );
     const rows = rowsOf(text);
     // [S: OWASP CSV Injection; ASVS 5.0.0 1.2.10]
     expect(rows[0]?.site).toBe(`'=HYPERLINK("http://x.example")`);
@@ -103,14 +107,25 @@ describe('plan CSV export', () => {
 
   it('uploads back the same series when read with interval-ending labels (the end column is picked)', () => {
     const schedule = springDay();
-    const result = parseProfileCsv(planCsv(schedule, meta()), { kind: 'price', unit: 'currency/MWh', timezone: BERLIN, intervalEnding: true });
+    const result = parseProfileCsv(planCsv(schedule, meta()), {
+      kind: 'price',
+      unit: 'currency/MWh',
+      timezone: BERLIN,
+      intervalEnding: true,
+    });
     if (!result.ok) throw new Error(JSON.stringify(result.issues));
     expect(result.profile.startMs).toBe(schedule.startMs);
     expect(result.profile.notes.join(' ')).toMatch(/Times from "interval_end"/);
   });
 
   it('names the file after site, window, plan, status and, once approved, the checksum', () => {
-    const base = { siteName: 'Hafen Süd / Pier 3', timezone: BERLIN, startMs: at('2026-03-28T23:00:00Z'), endMs: at('2026-03-29T22:00:00Z'), planId: 'p1' };
+    const base = {
+      siteName: 'Hafen Süd / Pier 3',
+      timezone: BERLIN,
+      startMs: at('2026-03-28T23:00:00Z'),
+      endMs: at('2026-03-29T22:00:00Z'),
+      planId: 'p1',
+    };
     expect(exportFileName({ ...base, status: 'approved', checksum: 'ab'.repeat(32) })).toBe(
       `slackwater_hafen-sud-pier-3_2026-03-29T0000+0100_to_2026-03-30T0000+0200_plan-p1_approved_sha256-${'ab'.repeat(32)}.csv`,
     );

@@ -27,10 +27,26 @@ describe('canonical JSON (RFC 8785)', () => {
 
   it('sorts member names by UTF-16 code units, as the RFC sorting example shows', () => {
     // [M] RFC 8785 section 3.2.3 example, from memory: CR, "1", U+0080, ö, €, 😀 (a surrogate pair), U+FB33.
-    const input = { '\u20ac': 'Euro Sign', '\r': 'Carriage Return', '\ufb33': 'Hebrew Letter Dalet With Dagesh', '1': 'One', '\ud83d\ude00': 'Emoji: Grinning Face', '\u0080': 'Control', '\u00f6': 'Latin Small Letter O With Diaeresis' };
+    const input = {
+      '\u20ac': 'Euro Sign',
+      '\r': 'Carriage Return',
+      '\ufb33': 'Hebrew Letter Dalet With Dagesh',
+      '1': 'One',
+      '\ud83d\ude00': 'Emoji: Grinning Face',
+      '\u0080': 'Control',
+      '\u00f6': 'Latin Small Letter O With Diaeresis',
+    };
     // Read the order from the text: JSON.parse would move the integer-like key "1" first.
     const names = [...canonicalJson(input).matchAll(/":"([^"]+)"/g)].map((m) => m[1]);
-    expect(names).toEqual(['Carriage Return', 'One', 'Control', 'Latin Small Letter O With Diaeresis', 'Euro Sign', 'Emoji: Grinning Face', 'Hebrew Letter Dalet With Dagesh']);
+    expect(names).toEqual([
+      'Carriage Return',
+      'One',
+      'Control',
+      'Latin Small Letter O With Diaeresis',
+      'Euro Sign',
+      'Emoji: Grinning Face',
+      'Hebrew Letter Dalet With Dagesh',
+    ]);
     expect(canonicalJson(input)).toBe(canonicalize(input));
   });
 
@@ -51,11 +67,17 @@ describe('canonical JSON (RFC 8785)', () => {
 });
 
 describe('plan checksum', () => {
-  const content = { planId: '7d0f4b8e-0000-4000-8000-000000000001', inputs: { battery: { energyKwh: 4000, socMinPct: 10 }, prices: [42.5, -3.25] }, results: { chargeKw: [1000, 0], dischargeKw: [0, 810] } };
+  const content = {
+    planId: '7d0f4b8e-0000-4000-8000-000000000001',
+    inputs: { battery: { energyKwh: 4000, socMinPct: 10 }, prices: [42.5, -3.25] },
+    results: { chargeKw: [1000, 0], dischargeKw: [0, 810] },
+  };
 
   it('is SHA-256 as published: the FIPS 180 test vector for "abc"', () => {
     // [S: FIPS 180-2, Appendix B.1] SHA-256("abc").
-    expect(createHash('sha256').update('abc').digest('hex')).toBe('ba7816bf8f01cfea414140de5dae2223b00361a396177a9cb410ff61f20015ad');
+    expect(createHash('sha256').update('abc').digest('hex')).toBe(
+      'ba7816bf8f01cfea414140de5dae2223b00361a396177a9cb410ff61f20015ad',
+    );
   });
 
   it('equals sha256sum of the canonical text, so anyone can reproduce it outside Slackwater', () => {
@@ -65,7 +87,11 @@ describe('plan checksum', () => {
   });
 
   it('does not depend on the order of object members (jsonb does not keep it)', () => {
-    const reordered = { results: { dischargeKw: [0, 810], chargeKw: [1000, 0] }, inputs: { prices: [42.5, -3.25], battery: { socMinPct: 10, energyKwh: 4000 } }, planId: content.planId };
+    const reordered = {
+      results: { dischargeKw: [0, 810], chargeKw: [1000, 0] },
+      inputs: { prices: [42.5, -3.25], battery: { socMinPct: 10, energyKwh: 4000 } },
+      planId: content.planId,
+    };
     expect(planChecksum(reordered)).toBe(planChecksum(content));
   });
 
@@ -78,7 +104,12 @@ describe('plan checksum', () => {
   it('verifies a stored checksum and rejects a wrong or malformed one', () => {
     const sum = planChecksum(content);
     expect(checksumMatches(sum, content)).toBe(true);
-    expect(checksumMatches(sum.replace(/^./, (c) => (c === '0' ? '1' : '0')), content)).toBe(false);
+    expect(
+      checksumMatches(
+        sum.replace(/^./, (c) => (c === '0' ? '1' : '0')),
+        content,
+      ),
+    ).toBe(false);
     expect(checksumMatches('not-a-checksum', content)).toBe(false);
     expect(checksumMatches(null, content)).toBe(false);
   });
