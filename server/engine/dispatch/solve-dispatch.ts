@@ -5,6 +5,7 @@
  */
 import type { DispatchProblem, DispatchSolution } from '../types';
 import { checkDp, solveWithDp } from './dp-bridge';
+import { validateProblem } from '../model/validate-problem';
 import { failedSolution, solveDispatchLp, type LpDispatchOptions } from './solve-dispatch-lp';
 
 export interface DispatchOptions extends LpDispatchOptions {
@@ -18,6 +19,9 @@ export interface DispatchOptions extends LpDispatchOptions {
  */
 export function solveDispatch(problem: DispatchProblem, options: DispatchOptions = {}): DispatchSolution {
   const method = options.method ?? 'auto';
+  // One validation for both paths, so a bad input reads the same whichever would have solved it.
+  const issue = options.validated ? null : validateProblem(problem);
+  if (issue) return failedSolution('error', issue.message, method === 'dp' ? 'dp' : 'lp');
   if (method !== 'lp') {
     const check = checkDp(problem);
     if (check.ok) {
@@ -28,5 +32,5 @@ export function solveDispatch(problem: DispatchProblem, options: DispatchOptions
       return failedSolution('error', `the dynamic-programming path cannot solve this problem: ${check.reason}`, 'dp');
     }
   }
-  return solveDispatchLp(problem, options).solution;
+  return solveDispatchLp(problem, { ...options, validated: true }).solution;
 }

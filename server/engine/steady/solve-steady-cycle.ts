@@ -10,6 +10,8 @@ import type { AlignedInputs } from '../inputs/align-inputs';
 import type { InputIssue } from '../model/validate-battery';
 import { usableEnergyKwh } from '../inputs/problem-for';
 import { solveDispatchLp } from '../dispatch/solve-dispatch-lp';
+import { buildDispatchModel, energyBounds } from '../model/build-dispatch-model';
+import { oneSidedValues } from './one-sided-values';
 import { clockLabel } from '../time/zone-offsets';
 import { representativeDay, type DaySelection, type DstDay } from './representative-day';
 
@@ -22,7 +24,10 @@ export interface SteadySlot {
   readonly dischargeKw: number;
   /** Energy at the end of the slot, kWh. */
   readonly socKwh: number;
-  /** Value of stored energy at the end of the slot, currency/MWh. */
+  /**
+   * Value of stored energy at the end of the slot, currency/MWh. Where the SoC sits
+   * at a bound, the one-sided value on the side it can move to (see one-sided-values.ts).
+   */
   readonly storedEnergyValue: number;
 }
 
@@ -70,6 +75,10 @@ export function solveSteadyCycle(inputs: AlignedInputs, options: SteadyOptions =
     dayIndex: day.slotStartMinutes.map(() => 0),
   };
   const { solution } = solveDispatchLp(problem);
+  const values =
+    solution.status === 'optimal'
+      ? oneSidedValues(buildDispatchModel(problem), solution.objective, solution.socKwh, solution.storedEnergyValue, energyBounds(inputs))
+      : [];
   const base = { slotMinutes: day.slotMinutes, days: day.days, dstDays: day.dstDays, notes: day.notes };
   if (solution.status !== 'optimal') {
     return {
@@ -90,7 +99,7 @@ export function solveSteadyCycle(inputs: AlignedInputs, options: SteadyOptions =
         chargeKw: solution.chargeKw[k]!,
         dischargeKw: solution.dischargeKw[k]!,
         socKwh: solution.socKwh[k + 1]!,
-        storedEnergyValue: solution.storedEnergyValue[k]!,
+        storedEnergyValue: values[k]!,
       })),
       socStartKwh: solution.socKwh[0]!,
       costPerDay: solution.cost,

@@ -1,0 +1,54 @@
+// Plans (delivery window + lookahead + terminal rule) and horizon studies on
+// daily-periodic prices, whose turnpike is the steady cycle.
+import { describe, expect, it } from 'vitest';
+import { problemFor } from '../../server/engine/inputs/problem-for';
+import { solvePlan } from '../../server/engine/plan/solve-plan';
+import { runHorizonStudy } from '../../server/engine/study/run-horizon-study';
+import { brokenLimits } from './support/limit-check';
+import { periodicInputs } from './support/periodic-inputs';
+
+const inputs = periodicInputs(12);
+const day = 24 * 3_600_000;
+const t0 = inputs.timesMs[0]!;
+
+describe('plans', () => {
+  it('flags a leaving arc inside the delivery window when the free rule meets a horizon as short as the window', () => {
+    // [S] Trélat & Zuazua 2015; Faulwasser & Grüne 2020 (REFERENCES): a plan with no terminal value ends with
+    // a leaving arc that empties the battery. [D] Delivery 00:00–14:00 with a 14 h horizon ends at 14:00,
+    // when the steady cycle is still full, so the free plan sells early and leaves the band inside the window.
+    const result = solvePlan(inputs, { startMs: t0 + day, endMs: t0 + day + 14 * 3_600_000, horizonHours: 14, terminal: { kind: 'free' }, initialSocPct: 25, method: 'lp' });
+    if (!result.ok) throw new Error(result.issue.message);
+    expect(result.plan.turnpike.leavingArcSteps).toBeGreaterThan(0);
+    expect(result.plan.turnpike.flags.join(' ')).toContain('leaving arc reaches into the delivery window');
+  });
+
+  it('has no leaving arc in the window with the steady-value rule, and a commit window covering the delivery day', () => {
+    // [D] DESIGN section 1 (adjoint turnpike): valuing end energy at the steady value removes the leaving arc;
+    // a 36 h plan then agrees with a much longer plan over the 24 h delivery day.
+    const result = solvePlan(inputs, { startMs: t0 + day, endMs: t0 + 2 * day, horizonHours: 36, terminal: { kind: 'steady-value' }, initialSocPct: 25, method: 'lp' });
+    if (!result.ok) throw new Error(result.issue.message);
+    const { turnpike, solution, from, windowEnd, terminalRule } = result.plan;
+    expect(turnpike.flags.join(' ')).not.toContain('leaving arc');
+    expect(turnpike.commitWindowSteps).toBeGreaterThanOrEqual(24);
+    expect(brokenLimits(problemFor(inputs, from, windowEnd, inputs.battery.energyKwh * 0.25, terminalRule), solution)).toEqual([]);
+  });
+
+  it('refuses a horizon shorter than the delivery window, naming it', () => {
+    const result = solvePlan(inputs, { startMs: t0, endMs: t0 + day, horizonHours: 12, terminal: { kind: 'free' } });
+    expect(result.ok).toBe(false);
+    if (!result.ok) expect(result.issue.message).toContain('shorter than the delivery window');
+  });
+});
+
+describe('horizon study', () => {
+  it('gives the same runs on worker threads as in one thread', async () => {
+    // [D] Each run is a deterministic function of its inputs, wherever it runs.
+    const request = { horizonsHours: [6, 24], replanHours: 2, terminals: [{ kind: 'free' } as const, { kind: 'steady-value' } as const], method: 'lp' as const };
+    const here = await runHorizonStudy(periodicInputs(4), { ...request, workers: 1 });
+    const threads = await runHorizonStudy(periodicInputs(4), { ...request, workers: 2 });
+    if (!here.ok || !threads.ok) throw new Error('study failed');
+    expect(threads.study.workers).toBe(2);
+    expect(threads.study.runs.map((r) => r.cost)).toEqual(here.study.runs.map((r) => r.cost));
+    expect(here.study.recommendation.horizonHours).not.toBeNull();
+  });
+});
