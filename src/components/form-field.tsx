@@ -1,0 +1,62 @@
+import type { ReactNode } from 'react';
+
+export interface FormFieldProps {
+  /** id of the control inside; the label points at it. */
+  id: string;
+  label: string;
+  /** Unit shown beside the control (kW, %, …). */
+  unit?: string | undefined;
+  /** Validation error (brick): the value will not be accepted. */
+  error?: string | undefined;
+  /** Outside common practice (amber): accepted, but check it. */
+  warning?: string | undefined;
+  hint?: string | undefined;
+  children: ReactNode;
+}
+
+/** Label, control, unit, and the field's error or warning right beside it (linked with aria-describedby). */
+export function FormField({ id, label, unit, error, warning, hint, children }: FormFieldProps) {
+  return (
+    <div className="flex flex-col gap-1">
+      <label htmlFor={id} className="text-sm font-medium text-ink-800">
+        {label}
+      </label>
+      <div className="flex items-center gap-2">
+        {children}
+        {unit && <span className="shrink-0 text-sm text-ink-500">{unit}</span>}
+      </div>
+      {hint && !error && (
+        <p id={`${id}-hint`} className="text-xs text-ink-500">
+          {hint}
+        </p>
+      )}
+      {error && (
+        <p id={`${id}-error`} role="alert" className="text-sm text-brick-700">
+          {error}
+        </p>
+      )}
+      {warning && !error && (
+        <p id={`${id}-warning`} className="rounded bg-amber-100 px-2 py-1 text-sm text-ink-900">
+          <span className="font-semibold text-amber-600">Check: </span>
+          {warning}
+        </p>
+      )}
+    </div>
+  );
+}
+
+/** aria-describedby for a control inside FormField, naming whichever messages are shown. */
+export function describedBy(id: string, f: { error?: string | undefined; warning?: string | undefined; hint?: string | undefined }) {
+  const ids = [f.error && `${id}-error`, f.warning && !f.error && `${id}-warning`, f.hint && !f.error && `${id}-hint`].filter(Boolean);
+  return ids.length > 0 ? ids.join(' ') : undefined;
+}
+
+export const inputClass =
+  'w-full rounded border border-ink-300 bg-white px-3 py-1.5 text-ink-900 shadow-sm focus:border-seaglass-600 aria-[invalid=true]:border-brick-600';
+
+export const buttonClass = {
+  primary:
+    'rounded bg-seaglass-700 px-4 py-2 text-sm font-semibold text-white hover:bg-seaglass-600 disabled:cursor-not-allowed disabled:opacity-50',
+  secondary: 'rounded border border-ink-300 bg-white px-4 py-2 text-sm font-medium text-ink-800 hover:bg-ink-50 disabled:opacity-50',
+  danger: 'rounded border border-brick-600 bg-white px-3 py-1.5 text-sm font-medium text-brick-700 hover:bg-brick-100 disabled:opacity-50',
+};
