@@ -118,7 +118,7 @@ function runWindows(ctx: DpContext, o: DpClosedLoopOptions): DpClosedLoopResult 
       return failed(emptyDpSolution('infeasible', `the window starting at step ${s} has no feasible plan: ${failure}`), windows, solver.stats);
     }
     if (scratch && soc && o.onPlan) {
-      scratch.copyFrom(solver, s, end, s);
+      scratch.copyFrom(solver, s, end, s, true);
       soc[0] = e;
       soc.set(scratch.y.subarray(0, end - s), 1);
       o.onPlan({

@@ -1,5 +1,4 @@
 import type { ForwardStepResult } from './forward-step';
-import { sameBits } from './value-store';
 
 /**
  * Forward decisions per absolute step (index t mod size), with what each was
@@ -48,11 +47,6 @@ export class PlanRing {
     this.value = new Float64Array(size);
     this.rangeLo = new Float64Array(size);
     this.rangeHi = new Float64Array(size);
-  }
-
-  matches(r: number, t: number, vid: number, e: number, muLo: number, muHi: number): boolean {
-    return this.tTag[r] === t && this.vidUsed[r] === vid && sameBits(this.eIn[r] ?? NaN, e)
-      && sameBits(this.muInLo[r] ?? NaN, muLo) && sameBits(this.muInHi[r] ?? NaN, muHi);
   }
 
   record(r: number, t: number, vid: number, e: number, muLo: number, muHi: number, fs: ForwardStepResult, netKw: number): void {

@@ -4,7 +4,7 @@ import { writeTerminal, type DpContext } from './context';
 import { diagnoseInfeasible } from './diagnose';
 import { forwardStep, newForwardStepResult } from './forward-step';
 import { PlanRing } from './plan-ring';
-import { ValueStore } from './value-store';
+import { sameBits, ValueStore } from './value-store';
 
 /** Work counters, for the benchmark and for tests that check reuse happened. */
 export interface DpWorkStats {
@@ -106,44 +106,41 @@ export class WindowSolver {
   }
 
   private forward(start: number, to: number, e0: number, warm: boolean): boolean {
-    const { ctx, store, plan, fs, size } = this;
+    const { ctx, store, plan, fs, size, map, vid } = this;
     const a = ctx.retention;
     const net = ctx.stages.netLoadKw;
+    const hiMark = ctx.emax - 1e-12 * ctx.emax;
+    const loMark = ctx.emin + 1e-12 * ctx.emax;
+    const { tTag, vidUsed, eIn, muInLo, muInHi, y, muLo: outLo, muHi: outHi } = plan;
     let e = e0;
     let muLo = -Infinity;
     let muHi = Infinity;
+    let reused = 0;
+    let r = start % size;
     for (let t = start; t < to; t++) {
-      const r = t % size;
-      const w = map1(this.map, (t + 1) % size);
-      const v = this.vid[w] ?? 0;
+      const rNext = r + 1 === size ? 0 : r + 1;
+      const w = map[rNext] ?? 0;
+      const v = vid[w] ?? 0;
       if (t > start) {
         // Link the upstream dual interval through e_t: μ_{t−1} = a·μ_t inside the
         // window, one-sided at a bound (its multiplier takes the rest).
-        const atMax = e >= ctx.emax - 1e-12 * ctx.emax;
-        const atMin = e <= ctx.emin + 1e-12 * ctx.emax;
-        const lo = atMin ? -Infinity : muLo / a;
-        const hi = atMax ? Infinity : muHi / a;
-        muLo = lo;
-        muHi = hi;
-      } else {
-        muLo = -Infinity;
-        muHi = Infinity;
+        muLo = e <= loMark ? -Infinity : a === 1 ? muLo : muLo / a;
+        muHi = e >= hiMark ? Infinity : a === 1 ? muHi : muHi / a;
       }
-      if (warm && plan.matches(r, t, v, e, muLo, muHi)) {
-        this.stats.forwardStepsReused++;
+      if (warm && tTag[r] === t && vidUsed[r] === v && sameBits(eIn[r] ?? NaN, e)
+        && sameBits(muInLo[r] ?? NaN, muLo) && sameBits(muInHi[r] ?? NaN, muHi)) {
+        reused++;
       } else {
         if (!forwardStep(store, w, ctx.stages, t, a * e, ctx.tol, fs)) return false;
-        this.stats.forwardSteps++;
         plan.record(r, t, v, e, muLo, muHi, fs, net[t] ?? 0);
       }
-      e = plan.y[r] ?? 0;
-      muLo = plan.muLo[r] ?? 0;
-      muHi = plan.muHi[r] ?? 0;
+      e = y[r] ?? 0;
+      muLo = outLo[r] ?? 0;
+      muHi = outHi[r] ?? 0;
+      r = rNext;
     }
+    this.stats.forwardStepsReused += reused;
+    this.stats.forwardSteps += to - start - reused;
     return true;
   }
-}
-
-function map1(map: Int32Array, r: number): number {
-  return map[r] ?? 0;
 }
