@@ -29,7 +29,7 @@ export function inventedPrices(): number[] {
   return Array.from({ length: 48 }, (_, h) => {
     const hour = h % 24;
     const base = 60 + 35 * Math.sin(((hour - 9) / 24) * 2 * Math.PI);
-    return Math.round((hour >= 12 && hour <= 14 ? base - 80 : base) * 100) / 100;
+    return Math.round((hour >= 12 && hour <= 14 ? base - 100 : base) * 100) / 100;
   });
 }
 
