@@ -1,14 +1,68 @@
 import { createBrowserRouter, RouterProvider } from 'react-router-dom';
-import { AppShell } from '@/components/app-shell';
+import { SignInPage } from '@/features/auth/components/sign-in-page';
+import { ForgotPasswordPage } from '@/features/auth/components/forgot-password-page';
+import { SetPasswordPage } from '@/features/auth/components/set-password-page';
+import { ChangePasswordPage } from '@/features/auth/components/change-password-page';
+import { ProtectedLayout, type RoleNavItem } from '@/features/auth/components/protected-layout';
+import { RequirePermission } from '@/features/auth/components/require-permission';
+import { UsersPage } from '@/features/users/components/users-page';
+import { AuditPage } from '@/features/audit/components/audit-page';
+import { MailOutboxPage } from '@/features/mail/components/mail-outbox-page';
 import { HomeRoute } from './routes/home';
 import { NotFoundRoute } from './routes/not-found';
 
+/**
+ * Main navigation; each link shows only for roles that may do its action (DESIGN
+ * section 5). The server refuses what a role may not do whether or not a link shows.
+ */
+const nav: RoleNavItem[] = [
+  { to: '/', label: 'Overview', action: 'data.read' },
+  { to: '/sites', label: 'Sites', action: 'data.read' },
+  { to: '/profiles', label: 'Profiles', action: 'data.read' },
+  { to: '/plans', label: 'Plans', action: 'data.read' },
+  { to: '/studies', label: 'Studies', action: 'data.read' },
+  { to: '/sign-off', label: 'Sign-off', action: 'plans.approve' },
+  { to: '/users', label: 'Users', action: 'users.manage' },
+  { to: '/audit', label: 'Audit', action: 'audit.read' },
+  { to: '/mail', label: 'Mail outbox', action: 'mail.read' },
+];
+
 /** Routes only compose features; each feature adds its pages here. */
 const router = createBrowserRouter([
+  // Before sign-in
+  { path: '/sign-in', element: <SignInPage /> },
+  { path: '/forgot-password', element: <ForgotPasswordPage /> },
+  { path: '/set-password', element: <SetPasswordPage /> },
+  // Everything else needs a signed-in user
   {
-    element: <AppShell />,
+    element: <ProtectedLayout nav={nav} />,
     children: [
       { index: true, element: <HomeRoute /> },
+      { path: 'account/password', element: <ChangePasswordPage /> },
+      {
+        path: 'users',
+        element: (
+          <RequirePermission action="users.manage">
+            <UsersPage />
+          </RequirePermission>
+        ),
+      },
+      {
+        path: 'audit',
+        element: (
+          <RequirePermission action="audit.read">
+            <AuditPage />
+          </RequirePermission>
+        ),
+      },
+      {
+        path: 'mail',
+        element: (
+          <RequirePermission action="mail.read">
+            <MailOutboxPage />
+          </RequirePermission>
+        ),
+      },
       { path: '*', element: <NotFoundRoute /> },
     ],
   },

@@ -21,6 +21,7 @@ export function AppShell({ nav = [], accountMenu }: { nav?: NavItem[]; accountMe
               <NavLink
                 key={item.to}
                 to={item.to}
+                end={item.to === '/'}
                 className={({ isActive }) =>
                   `rounded px-3 py-1.5 text-sm font-medium ${isActive ? 'bg-ink-700 text-white' : 'text-ink-100 hover:bg-ink-800'}`
                 }

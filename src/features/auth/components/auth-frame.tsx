@@ -1,0 +1,45 @@
+import type { ReactNode } from 'react';
+import { Logo } from '@/components/logo';
+import { TideIllustration } from './tide-illustration';
+
+/** The frame of the pages seen before signing in: the brand on ink navy, the form on light. */
+export function AuthFrame({ title, intro, children }: { title: string; intro?: ReactNode; children: ReactNode }) {
+  return (
+    <div className="grid min-h-full lg:grid-cols-[minmax(0,5fr)_minmax(0,4fr)]">
+      <aside className="relative hidden flex-col justify-between overflow-hidden bg-ink-950 px-12 py-10 text-ink-100 lg:flex">
+        <div className="flex items-center gap-3 text-2xl font-semibold tracking-wide text-white">
+          <Logo size={36} />
+          <span>Slackwater</span>
+        </div>
+        <div className="space-y-6">
+          <TideIllustration />
+          <p className="max-w-md text-2xl leading-snug font-medium text-white">
+            Dispatch plans that stay near the steady cycle, and a second signature before they leave.
+          </p>
+          <ul className="max-w-md space-y-1 text-sm text-ink-300">
+            <li>
+              <span className="mr-2 inline-block h-2 w-5 rounded-full bg-seaglass-500 align-middle" />
+              state of charge inside the band
+            </li>
+            <li>
+              <span className="mr-2 inline-block h-2 w-5 rounded-full bg-amber-500 align-middle" />
+              leaving arc at the end of the horizon
+            </li>
+          </ul>
+        </div>
+        <p className="text-xs text-ink-500">Decision support for storage dispatch. Qualified personnel decide dispatch.</p>
+      </aside>
+      <main className="flex flex-col justify-center bg-ink-50 px-6 py-10 sm:px-12">
+        <div className="mx-auto w-full max-w-sm">
+          <div className="mb-8 flex items-center gap-2 text-xl font-semibold text-ink-900 lg:hidden">
+            <Logo />
+            <span>Slackwater</span>
+          </div>
+          <h1 className="text-3xl font-semibold text-ink-900">{title}</h1>
+          {intro && <div className="mt-2 text-ink-700">{intro}</div>}
+          <div className="mt-8">{children}</div>
+        </div>
+      </main>
+    </div>
+  );
+}

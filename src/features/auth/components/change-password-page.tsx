@@ -1,0 +1,75 @@
+import { useState, type FormEvent } from 'react';
+import { FormField, buttonClass, describedBy, inputClass } from '@/components/form-field';
+import { useChangePassword } from '../api/change-password';
+import { fieldError, formError } from './field-errors';
+import { NewPasswordFields, newPasswordErrors, type NewPassword } from './new-password-fields';
+
+/** Change one's own password; every other session of the account ends. */
+export function ChangePasswordPage() {
+  const change = useChangePassword();
+  const [current, setCurrent] = useState('');
+  const [value, setValue] = useState<NewPassword>({ password: '', confirm: '' });
+  const [tried, setTried] = useState(false);
+  const local = tried ? newPasswordErrors(value) : {};
+
+  const submit = (event: FormEvent) => {
+    event.preventDefault();
+    setTried(true);
+    if (Object.keys(newPasswordErrors(value)).length > 0) return;
+    change.mutate(
+      { currentPassword: current, newPassword: value.password },
+      {
+        onSuccess: () => {
+          setCurrent('');
+          setValue({ password: '', confirm: '' });
+          setTried(false);
+        },
+      },
+    );
+  };
+  const currentError = fieldError(change.error, 'currentPassword');
+  const message = formError(change.error, ['currentPassword', 'newPassword']);
+
+  return (
+    <section className="max-w-md space-y-6">
+      <div>
+        <h1 className="text-2xl font-semibold text-ink-900">Change your password</h1>
+        <p className="mt-1 text-ink-700">Other browsers signed in to your account are signed out.</p>
+      </div>
+      {change.isSuccess && (
+        <p role="status" className="rounded border border-seaglass-500 bg-seaglass-100 px-3 py-2 text-ink-900">
+          Your password is changed. Other sessions were ended.
+        </p>
+      )}
+      <form onSubmit={submit} noValidate className="space-y-5 rounded-lg border border-ink-100 bg-white p-6 shadow-sm">
+        <FormField id="current-password" label="Current password" error={currentError}>
+          <input
+            id="current-password"
+            type="password"
+            autoComplete="current-password"
+            required
+            value={current}
+            onChange={(e) => setCurrent(e.target.value)}
+            className={inputClass}
+            aria-invalid={!!currentError}
+            aria-describedby={describedBy('current-password', { error: currentError })}
+          />
+        </FormField>
+        <NewPasswordFields
+          idPrefix="change"
+          value={value}
+          onChange={setValue}
+          errors={{ password: local.password ?? fieldError(change.error, 'newPassword'), confirm: local.confirm }}
+        />
+        {message && (
+          <p role="alert" className="rounded border border-brick-600 bg-brick-100 px-3 py-2 text-sm text-brick-700">
+            {message}
+          </p>
+        )}
+        <button type="submit" disabled={change.isPending} className={buttonClass.primary}>
+          {change.isPending ? 'Saving…' : 'Change password'}
+        </button>
+      </form>
+    </section>
+  );
+}

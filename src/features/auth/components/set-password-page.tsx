@@ -1,0 +1,92 @@
+import { useState, type FormEvent } from 'react';
+import { Link, useNavigate } from 'react-router-dom';
+import { buttonClass } from '@/components/form-field';
+import { usePasswordLink, useRedeemPasswordLink } from '../api/password-links';
+import { AuthFrame } from './auth-frame';
+import { fieldError, formError } from './field-errors';
+import { NewPasswordFields, newPasswordErrors, type NewPassword } from './new-password-fields';
+
+/**
+ * The token arrives in the URL fragment (`#token=…`): it is read once and the address bar
+ * is cleaned, so it neither reaches the server in a page request nor stays on screen.
+ */
+function takeToken(): string | null {
+  const token = new URLSearchParams(window.location.hash.slice(1)).get('token');
+  if (token) window.history.replaceState(window.history.state, '', window.location.pathname);
+  return token;
+}
+
+export function SetPasswordPage() {
+  const [token] = useState(takeToken);
+  const link = usePasswordLink(token);
+  const redeem = useRedeemPasswordLink();
+  const navigate = useNavigate();
+  const [value, setValue] = useState<NewPassword>({ password: '', confirm: '' });
+  const [tried, setTried] = useState(false);
+
+  const local = tried ? newPasswordErrors(value) : {};
+  const submit = (event: FormEvent) => {
+    event.preventDefault();
+    setTried(true);
+    if (!token || Object.keys(newPasswordErrors(value)).length > 0) return;
+    redeem.mutate(
+      { token, password: value.password },
+      { onSuccess: () => void navigate('/sign-in', { replace: true, state: { notice: 'Your password is set. Sign in with it now.' } }) },
+    );
+  };
+
+  if (!token || link.isError) {
+    const reason = link.error instanceof Error ? link.error.message : 'This page needs the link from your e-mail.';
+    return (
+      <AuthFrame title="This link does not work">
+        <p role="alert" className="rounded border border-brick-600 bg-brick-100 px-3 py-3 text-ink-900">
+          {reason}
+        </p>
+        <p className="mt-6 text-sm text-ink-700">
+          <Link to="/forgot-password" className="font-medium text-seaglass-700 underline underline-offset-2">
+            Ask for a new link
+          </Link>{' '}
+          or, if you were invited, ask your administrator to send the invitation again.
+        </p>
+      </AuthFrame>
+    );
+  }
+  if (!link.data) {
+    return (
+      <AuthFrame title="Checking your link…">
+        <p role="status">One moment.</p>
+      </AuthFrame>
+    );
+  }
+  const invite = link.data.purpose === 'invite';
+  const message = formError(redeem.error, ['password']);
+  return (
+    <AuthFrame
+      title={invite ? 'Welcome to Slackwater' : 'Choose a new password'}
+      intro={
+        <>
+          {invite ? 'Choose the password for ' : 'For '}
+          <strong className="font-semibold text-ink-900">{link.data.email}</strong>. The link expires{' '}
+          {new Date(link.data.expiresAt).toLocaleString()}.
+        </>
+      }
+    >
+      <form onSubmit={submit} noValidate className="space-y-5">
+        <NewPasswordFields
+          idPrefix="set"
+          value={value}
+          onChange={setValue}
+          errors={{ password: local.password ?? fieldError(redeem.error, 'password'), confirm: local.confirm }}
+        />
+        {message && (
+          <p role="alert" className="rounded border border-brick-600 bg-brick-100 px-3 py-2 text-sm text-brick-700">
+            {message}
+          </p>
+        )}
+        <button type="submit" disabled={redeem.isPending} className={`${buttonClass.primary} w-full py-2.5 text-base`}>
+          {redeem.isPending ? 'Saving…' : invite ? 'Set my password' : 'Save the new password'}
+        </button>
+      </form>
+    </AuthFrame>
+  );
+}
