@@ -14,6 +14,7 @@ import { loadJobsConfig, type JobsConfig } from './jobs-config';
 import { runClaimedJob } from './run-job';
 import { startStaleJobReaper } from './stale-job-reaper';
 import { failDeadJob } from './dead-letter';
+import { closeThreads, prewarmThreads } from './run-in-thread';
 import type { JobData } from './job-types';
 
 export interface JobWorker {
@@ -50,6 +51,8 @@ export async function startJobWorker(databaseUrl: string, config: JobsConfig = l
     }),
   );
   const reaper = startStaleJobReaper(boss, config);
+  // One thread per job slot, started now so the first job does not wait for the engine to load.
+  prewarmThreads(config.WORKER_CONCURRENCY * jobHandlers.length);
   logger.info(`Job worker ${workerName} started (${config.WORKER_CONCURRENCY} per queue).`);
 
   return {
@@ -57,6 +60,7 @@ export async function startJobWorker(databaseUrl: string, config: JobsConfig = l
       reaper.stop();
       for (const id of workIds) await boss.offWork({ id });
       for (const abort of running) abort.abort();
+      await closeThreads();
       logger.info(`Job worker ${workerName} stopped.`);
     },
   };

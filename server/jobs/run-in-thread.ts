@@ -1,7 +1,9 @@
 /**
- * Runs one CPU-heavy task in a worker thread, so the process's event loop (the
+ * Runs CPU-heavy tasks in worker threads, so the process's event loop (the
  * HTTP server, heartbeats, progress writes) stays responsive while it solves.
- * One thread per task: terminating it is a clean cancel and frees its memory.
+ * Threads are kept between tasks: starting one costs seconds under tsx (it
+ * loads the engine and its WebAssembly solvers), a task often much less. A
+ * cancelled or failed task's thread is terminated, never reused.
  *
  * Under tsx on Node 20 a worker thread cannot load TypeScript by itself
  * (ERR_UNKNOWN_FILE_EXTENSION), so the thread starts from a small eval that
@@ -19,10 +21,28 @@ function tsxLoaderUrl(): string {
   return pathToFileURL(resolved.replace(/\.cjs$/, '.mjs')).href;
 }
 
-function startWorker(request: ThreadRequest): Worker {
-  if (!entryUrl.pathname.endsWith('.ts')) return new Worker(entryUrl, { workerData: request });
+function startWorker(): Worker {
+  if (!entryUrl.pathname.endsWith('.ts')) return new Worker(entryUrl);
   const bootstrap = `import(${JSON.stringify(tsxLoaderUrl())}).then((api) => { api.register(); return import(${JSON.stringify(entryUrl.href)}); });`;
-  return new Worker(bootstrap, { eval: true, workerData: request });
+  return new Worker(bootstrap, { eval: true });
+}
+
+const idle: Worker[] = [];
+let maxIdle = 1;
+
+/** Starts `count` threads ahead of the first task (a worker process calls this at start). */
+export function prewarmThreads(count: number): void {
+  maxIdle = Math.max(maxIdle, count);
+  while (idle.length < count) {
+    const worker = startWorker();
+    worker.unref();
+    idle.push(worker);
+  }
+}
+
+/** Ends every idle thread (shutdown). Busy ones end with their task. */
+export async function closeThreads(): Promise<void> {
+  await Promise.all(idle.splice(0).map((w) => w.terminate()));
 }
 
 export interface ThreadOptions {
@@ -40,26 +60,36 @@ export function runInThread<O>(request: ThreadRequest, options: ThreadOptions = 
       reject(new ThreadTaskError('The task was cancelled before it started.'));
       return;
     }
-    const worker = startWorker(request);
+    const worker = idle.pop() ?? startWorker();
+    worker.ref();
     let settled = false;
-    const settle = (fn: () => void) => {
+    const settle = (reuse: boolean, fn: () => void) => {
       if (settled) return;
       settled = true;
       options.signal?.removeEventListener('abort', onAbort);
+      worker.off('message', onMessage);
+      worker.off('error', onError);
+      worker.off('exit', onExit);
+      if (reuse && idle.length < maxIdle) {
+        worker.unref();
+        idle.push(worker);
+      } else {
+        void worker.terminate();
+      }
       fn();
-      void worker.terminate();
     };
-    const onAbort = () => settle(() => reject(new ThreadTaskError('The task was cancelled.')));
-    options.signal?.addEventListener('abort', onAbort);
-
-    worker.on('message', (message: ThreadMessage) => {
+    const onAbort = () => settle(false, () => reject(new ThreadTaskError('The task was cancelled.')));
+    const onMessage = (message: ThreadMessage) => {
       if (message.type === 'progress') options.onProgress?.(message.shareDone, message.message);
-      else if (message.type === 'done') settle(() => resolve(message.output as O));
-      else settle(() => reject(new ThreadTaskError(message.message)));
-    });
-    worker.on('error', (error) => settle(() => reject(new ThreadTaskError(`The computation stopped: ${error.message}`))));
-    worker.on('exit', (code) =>
-      settle(() => reject(new ThreadTaskError(`The computation thread ended without a result (exit code ${code}).`))),
-    );
+      else if (message.type === 'done') settle(true, () => resolve(message.output as O));
+      else settle(false, () => reject(new ThreadTaskError(message.message)));
+    };
+    const onError = (error: Error) => settle(false, () => reject(new ThreadTaskError(`The computation stopped: ${error.message}`)));
+    const onExit = (code: number) => settle(false, () => reject(new ThreadTaskError(`The computation thread ended without a result (exit code ${code}).`)));
+    options.signal?.addEventListener('abort', onAbort);
+    worker.on('message', onMessage);
+    worker.on('error', onError);
+    worker.on('exit', onExit);
+    worker.postMessage(request);
   });
 }

@@ -1,8 +1,9 @@
 /**
- * Entry of a worker thread: runs one plan or study computation (pure engine
- * work, no database) and posts progress and the result to the job that started it.
+ * Entry of a worker thread: runs plan and study computations (pure engine
+ * work, no database) one at a time as the job sends them, posting progress
+ * and the result back.
  */
-import { parentPort, workerData } from 'node:worker_threads';
+import { parentPort } from 'node:worker_threads';
 import { computePlan, type PlanComputeInput } from '../plans/plan-compute';
 import { computeStudy, type StudyComputeInput } from '../studies/study-compute';
 import type { ThreadMessage, ThreadRequest } from './thread-protocol';
@@ -15,7 +16,9 @@ async function run(request: ThreadRequest): Promise<unknown> {
   return computeStudy(request.input as StudyComputeInput, report);
 }
 
-run(workerData as ThreadRequest).then(
-  (output) => post({ type: 'done', output }),
-  (error: unknown) => post({ type: 'failed', message: error instanceof Error ? error.message : String(error) }),
-);
+parentPort?.on('message', (request: ThreadRequest) => {
+  run(request).then(
+    (output) => post({ type: 'done', output }),
+    (error: unknown) => post({ type: 'failed', message: error instanceof Error ? error.message : String(error) }),
+  );
+});
