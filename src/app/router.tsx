@@ -63,6 +63,13 @@ const router = createBrowserRouter([
           </RequirePermission>
         ),
       },
+      // Sites, batteries and profiles: loaded on first visit, so charts and tables stay out of the first bundle.
+      { path: 'sites', lazy: () => import('./routes/sites').then((m) => ({ Component: m.SitesRoute })) },
+      { path: 'sites/:id', lazy: () => import('./routes/site').then((m) => ({ Component: m.SiteRoute })) },
+      { path: 'batteries/:id', lazy: () => import('./routes/battery').then((m) => ({ Component: m.BatteryRoute })) },
+      { path: 'profiles', lazy: () => import('./routes/profiles').then((m) => ({ Component: m.ProfilesRoute })) },
+      { path: 'profiles/:id', lazy: () => import('./routes/profile').then((m) => ({ Component: m.ProfileRoute })) },
+      { path: 'sign-off', lazy: () => import('./routes/sign-off').then((m) => ({ Component: m.SignOffRoute })) },
       { path: '*', element: <NotFoundRoute /> },
     ],
   },

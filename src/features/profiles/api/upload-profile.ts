@@ -1,0 +1,38 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { ProfileSummary } from '@shared/schemas/profile';
+import type { ProfileKind } from '@shared/profile-csv';
+import { api } from '@/lib/api-client';
+
+export interface UploadProfileInput {
+  siteId: string;
+  file: File;
+  kind: ProfileKind;
+  unit: string;
+  name?: string;
+  intervalEnding: boolean;
+  fillGaps: boolean;
+}
+
+/** multipart/form-data with the field names of DESIGN section 6; a 422 carries `{issues:[{line,message}], hint}`. */
+export function uploadProfile(input: UploadProfileInput) {
+  const form = new FormData();
+  form.append('kind', input.kind);
+  form.append('unit', input.unit);
+  if (input.name) form.append('name', input.name);
+  form.append('intervalEnding', String(input.intervalEnding));
+  form.append('fillGaps', String(input.fillGaps));
+  form.append('file', input.file, input.file.name);
+  return api.post<ProfileSummary>(`/api/sites/${encodeURIComponent(input.siteId)}/profiles`, form);
+}
+
+export function useUploadProfile() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: uploadProfile,
+    onSuccess: (profile) =>
+      Promise.all([
+        queryClient.invalidateQueries({ queryKey: ['profiles', 'list', profile.siteId] }),
+        queryClient.invalidateQueries({ queryKey: ['sites'] }),
+      ]),
+  });
+}
