@@ -1,0 +1,10 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import type { SignOffRecord } from '@shared/schemas/sign-off';
+import { api } from '@/lib/api-client';
+
+export const getSignOff = (planId: string) => api.get<SignOffRecord>(`/api/plans/${encodeURIComponent(planId)}/sign-off`);
+
+export const getSignOffQueryOptions = (planId: string) =>
+  queryOptions({ queryKey: ['plans', 'sign-off', planId], queryFn: () => getSignOff(planId) });
+
+export const useSignOff = (planId: string) => useQuery(getSignOffQueryOptions(planId));
