@@ -116,6 +116,8 @@ export function planCommand(inputs: AlignedInputs, args: ParsedArgs) {
     lookahead: { hours: plan.lookaheadHours, ...summarizePath(inputs, plan.solution, plan.from, delivery) },
     terminal: plan.terminalRule,
     turnpike: { ...figures, value: valueFigures },
+    decisionHorizonHours: plan.dpInsights?.decisionHorizonHours ?? null,
+    valueCurves: plan.dpInsights?.valueCurves ?? [],
     warnings: plan.warnings,
     caution: CAUTION,
   };

@@ -2,6 +2,7 @@ import type { DispatchProblem } from '../types';
 import { backwardStep } from './backward-step';
 import { writeTerminal } from './context';
 import { solveDispatchDp } from './solve';
+import type { DpValueFunctions } from './value-functions';
 import { shapesEqual, ValueStore } from './value-store';
 
 export type DecisionHorizon =
@@ -27,15 +28,19 @@ export type DecisionHorizon =
  * full problem's V_t bit for bit (then all earlier V agree); the answer is one
  * more than the largest D′ that fails to agree by step `steps`. Exact, not
  * estimated: decisions with any lookahead ≥ depthSteps are identical.
+ * `solved`: value functions of this very problem, when already at hand.
  */
-export function decisionHorizon(problem: DispatchProblem, steps: number): DecisionHorizon {
+export function decisionHorizon(problem: DispatchProblem, steps: number, solved?: DpValueFunctions): DecisionHorizon {
   const n = problem.priceImport.length;
   if (!(Number.isInteger(steps) && steps >= 1 && steps <= n)) {
     return { ok: false, error: `steps must be a whole number from 1 to ${n}, got ${steps}` };
   }
-  const full = solveDispatchDp(problem, { keepValueFunctions: true });
-  const vf = full.valueFunctions;
-  if (!vf) return { ok: false, error: full.message ?? `the problem has no solution (${full.status})` };
+  let vf = solved;
+  if (!vf) {
+    const full = solveDispatchDp(problem, { keepValueFunctions: true });
+    if (!full.valueFunctions) return { ok: false, error: full.message ?? `the problem has no solution (${full.status})` };
+    vf = full.valueFunctions;
+  }
   const ctx = vf.ctx;
   const ref = vf.store;
   const scratch = new ValueStore(2);

@@ -14,3 +14,4 @@ export {
 export type { DpWorkStats } from './window-solver';
 export { valueCurves, type ValueCurve, type ValueCurveSource } from './value-curves';
 export { decisionHorizon, type DecisionHorizon } from './decision-horizon';
+export { planInsights, type DpPlanInsights } from './plan-insights';

@@ -16,6 +16,7 @@ import { terminalRuleFor, type TerminalChoice } from '../terminal/terminal-choic
 import { DEFAULT_BAND_FRACTION } from '../turnpike/turnpike-figures';
 import { planFlags, settingWarnings } from './plan-flags';
 import { planTurnpike, type PlanTurnpike } from './plan-turnpike';
+import { planInsights, type DpPlanInsights } from '../dp';
 
 export interface PlanRequest {
   readonly startMs: number;
@@ -42,6 +43,8 @@ export interface Plan {
   readonly steady: SteadyCycle;
   readonly turnpike: PlanTurnpike;
   readonly warnings: readonly string[];
+  /** Decision horizon and value curves (delivery start and each whole local hour) when the exact DP solved the plan, else null. */
+  readonly dpInsights: DpPlanInsights | null;
 }
 
 export type PlanResult = { ok: true; plan: Plan } | { ok: false; issue: InputIssue };
@@ -82,6 +85,8 @@ export function solvePlan(inputs: AlignedInputs, request: PlanRequest): PlanResu
   };
   const main = solveTo(windowEnd);
   if (main.solution.status !== 'optimal') return fail('plan', main.solution.message ?? `the plan could not be solved (${main.solution.status})`);
+  const curveSteps = Array.from({ length: end.index - from }, (_, i) => i).filter((i) => i === 0 || inputs.clock.minuteOfDay[from + i]! % 60 === 0);
+  const dpInsights = main.solution.method === 'dp' ? planInsights(problemFor(inputs, from, windowEnd, e0, main.rule), end.index - from, curveSteps) : null;
   const longerHours = Math.max(4 * request.horizonHours, request.horizonHours + 168);
   const longerEnd = Math.min(n, from + Math.floor((longerHours * 60) / inputs.stepMinutes));
   const longer = longerEnd > windowEnd ? solveTo(longerEnd).solution : null;
@@ -112,6 +117,7 @@ export function solvePlan(inputs: AlignedInputs, request: PlanRequest): PlanResu
       steady,
       turnpike: tp,
       warnings: settingWarnings(inputs.battery),
+      dpInsights,
     },
   };
 }
