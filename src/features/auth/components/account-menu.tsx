@@ -61,7 +61,7 @@ export function AccountMenu({ user }: { user: AuthUser }) {
         <span className="sr-only">Account menu</span>
       </button>
       {open && (
-        <div id={panelId} className="absolute right-0 z-20 mt-2 w-64 rounded-lg border border-ink-100 bg-white py-2 text-ink-900 shadow-lg">
+        <div id={panelId} className="absolute right-0 z-20 mt-2 w-72 rounded-lg border border-ink-100 bg-white py-2 text-ink-900 shadow-lg">
           <p className="border-b border-ink-100 px-4 pb-2 text-sm">
             Signed in as <span className="font-medium break-all">{user.email}</span>
             <span className="mt-0.5 block text-xs text-ink-500">Role: {roleLabels[user.role]}</span>

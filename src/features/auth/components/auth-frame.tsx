@@ -2,6 +2,10 @@ import type { ReactNode } from 'react';
 import { Logo } from '@/components/logo';
 import { TideIllustration } from './tide-illustration';
 
+/** The full-width submit button of the pages seen before signing in. */
+export const wideButton =
+  'w-full rounded bg-seaglass-700 px-4 py-2.5 text-base font-semibold text-white hover:bg-seaglass-600 disabled:cursor-not-allowed disabled:opacity-50';
+
 /** The frame of the pages seen before signing in: the brand on ink navy, the form on light. */
 export function AuthFrame({ title, intro, children }: { title: string; intro?: ReactNode; children: ReactNode }) {
   return (
@@ -27,7 +31,7 @@ export function AuthFrame({ title, intro, children }: { title: string; intro?: R
             </li>
           </ul>
         </div>
-        <p className="text-xs text-ink-500">Decision support for storage dispatch. Qualified personnel decide dispatch.</p>
+        <p className="text-sm text-ink-300">Decision support for storage dispatch. Qualified personnel decide dispatch.</p>
       </aside>
       <main className="flex flex-col justify-center bg-ink-50 px-6 py-10 sm:px-12">
         <div className="mx-auto w-full max-w-sm">

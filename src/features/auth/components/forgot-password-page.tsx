@@ -1,8 +1,8 @@
 import { useState, type FormEvent } from 'react';
 import { Link } from 'react-router-dom';
-import { FormField, buttonClass, describedBy, inputClass } from '@/components/form-field';
+import { FormField, describedBy, inputClass } from '@/components/form-field';
 import { useRequestPasswordReset } from '../api/request-password-reset';
-import { AuthFrame } from './auth-frame';
+import { AuthFrame, wideButton } from './auth-frame';
 import { fieldError, formError } from './field-errors';
 
 export function ForgotPasswordPage() {
@@ -41,7 +41,7 @@ export function ForgotPasswordPage() {
               {message}
             </p>
           )}
-          <button type="submit" disabled={request.isPending} className={`${buttonClass.primary} w-full py-2.5 text-base`}>
+          <button type="submit" disabled={request.isPending} className={wideButton}>
             {request.isPending ? 'Sending…' : 'Send the link'}
           </button>
         </form>

@@ -1,8 +1,7 @@
 import { useState, type FormEvent } from 'react';
 import { Link, useNavigate } from 'react-router-dom';
-import { buttonClass } from '@/components/form-field';
 import { usePasswordLink, useRedeemPasswordLink } from '../api/password-links';
-import { AuthFrame } from './auth-frame';
+import { AuthFrame, wideButton } from './auth-frame';
 import { fieldError, formError } from './field-errors';
 import { NewPasswordFields, newPasswordErrors, type NewPassword } from './new-password-fields';
 
@@ -83,7 +82,7 @@ export function SetPasswordPage() {
             {message}
           </p>
         )}
-        <button type="submit" disabled={redeem.isPending} className={`${buttonClass.primary} w-full py-2.5 text-base`}>
+        <button type="submit" disabled={redeem.isPending} className={wideButton}>
           {redeem.isPending ? 'Saving…' : invite ? 'Set my password' : 'Save the new password'}
         </button>
       </form>

@@ -1,9 +1,9 @@
 import { useState, type FormEvent } from 'react';
 import { Link, Navigate, useLocation, useNavigate, useSearchParams } from 'react-router-dom';
-import { FormField, buttonClass, describedBy, inputClass } from '@/components/form-field';
+import { FormField, describedBy, inputClass } from '@/components/form-field';
 import { useMe } from '../api/get-me';
 import { useSignIn } from '../api/sign-in';
-import { AuthFrame } from './auth-frame';
+import { AuthFrame, wideButton } from './auth-frame';
 import { fieldError, formError, safeNextPath } from './field-errors';
 
 export function SignInPage() {
@@ -66,7 +66,7 @@ export function SignInPage() {
             {message}
           </p>
         )}
-        <button type="submit" disabled={signIn.isPending} className={`${buttonClass.primary} w-full py-2.5 text-base`}>
+        <button type="submit" disabled={signIn.isPending} className={wideButton}>
           {signIn.isPending ? 'Signing in…' : 'Sign in'}
         </button>
       </form>

@@ -4,10 +4,16 @@ import { buttonClass } from '@/components/form-field';
 import { useUpdateUser } from '../api/update-user';
 import { useResendInvitation } from '../api/resend-invitation';
 
+/** The server refuses this too; the page says why before anyone tries. */
+const lastAdminHint = 'The last active admin cannot be demoted or disabled: make another user admin first.';
+
+/** An admin account that is not disabled; the server counts these for the last-admin rule. */
+export const isActiveAdmin = (u: User) => u.role === 'admin' && u.status !== 'disabled';
+
 /** Errors from row actions (e.g. "last active admin") go to one live region above the table. */
 export type ReportOutcome = (message: string, tone: 'ok' | 'error') => void;
 
-export function RoleSelect({ user, report }: { user: User; report: ReportOutcome }) {
+export function RoleSelect({ user, report, lastAdmin }: { user: User; report: ReportOutcome; lastAdmin: boolean }) {
   const update = useUpdateUser();
   const change = (role: Role) =>
     update.mutate(
@@ -21,7 +27,8 @@ export function RoleSelect({ user, report }: { user: User; report: ReportOutcome
     <select
       aria-label={`Role of ${user.email}`}
       value={user.role}
-      disabled={update.isPending}
+      disabled={update.isPending || lastAdmin}
+      title={lastAdmin ? lastAdminHint : undefined}
       onChange={(e) => change(e.target.value as Role)}
       className="rounded border border-ink-300 bg-white px-2 py-1 text-sm"
     >
@@ -34,7 +41,7 @@ export function RoleSelect({ user, report }: { user: User; report: ReportOutcome
   );
 }
 
-export function UserActions({ user, report }: { user: User; report: ReportOutcome }) {
+export function UserActions({ user, report, lastAdmin }: { user: User; report: ReportOutcome; lastAdmin: boolean }) {
   const update = useUpdateUser();
   const resend = useResendInvitation();
   const disabled = user.status === 'disabled';
@@ -61,7 +68,8 @@ export function UserActions({ user, report }: { user: User; report: ReportOutcom
       <button
         type="button"
         onClick={toggle}
-        disabled={update.isPending}
+        disabled={update.isPending || lastAdmin}
+        title={lastAdmin ? lastAdminHint : undefined}
         className={disabled ? buttonClass.secondary.replace('px-4 py-2', 'px-3 py-1') : buttonClass.danger.replace('px-3 py-1.5', 'px-3 py-1')}
       >
         {disabled ? 'Enable' : 'Disable'}

@@ -16,7 +16,7 @@ import {
 import { roleLabels, roles } from '@shared/schemas/auth';
 import { userStatuses, type User } from '@shared/schemas/users';
 import { inputClass } from '@/components/form-field';
-import { RoleSelect, UserActions, type ReportOutcome } from './user-row-actions';
+import { RoleSelect, UserActions, isActiveAdmin, type ReportOutcome } from './user-row-actions';
 
 const features = tableFeatures({
   columnFilteringFeature,
@@ -38,6 +38,8 @@ const statusStyle: Record<User['status'], string> = {
 
 const formatTime = (iso: string | null) => (iso ? new Date(iso).toLocaleString() : 'never');
 
+const isLastAdmin = (user: User, all: readonly User[]) => isActiveAdmin(user) && all.filter(isActiveAdmin).length === 1;
+
 /** Columns need the live-region reporter, so they are built once per table instance. */
 function buildColumns(report: ReportOutcome) {
   return helper.columns([
@@ -47,7 +49,7 @@ function buildColumns(report: ReportOutcome) {
       header: 'Role',
       filterFn: 'equalsString',
       sortFn: 'alphanumeric',
-      cell: (ctx) => <RoleSelect user={ctx.row.original} report={report} />,
+      cell: (ctx) => <RoleSelect user={ctx.row.original} report={report} lastAdmin={isLastAdmin(ctx.row.original, ctx.table.options.data)} />,
     }),
     helper.accessor('status', {
       header: 'Status',
@@ -55,7 +57,11 @@ function buildColumns(report: ReportOutcome) {
       cell: (ctx) => <span className={`rounded-full px-2 py-0.5 text-xs font-semibold ${statusStyle[ctx.getValue()]}`}>{ctx.getValue()}</span>,
     }),
     helper.accessor('lastSignInAt', { header: 'Last sign-in', sortFn: 'datetime', sortUndefined: 'last', cell: (ctx) => formatTime(ctx.getValue()) }),
-    helper.display({ id: 'actions', header: 'Actions', cell: (ctx) => <UserActions user={ctx.row.original} report={report} /> }),
+    helper.display({
+      id: 'actions',
+      header: 'Actions',
+      cell: (ctx) => <UserActions user={ctx.row.original} report={report} lastAdmin={isLastAdmin(ctx.row.original, ctx.table.options.data)} />,
+    }),
   ]);
 }
 
