@@ -79,7 +79,7 @@ async function main(): Promise<void> {
   const file = process.argv[2] ?? defaultFile(url);
   const bytes = backupDatabase(url, file);
   log(`Backup of "${databaseName(url)}" written to ${file} (${(bytes / 1024).toFixed(0)} KiB, pg_dump custom format).`);
-  log(`Restore it into an empty database with: npm run db:restore ${file} -- --into <new database name>`);
+  log(`Restore it into an empty database with: npm run db:restore -- ${file} --into <new database name>`);
 }
 
 if (process.argv[1] && import.meta.url === pathToFileURL(process.argv[1]).href) {
