@@ -145,14 +145,16 @@ function runClosedLoopOnDp(
   inputs: AlignedInputs, req: ClosedLoopRequest, whole: DispatchProblem, usable: number, band: number, elapsed: () => number,
 ): ClosedLoopRun {
   let shareSum = 0, leavingSum = 0, leavingIntoCommitted = 0;
+  // Views into one copy instead of a slice per window (thousands of windows per run).
+  const reference = req.referenceSoc ? Float64Array.from(req.referenceSoc) : null;
   const run = createDpClosedLoop(whole).run({
     horizonSteps: req.horizonSteps,
     replanSteps: req.replanSteps,
     terminalForWindow: (_start, end) => terminalRuleFor(req.terminal, inputs, req.from + end, req.steady),
-    ...(req.referenceSoc
+    ...(reference
       ? {
           onPlan: (plan: DpWindowPlan) => {
-            const fig = arcFigures(plan.socKwh.subarray(1), req.referenceSoc!.slice(plan.startStep, plan.endStep), usable, band);
+            const fig = arcFigures(plan.socKwh.subarray(1), reference.subarray(plan.startStep, plan.endStep), usable, band);
             shareSum += fig.nearSteadyShare;
             leavingSum += fig.leavingArcSteps;
             const steps = plan.endStep - plan.startStep;

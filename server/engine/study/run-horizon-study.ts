@@ -6,7 +6,8 @@
  */
 import type { AlignedInputs } from '../inputs/align-inputs';
 import type { InputIssue } from '../model/validate-battery';
-import { socPctToKwh, stepIndexOf, usableEnergyKwh } from '../inputs/problem-for';
+import { problemFor, socPctToKwh, stepIndexOf, usableEnergyKwh } from '../inputs/problem-for';
+import { checkDp } from '../dispatch/dp-bridge';
 import { solveReferencePath, steadyFor } from '../reference/solve-reference-path';
 import { terminalLabel, type TerminalChoice } from '../terminal/terminal-choice';
 import { DEFAULT_BAND_FRACTION } from '../turnpike/turnpike-figures';
@@ -100,7 +101,9 @@ export async function runHorizonStudy(inputs: AlignedInputs, request: StudyReque
     method: request.method ?? 'auto',
     ...(steady.steady ? { steady: steady.steady } : {}),
   };
-  const workers = request.workers ?? defaultWorkerCount();
+  // On the exact DP a run takes milliseconds, less than starting a worker thread.
+  const onDp = context.method !== 'lp' && checkDp(problemFor(inputs, start.index, end.index, context.initialEnergyKwh, { kind: 'free' })).ok;
+  const workers = request.workers ?? (onDp ? 1 : defaultWorkerCount());
   const results =
     workers > 1 && jobs.length > 1
       ? await runJobsOnWorkers(context, jobs, workers, (_, done) => request.onProgress?.(done, jobs.length))
