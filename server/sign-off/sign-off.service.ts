@@ -6,7 +6,7 @@
  */
 import type { SignOffAction } from '@shared/schemas/sign-off';
 import { getDb, type DbOrTx } from '../db/client';
-import { AppError, conflict, forbidden, notFound, unprocessable } from '../http/app-error';
+import { AppError, conflict, notFound } from '../http/app-error';
 import { recordAudit } from '../audit/audit.service';
 import type { PlanRow } from '../plans/plans.schema';
 import { planChecksum } from './plan-checksum';
@@ -23,41 +23,7 @@ import {
 } from './sign-off.repo';
 import { notifyDecision, notifySubmitted } from './sign-off-notify';
 import type { Actor } from './actor';
-
-type Step = 'submitted' | 'approved' | 'rejected';
-
-const VERB: Record<Step, string> = { submitted: 'submit', approved: 'approve', rejected: 'reject' };
-const NEEDS: Record<Step, PlanRow['status']> = { submitted: 'draft', approved: 'submitted', rejected: 'submitted' };
-
-/** The clearest reason an action cannot go ahead on `plan` as it is now, or null. */
-export function refusal(plan: PlanRow, step: Step, version: number, userId: string): AppError | null {
-  if (step !== 'submitted' && plan.submittedBy === userId) {
-    // Segregation of duties (ASVS 4.0.3 4.3.3): the database CHECK says the same.
-    return forbidden(`You submitted this plan, so you cannot ${VERB[step]} it: another approver must sign it off.`);
-  }
-  if (plan.status !== NEEDS[step]) {
-    return new AppError(
-      'wrong_status',
-      `The plan is ${plan.status}; only a ${NEEDS[step]} plan can be ${step}. Reload the plan to see who acted on it.`,
-      409,
-    );
-  }
-  if (plan.version !== version) {
-    return new AppError(
-      'stale_version',
-      `The plan changed since you opened it (you sent version ${version}, it is now at version ${plan.version}). Reload it, check it again and retry.`,
-      409,
-    );
-  }
-  if (plan.results === null) {
-    return unprocessable(
-      plan.errorMessage
-        ? `The plan has no results to sign off: ${plan.errorMessage}`
-        : 'The plan has no results yet: wait for its job to finish.',
-    );
-  }
-  return null;
-}
+import { refusal, VERB, type Step } from './sign-off-rules';
 
 async function load(tx: DbOrTx, id: string) {
   const plan = await findPlan(tx, id);
@@ -98,6 +64,27 @@ function event(
 
 const auditActor = (actor: Actor) => ({ actorId: actor.user.id, actorEmail: actor.user.email, ip: actor.ip });
 
+/**
+ * Runs an action's transaction; a refusal on segregation of duties is a refused
+ * authorisation and goes to the audit trail (SECURITY.md "Logging and audit"),
+ * written after the rollback so it is kept.
+ */
+async function auditingRefusals<T>(actor: Actor, id: string, step: Step, run: () => Promise<T>): Promise<T> {
+  try {
+    return await run();
+  } catch (error) {
+    if (error instanceof AppError && error.status === 403) {
+      await recordAudit(getDb(), auditActor(actor), {
+        action: 'access.denied',
+        entityType: 'plan',
+        entityId: id,
+        details: { reason: `segregation of duties: the submitter may not ${VERB[step]} the plan` },
+      });
+    }
+    throw error;
+  }
+}
+
 export async function submitPlan(actor: Actor, id: string, body: SignOffAction): Promise<PlanRow> {
   const plan = await getDb().transaction(async (tx) => {
     const before = await load(tx, id);
@@ -130,7 +117,13 @@ export interface Approval {
  * whose windows overlap, all in one transaction.
  */
 export async function approvePlan(actor: Actor, id: string, body: SignOffAction): Promise<Approval> {
-  const outcome = await getDb().transaction(async (tx) => {
+  const outcome = await auditingRefusals(actor, id, 'approved', () => approveInTransaction(actor, id, body));
+  await notifyDecision(actor, outcome.plan, 'approved', body.comment);
+  return outcome;
+}
+
+function approveInTransaction(actor: Actor, id: string, body: SignOffAction): Promise<Approval> {
+  return getDb().transaction(async (tx) => {
     const before = await load(tx, id);
     const refused = refusal(before, 'approved', body.version, actor.user.id);
     if (refused) throw refused;
@@ -181,12 +174,16 @@ export async function approvePlan(actor: Actor, id: string, body: SignOffAction)
     }
     return { plan: row, supersededPlanIds: superseded.map((s) => s.id) };
   });
-  await notifyDecision(actor, outcome.plan, 'approved', body.comment);
-  return outcome;
 }
 
 export async function rejectPlan(actor: Actor, id: string, body: { comment: string; version: number }): Promise<PlanRow> {
-  const plan = await getDb().transaction(async (tx) => {
+  const plan = await auditingRefusals(actor, id, 'rejected', () => rejectInTransaction(actor, id, body));
+  await notifyDecision(actor, plan, 'rejected', body.comment);
+  return plan;
+}
+
+function rejectInTransaction(actor: Actor, id: string, body: { comment: string; version: number }): Promise<PlanRow> {
+  return getDb().transaction(async (tx) => {
     const before = await load(tx, id);
     const refused = refusal(before, 'rejected', body.version, actor.user.id);
     if (refused) throw refused;
@@ -201,8 +198,6 @@ export async function rejectPlan(actor: Actor, id: string, body: { comment: stri
     });
     return row;
   });
-  await notifyDecision(actor, plan, 'rejected', body.comment);
-  return plan;
 }
 
 /** A rejected plan becomes a new draft with the same parameters, snapshot and results. */

@@ -171,6 +171,12 @@ describe('segregation of duties', () => {
     expect((await admin.post(`/api/plans/${plan.id}/reject`).send({ version: 2, comment: 'no' })).status).toBe(403);
     const [row] = await sqlQuery<{ status: string }>('select status from plans where id = $1', [plan.id]);
     expect(row?.status).toBe('submitted');
+    // Refused authorisations are audited (SECURITY.md "Logging and audit").
+    expect(await auditActions(plan.id)).toEqual([
+      `plan.submitted:${admin.user.id}`,
+      `access.denied:${admin.user.id}`,
+      `access.denied:${admin.user.id}`,
+    ]);
   });
 
   it('is enforced by the database CHECK even for SQL that bypasses the service', async () => {
