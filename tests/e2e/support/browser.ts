@@ -37,7 +37,18 @@ export async function newLocalContext(browser: Browser, options: Parameters<Brow
   return { context, offsite };
 }
 
+/**
+ * The whole page as a user scrolling through it would see it. Chromium's `fullPage` capture
+ * leaves charts that straddle the fold blank (seen on the profile page), so the viewport is
+ * grown to the page's height for the shot and restored after.
+ */
 export async function screenshot(page: Page, name: string) {
   mkdirSync(screenshotDir, { recursive: true });
-  await page.screenshot({ path: path.join(screenshotDir, `${name}.png`), fullPage: true });
+  const viewport = page.viewportSize();
+  const height = await page.evaluate(() => document.documentElement.scrollHeight);
+  const grow = viewport !== null && height > viewport.height;
+  if (grow) await page.setViewportSize({ width: viewport.width, height });
+  await page.evaluate(() => document.fonts.ready.then(() => new Promise((done) => requestAnimationFrame(() => requestAnimationFrame(done)))));
+  await page.screenshot({ path: path.join(screenshotDir, `${name}.png`) });
+  if (grow) await page.setViewportSize(viewport);
 }

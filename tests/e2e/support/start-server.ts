@@ -36,6 +36,25 @@ async function waitForHealth(url: string, child: ChildProcess, output: () => str
   throw new Error(`The app did not become healthy in 60 s:\n${output()}`);
 }
 
+/**
+ * Migrates and seeds the database the way `npm start` does (both idempotent). `npm test`
+ * recreates it first; running the journeys alone still finds every migration applied.
+ */
+function prepareDatabase(databaseUrl: string): Promise<void> {
+  return new Promise((resolve, reject) => {
+    let output = '';
+    const prepare = spawn(path.join(root, 'node_modules', '.bin', 'tsx'), ['scripts/prepare-demo.ts'], {
+      cwd: root,
+      env: { ...process.env, DATABASE_URL: databaseUrl },
+      stdio: ['ignore', 'pipe', 'pipe'],
+    });
+    prepare.stdout?.on('data', (d) => (output += String(d)));
+    prepare.stderr?.on('data', (d) => (output += String(d)));
+    prepare.on('error', reject);
+    prepare.on('exit', (code) => (code === 0 ? resolve() : reject(new Error(`Preparing ${databaseUrl} failed:\n${output}`))));
+  });
+}
+
 let child: ChildProcess | undefined;
 
 export default async function setup(project: TestProject) {
@@ -43,6 +62,7 @@ export default async function setup(project: TestProject) {
   const baseUrl = `http://localhost:${port}`;
   const base = process.env.TEST_DATABASE_URL;
   const databaseUrl = base ? base.replace(/\/([^/?]+)(\?|$)/, '/$1_e2e$2') : clusterUrl('slackwater_e2e');
+  await prepareDatabase(databaseUrl);
   let log = '';
   child = spawn(path.join(root, 'node_modules', '.bin', 'tsx'), ['server/index.ts'], {
     cwd: root,
