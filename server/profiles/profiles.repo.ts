@@ -1,5 +1,6 @@
 import { and, desc, eq, sql } from 'drizzle-orm';
 import type { DbOrTx } from '../db/client';
+import { users } from '../users/users.schema';
 import { profiles } from './profiles.schema';
 
 export type ProfileValues = Omit<typeof profiles.$inferInsert, 'id' | 'uploadedAt'>;
@@ -25,6 +26,8 @@ const summaryColumns = {
   originalSha256: profiles.originalSha256,
   originalBytes: sql<number>`octet_length(${profiles.originalFile})`,
   uploadedBy: profiles.uploadedBy,
+  // The uploader's display name; null once the account is gone (user ids carry no foreign key).
+  uploadedByName: sql<string | null>`(select ${users.name} from ${users} where ${users.id} = ${profiles.uploadedBy})`,
   uploadedAt: profiles.uploadedAt,
 };
 

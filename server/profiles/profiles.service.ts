@@ -34,6 +34,7 @@ function toSummary(row: repo.ProfileSummaryRow): ProfileSummary {
     originalSha256: row.originalSha256,
     originalBytes: row.originalBytes,
     uploadedBy: row.uploadedBy,
+    uploadedByName: row.uploadedByName,
     uploadedAt: row.uploadedAt.toISOString(),
   };
 }

@@ -63,6 +63,8 @@ export interface ProfileSummary {
   originalSha256: string;
   originalBytes: number;
   uploadedBy: string;
+  /** Display name of the uploader, when the account still exists. */
+  uploadedByName: string | null;
   uploadedAt: string;
 }
 

@@ -54,6 +54,9 @@ export function describedBy(id: string, f: { error?: string | undefined; warning
 export const inputClass =
   'w-full rounded border border-ink-300 bg-white px-3 py-1.5 text-ink-900 shadow-sm focus:border-seaglass-600 aria-[invalid=true]:border-brick-600';
 
+/** A select sized to its options, for filters and page sizes beside other controls. */
+export const compactSelect = 'rounded border border-ink-300 bg-white px-2 py-1 text-ink-900 focus:border-seaglass-600';
+
 export const buttonClass = {
   primary:
     'rounded bg-seaglass-700 px-4 py-2 text-sm font-semibold text-white hover:bg-seaglass-600 disabled:cursor-not-allowed disabled:opacity-50',

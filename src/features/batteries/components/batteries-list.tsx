@@ -20,7 +20,7 @@ function BatteryRow({ battery }: { battery: Battery }) {
       <td className="px-3 py-2 tabular-nums">
         {fmt(battery.socMinPct)}–{fmt(battery.socMaxPct)} %
       </td>
-      <td className="px-3 py-2 tabular-nums">{fmt(battery.efficiencyCharge * battery.efficiencyDischarge * 100)} %</td>
+      <td className="px-3 py-2 tabular-nums">{(battery.efficiencyCharge * battery.efficiencyDischarge * 100).toFixed(1)} %</td>
       <td className="px-3 py-2">
         {battery.warnings.length > 0 ? (
           <span className="rounded bg-amber-100 px-2 py-0.5 text-sm text-ink-900" title={battery.warnings.map((w) => w.message).join('\n')}>

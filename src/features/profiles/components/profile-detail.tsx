@@ -43,7 +43,7 @@ export function ProfileDetail({ id, timezone, currency, canEdit, onDeleted }: Pr
     ['Labels', p.intervalEnding ? 'interval-ending (shifted to starts)' : 'interval-beginning'],
     ['Original file', `${p.originalFilename} (${(p.originalBytes / 1024).toFixed(1)} kB)`],
     ['SHA-256', p.originalSha256],
-    ['Uploaded', `${new Date(p.uploadedAt).toLocaleString()} by ${p.uploadedBy}`],
+    ['Uploaded', `${new Date(p.uploadedAt).toLocaleString()} by ${p.uploadedByName ?? p.uploadedBy}`],
   ];
 
   return (

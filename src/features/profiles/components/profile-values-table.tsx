@@ -1,7 +1,7 @@
 /** The numbers behind the chart, paged (TanStack Table v9: useTable, tableFeatures, table.FlexRender). */
 import { useMemo } from 'react';
 import { createColumnHelper, createPaginatedRowModel, rowPaginationFeature, tableFeatures, useTable } from '@tanstack/react-table';
-import { buttonClass, inputClass } from '@/components/form-field';
+import { buttonClass, compactSelect } from '@/components/form-field';
 import { formatLocal, formatNumber } from '../lib/format';
 
 interface ValueRow {
@@ -39,7 +39,7 @@ export function ProfileValuesTable({ startMs, stepMinutes, values, filledIndexes
       ]),
     [timeZone, unit],
   );
-  const table = useTable({ features, columns, data, initialState: { pagination: { pageIndex: 0, pageSize: 96 } } });
+  const table = useTable({ features, columns, data, initialState: { pagination: { pageIndex: 0, pageSize: 24 } } });
   const { pageIndex, pageSize } = table.state.pagination;
 
   return (
@@ -79,7 +79,7 @@ export function ProfileValuesTable({ startMs, stepMinutes, values, filledIndexes
         <button type="button" className={buttonClass.secondary} onClick={() => table.lastPage()} disabled={!table.getCanNextPage()}>Last</button>
         <label className="ml-4 flex items-center gap-2">
           Rows per page
-          <select className={`${inputClass} w-auto`} value={pageSize} onChange={(e) => table.setPageSize(Number(e.target.value))}>
+          <select className={compactSelect} value={pageSize} onChange={(e) => table.setPageSize(Number(e.target.value))}>
             {PAGE_SIZES.map((size) => (
               <option key={size} value={size}>{size}</option>
             ))}

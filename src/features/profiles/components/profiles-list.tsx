@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { Link } from 'react-router-dom';
 import { PROFILE_KINDS, type ProfileKind } from '@shared/profile-csv';
-import { inputClass } from '@/components/form-field';
+import { compactSelect } from '@/components/form-field';
 import { EmptyState, ErrorState, LoadingState } from '@/components/query-state';
 import { useSiteProfiles } from '../api/get-site-profiles';
 import { describeStep, displayUnit, formatLocal } from '../lib/format';
@@ -17,7 +17,7 @@ export function ProfilesList({ siteId, timezone, currency }: { siteId: string; t
     <div className="space-y-2">
       <label className="flex items-center gap-2 text-sm">
         Show
-        <select className={`${inputClass} w-auto`} value={kind} onChange={(e) => setKind(e.target.value as ProfileKind | '')}>
+        <select aria-label="Show profiles of kind" className={compactSelect} value={kind} onChange={(e) => setKind(e.target.value as ProfileKind | '')}>
           <option value="">all kinds</option>
           {PROFILE_KINDS.map((k) => (
             <option key={k} value={k}>{k}</option>

@@ -31,35 +31,38 @@ export default function SeriesChart({ points, timeZone, unit, label, height = 26
   const tickDate = (d: Date | number) => formatLocal(typeof d === 'number' ? d : d.getTime(), timeZone).slice(0, 10);
   return (
     <figure className="rounded bg-white p-2 shadow-sm">
-      <XYChart
-        height={height}
-        theme={theme}
-        xScale={{ type: 'time' }}
-        yScale={{ type: 'linear', nice: true, zero: false }}
-        margin={{ top: 12, right: 16, bottom: 32, left: 64 }}
-        accessibilityLabel={`${label}, ${unit}, ${points.length} points`}
-      >
-        <Grid columns={false} numTicks={5} />
-        <Axis orientation="bottom" numTicks={6} tickFormat={tickDate} />
-        <Axis orientation="left" numTicks={5} label={unit} tickFormat={(v: number) => formatNumber(v, 1)} />
-        <LineSeries dataKey={label} data={points} {...accessors} />
-        <Tooltip<SeriesPoint>
-          snapTooltipToDatumX
-          showVerticalCrosshair
-          renderTooltip={({ tooltipData }) => {
-            const p = tooltipData?.nearestDatum?.datum;
-            return p ? (
-              <span className="text-xs">
-                {formatLocal(p.t, timeZone)}
-                <br />
-                <strong>
-                  {formatNumber(p.v)} {unit}
-                </strong>
-              </span>
-            ) : null;
-          }}
-        />
-      </XYChart>
+      {/* XYChart measures its parent for the width; the parent needs the height. */}
+      <div style={{ height }}>
+        <XYChart
+          height={height}
+          theme={theme}
+          xScale={{ type: 'time' }}
+          yScale={{ type: 'linear', nice: true, zero: false }}
+          margin={{ top: 12, right: 16, bottom: 32, left: 64 }}
+          accessibilityLabel={`${label}, ${unit}, ${points.length} points`}
+        >
+          <Grid columns={false} numTicks={5} />
+          <Axis orientation="bottom" numTicks={6} tickFormat={tickDate} />
+          <Axis orientation="left" numTicks={5} label={unit} tickFormat={(v: number) => formatNumber(v, 1)} />
+          <LineSeries dataKey={label} data={points} {...accessors} />
+          <Tooltip<SeriesPoint>
+            snapTooltipToDatumX
+            showVerticalCrosshair
+            renderTooltip={({ tooltipData }) => {
+              const p = tooltipData?.nearestDatum?.datum;
+              return p ? (
+                <span className="text-xs">
+                  {formatLocal(p.t, timeZone)}
+                  <br />
+                  <strong>
+                    {formatNumber(p.v)} {unit}
+                  </strong>
+                </span>
+              ) : null;
+            }}
+          />
+        </XYChart>
+      </div>
       <figcaption className="sr-only">
         {label} in {unit}; the numbers are in the table below.
       </figcaption>
