@@ -64,46 +64,23 @@ export function forwardStep(
   let k = 0;
   while (k < kSeg && z + (su[base + k + 1] ?? 0) <= y) k++;
   if (yL <= yR) {
+    // Walk right while the right slope g of the sum is negative; along a flat
+    // minimum (g = 0) only while idling (y = z, least throughput) lies ahead.
     for (;;) {
       const g = (j < nW ? (sl[o + j] ?? 0) : Infinity) + (k < kSeg ? (ss[base + k] ?? 0) : Infinity);
-      if (g >= 0 || y >= yR) break;
+      if (y >= yR || g > 0 || (g === 0 && y >= z)) break;
       const endW = j < nW ? (j === nW - 1 ? wHi : pw + (len[o + j] ?? 0)) : Infinity;
       const endS = k < kSeg ? z + (su[base + k + 1] ?? 0) : Infinity;
       let next = endW < endS ? endW : endS;
       if (next > yR) next = yR;
+      if (g === 0 && next > z) {
+        // z lies inside both current pieces, so the pointers stay valid.
+        y = z;
+        break;
+      }
       y = next;
       if (endW <= next) { pw = endW; j++; }
       if (endS <= next) k++;
-    }
-    const g = (j < nW ? (sl[o + j] ?? 0) : Infinity) + (k < kSeg ? (ss[base + k] ?? 0) : Infinity);
-    if (g === 0 && y < yR && z > y) {
-      // Flat minimum: walk to its end, then take the point nearest to idling.
-      const y0 = y;
-      for (;;) {
-        const endW = j < nW ? (j === nW - 1 ? wHi : pw + (len[o + j] ?? 0)) : Infinity;
-        const endS = k < kSeg ? z + (su[base + k + 1] ?? 0) : Infinity;
-        let next = endW < endS ? endW : endS;
-        if (next > yR) next = yR;
-        y = next;
-        if (endW <= next) { pw = endW; j++; }
-        if (endS <= next) k++;
-        const g2 = (j < nW ? (sl[o + j] ?? 0) : Infinity) + (k < kSeg ? (ss[base + k] ?? 0) : Infinity);
-        if (g2 !== 0 || y >= yR || y >= z) break;
-      }
-      if (y > z) {
-        // Idling lies inside the flat minimum: relocate there.
-        y = z > y0 ? z : y0;
-        j = 0;
-        pw = wLo;
-        while (j < nW) {
-          const end = j === nW - 1 ? wHi : pw + (len[o + j] ?? 0);
-          if (end > y) break;
-          pw = end;
-          j++;
-        }
-        k = 0;
-        while (k < kSeg && z + (su[base + k + 1] ?? 0) <= y) k++;
-      }
     }
   }
   // Slopes of V_{t+1} at y. A breakpoint within tol counts as y's own: W's

@@ -155,15 +155,17 @@ class StageBuilder {
     }
     const at = this.at;
     for (let k = 0; k + 1 < this.m; k++) {
-      this.slope[at + k] = ((this.h[at + k + 1] ?? 0) - (this.h[at + k] ?? 0)) / ((this.u[at + k + 1] ?? 0) - (this.u[at + k] ?? 0));
+      const sk = ((this.h[at + k + 1] ?? 0) - (this.h[at + k] ?? 0)) / ((this.u[at + k + 1] ?? 0) - (this.u[at + k] ?? 0));
+      // Kept collinear points may leave a rounding-level descent: keep slopes sorted.
+      this.slope[at + k] = k > 0 && sk < (this.slope[at + k - 1] ?? 0) ? (this.slope[at + k - 1] ?? 0) : sk;
     }
     this.at += this.m;
   }
 
   /**
    * Appends the point (c, d) of ascending u; drops near-duplicates and the
-   * middle of three collinear points, which keeps slopes strictly increasing
-   * (h is convex, so a middle point on the chord adds nothing).
+   * middle of three collinear points when its flows are the interpolation of
+   * its neighbours' (h is convex, so such a point adds nothing).
    */
   private add(cc: number, dd: number): void {
     const { u, h, c, d } = this;
@@ -182,6 +184,12 @@ class StageBuilder {
       const s01 = ((h[i1] ?? 0) - (h[i0] ?? 0)) / ((u[i1] ?? 0) - (u[i0] ?? 0));
       const s12 = ((h[i2] ?? 0) - (h[i1] ?? 0)) / ((u[i2] ?? 0) - (u[i1] ?? 0));
       if (s12 - s01 > 1e-12 * (Math.abs(s01) + Math.abs(s12) + 1e-9)) break;
+      // Keep a middle point whose flows the neighbours would not interpolate (idling
+      // between discharge and charge at equal slopes): it is the least-throughput optimum.
+      const th = ((u[i1] ?? 0) - (u[i0] ?? 0)) / ((u[i2] ?? 0) - (u[i0] ?? 0));
+      const cMid = (c[i0] ?? 0) + th * ((c[i2] ?? 0) - (c[i0] ?? 0));
+      const dMid = (d[i0] ?? 0) + th * ((d[i2] ?? 0) - (d[i0] ?? 0));
+      if (Math.abs(cMid - (c[i1] ?? 0)) > this.tolP * 1e3 || Math.abs(dMid - (d[i1] ?? 0)) > this.tolP * 1e3) break;
       u[i1] = u[i2] ?? 0;
       h[i1] = h[i2] ?? 0;
       c[i1] = c[i2] ?? 0;

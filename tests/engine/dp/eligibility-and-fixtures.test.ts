@@ -101,6 +101,17 @@ describe('worked fixtures', () => {
   });
 });
 
+describe('ties between optimal schedules', () => {
+  // [D] at one flat price with η_ch·η_dis = 1 every cycle breaks even, so every schedule that
+  // ends where it started costs 0; the documented rule (least energy moved per step, then
+  // idling) must pick zero throughput.
+  it('idles at flat prices with a lossless battery and a cyclic end', () => {
+    const s = solveDispatchDp(problem([40, 40, 40, 40, 40], { initialEnergyKwh: 500, terminal: { kind: 'cyclic' } }, { efficiencyCharge: 1, efficiencyDischarge: 1 }));
+    expect(s.cost).toBe(0);
+    expect(s.chargeKw.every((c) => c === 0) && s.dischargeKw.every((d) => d === 0)).toBe(true);
+  });
+});
+
 describe('infeasible models', () => {
   it('names the first step whose load exceeds the import limit plus the discharge power', () => {
     const p = problem([20, 30, 40, 50], {
