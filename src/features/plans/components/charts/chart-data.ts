@@ -1,0 +1,33 @@
+/** Plan steps as chart points: delivery and lookahead apart (the lookahead drawn differently). */
+import type { PlanResults, PlanStep } from '@shared/schemas/plan';
+
+export interface StepPoint {
+  /** Start of the step, epoch ms. */
+  t: number;
+  step: PlanStep;
+}
+
+export interface SplitSteps {
+  all: StepPoint[];
+  delivery: StepPoint[];
+  /** Starts with the last delivery step so the two lines join. */
+  lookahead: StepPoint[];
+  leaving: StepPoint[];
+  entry: StepPoint[];
+}
+
+export function splitSteps(results: PlanResults): SplitSteps {
+  const all = results.steps.map((step) => ({ t: Date.parse(step.time), step }));
+  const delivery = all.slice(0, results.deliverySteps);
+  const lookahead = results.deliverySteps < all.length ? all.slice(Math.max(0, results.deliverySteps - 1)) : [];
+  return {
+    all,
+    delivery,
+    lookahead,
+    leaving: all.filter((p) => p.step.arc === 'leaving'),
+    entry: all.filter((p) => p.step.arc === 'entry'),
+  };
+}
+
+export const timeTick = (timeZone: string) => (d: Date | number) =>
+  new Intl.DateTimeFormat('en-GB', { timeZone, day: '2-digit', month: 'short', hour: '2-digit', minute: '2-digit', hourCycle: 'h23' }).format(typeof d === 'number' ? d : d.getTime());

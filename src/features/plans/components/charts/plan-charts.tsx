@@ -1,0 +1,36 @@
+/**
+ * Every chart of a plan page. Default export so the page loads it with
+ * React.lazy: the chart libraries stay out of the first bundle.
+ */
+import { useMemo } from 'react';
+import type { PlanResults } from '@shared/schemas/plan';
+import { splitSteps } from './chart-data';
+import { PriceDispatchChart } from './price-dispatch-chart';
+import { SocChart } from './soc-chart';
+import { DistanceChart } from './distance-chart';
+import { ValueChart } from './value-chart';
+import { ValueCurvesChart } from './value-curves-chart';
+
+export interface PlanChartsProps {
+  results: PlanResults;
+  timeZone: string;
+  currency: string;
+  energyKwh: number;
+  usableKwh: number;
+}
+
+export default function PlanCharts({ results, timeZone, currency, energyKwh, usableKwh }: PlanChartsProps) {
+  const split = useMemo(() => splitSteps(results), [results]);
+  const bandSocPct = ((results.turnpike.bandPct / 100) * usableKwh * 100) / energyKwh;
+  return (
+    <div className="space-y-4">
+      <PriceDispatchChart split={split} timeZone={timeZone} currency={currency} />
+      <SocChart split={split} timeZone={timeZone} energyKwh={energyKwh} bandSocPct={bandSocPct} />
+      <div className="grid gap-4 lg:grid-cols-2">
+        <DistanceChart split={split} timeZone={timeZone} bandPct={results.turnpike.bandPct} />
+        <ValueChart split={split} timeZone={timeZone} currency={currency} />
+      </div>
+      {results.valueCurves.length > 0 && <ValueCurvesChart curves={results.valueCurves} timeZone={timeZone} currency={currency} />}
+    </div>
+  );
+}

@@ -1,0 +1,53 @@
+import { Link } from 'react-router-dom';
+import type { Plan } from '@shared/schemas/plan';
+import { formatMoney, formatNumber, formatPercent, formatSteps } from '@/lib/format';
+
+/** Largest SoC difference over the delivery window against the longest horizon with the same rule, % of nameplate. */
+function differenceToLongest(plan: Plan, plans: Plan[]): number | null {
+  const longest = plans.filter((p) => p.terminalRule === plan.terminalRule && p.results).sort((a, b) => b.horizonHours - a.horizonHours)[0];
+  if (!longest?.results || !plan.results || longest.id === plan.id) return null;
+  const n = Math.min(plan.results.deliverySteps, longest.results.deliverySteps);
+  let max = 0;
+  for (let t = 0; t < n; t++) max = Math.max(max, Math.abs(plan.results.steps[t]!.socPct - longest.results.steps[t]!.socPct));
+  return max;
+}
+
+export function ComparisonTable({ plans }: { plans: Plan[] }) {
+  const currency = plans[0]?.inputs?.site.currency ?? '';
+  return (
+    <div className="overflow-x-auto">
+      <table className="w-full rounded bg-white text-left text-sm shadow-sm">
+        <caption className="sr-only">Plans of this delivery window by horizon and terminal rule</caption>
+        <thead className="bg-ink-100 text-ink-700">
+          <tr>
+            {['Horizon', 'Terminal rule', 'Method', 'Cost', 'Earnings', 'Near-steady', 'Entry arc', 'Leaving arc', 'Commit window', 'Max SoC gap to longest', 'Flags'].map((h) => (
+              <th key={h} scope="col" className="whitespace-nowrap px-2 py-1.5">{h}</th>
+            ))}
+          </tr>
+        </thead>
+        <tbody>
+          {plans.map((p) => {
+            const r = p.results;
+            const step = r?.stepMinutes ?? 60;
+            const gap = differenceToLongest(p, plans);
+            return (
+              <tr key={p.id} className="border-t border-ink-100 tabular-nums">
+                <td className="px-2 py-1"><Link to={`/plans/${p.id}`} className="font-semibold text-seaglass-700 underline">{p.horizonHours} h</Link></td>
+                <td className="px-2 py-1">{p.terminalRule}</td>
+                <td className="px-2 py-1">{p.method ?? p.job?.state ?? ''}</td>
+                <td className="px-2 py-1">{formatMoney(r?.summary.cost, currency)}</td>
+                <td className="px-2 py-1">{formatMoney(r?.summary.earnings, currency)}</td>
+                <td className="px-2 py-1">{formatPercent(r?.turnpike.nearSteadyShare)}</td>
+                <td className="px-2 py-1">{r ? formatSteps(r.turnpike.entryArcSteps, step) : '–'}</td>
+                <td className="px-2 py-1">{r ? formatSteps(r.turnpike.leavingArcSteps, step) : '–'}</td>
+                <td className="px-2 py-1">{r && r.turnpike.commitWindowSteps !== null ? formatSteps(r.turnpike.commitWindowSteps, step) : '–'}</td>
+                <td className="px-2 py-1">{gap === null ? '–' : `${formatNumber(gap, 1)} %`}</td>
+                <td className="px-2 py-1">{r ? r.turnpike.flags.length : '–'}</td>
+              </tr>
+            );
+          })}
+        </tbody>
+      </table>
+    </div>
+  );
+}

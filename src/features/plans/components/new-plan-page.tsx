@@ -1,0 +1,20 @@
+import { useSearchParams } from 'react-router-dom';
+import { useCan } from '@/lib/authorization';
+import { PlanForm } from './plan-form';
+
+/** `/plans/new?siteId=&batteryId=`: the plan form, preset from the page that linked here. */
+export function NewPlanPage() {
+  const [params] = useSearchParams();
+  const canEdit = useCan('data.edit');
+  if (!canEdit) return <p role="alert" className="rounded bg-white p-6 text-ink-700">Your role can read plans but not start them; ask a planner.</p>;
+  return (
+    <section className="max-w-4xl space-y-4">
+      <h1 className="text-2xl font-semibold text-ink-900">New plan</h1>
+      <p className="text-ink-700">
+        The plan is computed in the background; its page shows the progress and then the schedule, how long it stays near the steady cycle,
+        and what is safe to commit.
+      </p>
+      <PlanForm initial={{ siteId: params.get('siteId') ?? '', batteryId: params.get('batteryId') ?? '' }} />
+    </section>
+  );
+}

@@ -1,0 +1,96 @@
+/**
+ * The plan page: what was asked, the job's progress while it runs, then the
+ * summary, the turnpike figures in words, the charts, the schedule table and
+ * the cautions. The sign-off section is handed in by the route (features do
+ * not import each other).
+ */
+import type { ReactNode } from 'react';
+import { Link, useParams } from 'react-router-dom';
+import type { Plan } from '@shared/schemas/plan';
+import { describeTerminalRule } from '@shared/schemas/terminal-rule';
+import { ErrorState, LoadingState } from '@/components/query-state';
+import { JobProgressBar } from '@/components/job-progress';
+import { formatLocalTime, formatNumber } from '@/lib/format';
+import { usePlan } from '../api/get-plan';
+import { Cautions } from './cautions';
+import { PlanSummaryCard } from './plan-summary-card';
+import { TurnpikePanel } from './turnpike-panel';
+import { ScheduleTable } from './schedule-table';
+import { LazyPlanCharts } from './charts/lazy-plan-charts';
+import { compareUrl } from './compare-url';
+
+const socSource: Record<string, string> = {
+  'last-approved-plan': 'end SoC of the last approved plan',
+  battery: 'battery’s initial SoC',
+  request: 'entered',
+};
+
+function PlanFacts({ plan }: { plan: Plan }) {
+  const tz = plan.inputs?.site.timezone ?? 'UTC';
+  const facts: [string, string][] = [
+    ['Delivery window', `${formatLocalTime(Date.parse(plan.deliveryStart), tz)} – ${formatLocalTime(Date.parse(plan.deliveryEnd), tz)}`],
+    ['Horizon', `${plan.horizonHours} h`],
+    ['Terminal rule', describeTerminalRule(plan.terminalRule)],
+    ['Initial SoC', `${formatNumber(plan.initialSocPct, 1)} % (${socSource[plan.inputs?.initialSocSource ?? 'request'] ?? ''})`],
+    ['Method', plan.method === 'dp' ? 'exact dynamic program (fast path)' : plan.method === 'lp' ? 'linear program' : 'not computed yet'],
+    ['Status', plan.status],
+  ];
+  return (
+    <dl className="grid gap-x-6 gap-y-1 text-sm sm:grid-cols-[auto_1fr]">
+      {facts.map(([term, text]) => (
+        <div key={term} className="contents">
+          <dt className="font-medium text-ink-700">{term}</dt>
+          <dd className="text-ink-900">{text}</dd>
+        </div>
+      ))}
+    </dl>
+  );
+}
+
+export function PlanPage({ signOff }: { signOff?: (planId: string) => ReactNode }) {
+  const { id = '' } = useParams();
+  const query = usePlan(id);
+  if (query.isPending) return <LoadingState label="Loading the plan…" />;
+  if (query.isError) return <ErrorState error={query.error} onRetry={() => void query.refetch()} title="The plan could not be loaded." />;
+  const plan = query.data;
+  const inputs = plan.inputs;
+  const tz = inputs?.site.timezone ?? 'UTC';
+  const currency = inputs?.site.currency ?? '';
+  const energyKwh = inputs?.battery.energyKwh ?? 1;
+  const usableKwh = inputs ? (energyKwh * (inputs.battery.socMaxPct - inputs.battery.socMinPct)) / 100 : 1;
+  return (
+    <article className="space-y-6">
+      <header className="space-y-3">
+        <p className="text-sm text-ink-500">
+          <Link to="/plans" className="underline">Plans</Link> / {plan.siteName}
+        </p>
+        <h1 className="text-2xl font-semibold text-ink-900">
+          Plan for {plan.batteryName ?? 'the battery'} at {plan.siteName ?? 'the site'}
+        </h1>
+        <PlanFacts plan={plan} />
+        <Link to={compareUrl(plan)} className="inline-block text-sm font-semibold text-seaglass-700 underline">
+          Compare horizons for this delivery window
+        </Link>
+      </header>
+      {plan.job && plan.job.state !== 'completed' && <JobProgressBar job={plan.job} label="Computing the plan" />}
+      {plan.errorMessage && plan.job?.state === 'failed' && (
+        <p role="alert" className="rounded border border-brick-600 bg-brick-100 p-4 text-ink-900">
+          {plan.errorMessage}
+        </p>
+      )}
+      {plan.results && (
+        <>
+          <PlanSummaryCard results={plan.results} currency={currency} />
+          <TurnpikePanel results={plan.results} />
+          <LazyPlanCharts results={plan.results} timeZone={tz} currency={currency} energyKwh={energyKwh} usableKwh={usableKwh} />
+          <section aria-labelledby="schedule-heading" className="space-y-2">
+            <h2 id="schedule-heading" className="text-lg font-semibold text-ink-900">Schedule</h2>
+            <ScheduleTable results={plan.results} timeZone={tz} currency={currency} energyKwh={energyKwh} />
+          </section>
+        </>
+      )}
+      <Cautions warnings={inputs?.warnings ?? []} />
+      {signOff?.(plan.id)}
+    </article>
+  );
+}

@@ -1,0 +1,43 @@
+import { Link } from 'react-router-dom';
+import type { Plan } from '@shared/schemas/plan';
+import { formatMoney, formatPercent } from '@/lib/format';
+
+const day = (iso: string) => iso.slice(0, 16).replace('T', ' ');
+
+/** One row per plan: window, horizon, status, the job and the headline figures. */
+export function PlansTable({ plans }: { plans: Plan[] }) {
+  return (
+    <div className="overflow-x-auto">
+      <table className="w-full rounded bg-white text-left text-sm shadow-sm">
+        <thead className="bg-ink-100 text-ink-700">
+          <tr>
+            {['Battery', 'Delivery (UTC)', 'Horizon', 'Rule', 'Status', 'Computation', 'Cost', 'Near-steady', 'Flags'].map((h) => (
+              <th key={h} scope="col" className="whitespace-nowrap px-2 py-1.5">{h}</th>
+            ))}
+          </tr>
+        </thead>
+        <tbody>
+          {plans.map((p) => (
+            <tr key={p.id} className="border-t border-ink-100 tabular-nums">
+              <td className="px-2 py-1">
+                <Link to={`/plans/${p.id}`} className="font-semibold text-seaglass-700 underline">{p.batteryName ?? 'battery'}</Link>
+                <span className="block text-xs text-ink-500">{p.siteName}</span>
+              </td>
+              <td className="whitespace-nowrap px-2 py-1">{day(p.deliveryStart)} – {day(p.deliveryEnd)}</td>
+              <td className="px-2 py-1">{p.horizonHours} h</td>
+              <td className="px-2 py-1">{p.terminalRule}</td>
+              <td className="px-2 py-1">{p.status}</td>
+              <td className="px-2 py-1">
+                {p.job?.state === 'running' ? `running ${formatPercent(p.job.shareDone)}` : (p.job?.state ?? '–')}
+                {p.method ? ` · ${p.method}` : ''}
+              </td>
+              <td className="px-2 py-1">{formatMoney(p.headline?.cost, '')}</td>
+              <td className="px-2 py-1">{formatPercent(p.headline?.nearSteadyShare)}</td>
+              <td className={`px-2 py-1 ${p.headline?.flags ? 'font-semibold text-amber-600' : ''}`}>{p.headline ? p.headline.flags : '–'}</td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
+    </div>
+  );
+}

@@ -1,0 +1,56 @@
+/**
+ * Numbers, money, durations and instants as plan and study pages show them.
+ * Instants are shown in the site's zone with the UTC offset, so DST days read
+ * unambiguously; wall times typed in a form map back to instants the same way.
+ */
+import { createZoneClock, formatInstant } from '@shared/profile-csv';
+
+/** "2026-05-04 17:00 +02:00" in `timeZone` (UTC text when the zone is unknown). */
+export function formatLocalTime(ms: number, timeZone: string): string {
+  const clock = createZoneClock(timeZone);
+  if (!clock) return new Date(ms).toISOString();
+  const text = formatInstant(ms, clock);
+  return `${text.slice(0, 10)} ${text.slice(11, 16)} ${text.slice(19)}`;
+}
+
+/** "2026-05-04T17:00" (for datetime-local inputs) in `timeZone`. */
+export function toWallTimeInput(ms: number, timeZone: string): string {
+  const clock = createZoneClock(timeZone);
+  return clock ? formatInstant(ms, clock).slice(0, 16) : new Date(ms).toISOString().slice(0, 16);
+}
+
+/**
+ * The instant a wall time names in `timeZone`: null when the text is empty or
+ * the time does not exist (spring forward); the earlier one when it is repeated.
+ */
+export function fromWallTimeInput(text: string, timeZone: string): number | null {
+  if (!/^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}$/.test(text)) return null;
+  const clock = createZoneClock(timeZone);
+  const wall = Date.parse(`${text}:00Z`);
+  if (!clock) return wall;
+  return clock.instantsOf(wall)[0] ?? null;
+}
+
+export const formatNumber = (n: number | null | undefined, digits = 1) =>
+  n === null || n === undefined || !Number.isFinite(n) ? '–' : n.toLocaleString(undefined, { maximumFractionDigits: digits, minimumFractionDigits: 0 });
+
+export const formatMoney = (n: number | null | undefined, currency: string) =>
+  n === null || n === undefined || !Number.isFinite(n) ? '–' : `${n.toLocaleString(undefined, { maximumFractionDigits: 2, minimumFractionDigits: 2 })} ${currency}`;
+
+export const formatPercent = (share: number | null | undefined, digits = 0) =>
+  share === null || share === undefined || !Number.isFinite(share) ? '–' : `${(share * 100).toFixed(digits)} %`;
+
+/** "45 s", "3 min", "1 h 20 min". */
+export function formatDuration(seconds: number | null | undefined): string {
+  if (seconds === null || seconds === undefined || !Number.isFinite(seconds)) return '–';
+  if (seconds < 60) return `${Math.max(1, Math.round(seconds))} s`;
+  const minutes = Math.round(seconds / 60);
+  if (minutes < 60) return `${minutes} min`;
+  return `${Math.floor(minutes / 60)} h ${minutes % 60} min`;
+}
+
+/** Steps as hours or minutes: "5 h", "45 min". */
+export function formatSteps(steps: number, stepMinutes: number): string {
+  const minutes = steps * stepMinutes;
+  return minutes % 60 === 0 ? `${minutes / 60} h` : minutes > 60 ? `${(minutes / 60).toFixed(1)} h` : `${minutes} min`;
+}
