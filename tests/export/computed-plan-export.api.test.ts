@@ -1,0 +1,115 @@
+/**
+ * A plan computed by the real job (engine, worker, stored results) is signed
+ * off and exported, on the autumn DST day in Berlin at 15-minute resolution:
+ * 25 local hours, 100 intervals, the 02:00-03:00 hour twice. The export must
+ * carry the engine's schedule unchanged and upload back as a price profile.
+ */
+import Papa from 'papaparse';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Plan, PlanCreated } from '@shared/schemas/plan';
+import type { JobWorker } from '../../server/jobs/job-worker';
+import { createTestApp } from '../support/test-app';
+import { signInAs, type SignedInAgent } from '../support/auth';
+import { createPlace, dailyPrices, startTestWorker, stopTestWorker, useOwnJobQueues, waitUntilFinished } from '../jobs/support';
+
+useOwnJobQueues('export_computed');
+const app = createTestApp();
+let planner: SignedInAgent;
+let approver: SignedInAgent;
+let viewer: SignedInAgent;
+let worker: JobWorker | null = null;
+
+// [S: Directive 2000/84/EC, Art. 3] summer time ends at 01:00 UTC on the last Sunday of October:
+// 2026-10-25, local midnight is 2026-10-24T22:00Z (+02:00) and the next one 2026-10-25T23:00Z (+01:00).
+const profileStart = Date.parse('2026-10-24T22:00:00Z');
+const prices = dailyPrices(3, 15).map((p, i) => (i % 13 === 5 ? -p / 4 : p));
+let plan: Plan;
+let exported: string;
+
+beforeAll(async () => {
+  [planner, approver, viewer] = await Promise.all([signInAs(app, 'planner'), signInAs(app, 'approver'), signInAs(app, 'viewer')]);
+  worker = await startTestWorker();
+  const place = await createPlace(planner, {
+    prices: { values: prices, startMs: profileStart, stepMinutes: 15 },
+    site: { timezone: 'Europe/Berlin' },
+  });
+  const created = await planner.post('/api/plans').send({
+    batteryId: place.batteryId,
+    priceProfileId: place.priceProfileId,
+    deliveryStart: '2026-10-25T00:00:00+02:00',
+    deliveryEnd: '2026-10-26T00:00:00+01:00',
+    horizonHours: 36,
+    terminalRule: 'cyclic',
+    initialSocPct: 50,
+  });
+  expect(created.status, JSON.stringify(created.body)).toBe(202);
+  plan = await waitUntilFinished<Plan>(planner, `/api/plans/${(created.body as PlanCreated).plan.id}`);
+  expect(plan.job?.state, plan.errorMessage ?? '').toBe('completed');
+  expect((await planner.post(`/api/plans/${plan.id}/submit`).send({ version: plan.version })).status).toBe(200);
+  const approved = await approver.post(`/api/plans/${plan.id}/approve`).send({ version: plan.version + 1 });
+  expect(approved.status, JSON.stringify(approved.body)).toBe(200);
+  const response = await viewer
+    .get(`/api/plans/${plan.id}/export.csv`)
+    .buffer(true)
+    .parse((res, done) => {
+      let text = '';
+      res.setEncoding('utf8');
+      res.on('data', (c: string) => (text += c));
+      res.on('end', () => done(null, text));
+    });
+  expect(response.status).toBe(200);
+  expect(response.headers['x-slackwater-checksum']).toBe(`sha256=${approved.body.checksum}`);
+  exported = response.body as string;
+});
+afterAll(async () => stopTestWorker(worker));
+
+const rows = () => Papa.parse<Record<string, string>>(exported, { header: true, newline: '\r\n', skipEmptyLines: true }).data;
+
+describe('the export of a computed, approved plan', () => {
+  it('has 100 quarter-hour rows on the 25-hour day, the repeated hour with both offsets', () => {
+    const r = rows();
+    expect(r).toHaveLength(100);
+    expect(r[0]?.interval_start).toBe('2026-10-25T00:00:00+02:00');
+    const starts = r.map((x) => x.interval_start);
+    expect(starts).toContain('2026-10-25T02:00:00+02:00');
+    expect(starts).toContain('2026-10-25T02:00:00+01:00');
+    expect(starts.indexOf('2026-10-25T02:00:00+01:00')).toBe(starts.indexOf('2026-10-25T02:00:00+02:00') + 4);
+    expect(r[99]?.interval_end).toBe('2026-10-26T00:00:00+01:00');
+  });
+
+  it("carries the engine's delivery steps unchanged, net power and SoC % derived from them", async () => {
+    const detail = (await planner.get(`/api/plans/${plan.id}`)).body as Plan;
+    const steps = detail.results!.steps.filter((s) => s.delivery);
+    expect(steps).toHaveLength(100);
+    rows().forEach((row, t) => {
+      const step = steps[t]!;
+      expect(Date.parse(row.interval_start!)).toBe(Date.parse(step.time));
+      expect(Number(row.charge_kw)).toBe(step.chargeKw);
+      expect(Number(row.discharge_kw)).toBe(step.dischargeKw);
+      expect(Number(row.soc_end_kwh)).toBe(step.socKwh);
+      expect(Number(row.grid_import_kw)).toBe(step.gridImportKw);
+      expect(Number(row.price_eur_per_mwh)).toBe(step.priceImport);
+      // [D] net battery power = discharge − charge; SoC % of the 2000 kWh nameplate.
+      expect(Number(row.net_battery_power_kw_discharge_positive)).toBeCloseTo(step.dischargeKw - step.chargeKw, 9);
+      expect(Number(row.soc_end_pct)).toBeCloseTo(step.socPct, 9);
+    });
+  });
+
+  it('uploads back unedited as the same 100 prices the profile held for that day', async () => {
+    const upload = await planner
+      .post(`/api/sites/${plan.siteId}/profiles`)
+      .field('kind', 'price')
+      .field('unit', 'currency/MWh')
+      .attach('file', Buffer.from(exported, 'utf8'), 'export.csv');
+    expect(upload.status, JSON.stringify(upload.body)).toBe(201);
+    const profile = await planner.get(`/api/profiles/${upload.body.id}`);
+    expect(profile.body).toMatchObject({
+      stepMinutes: 15,
+      valueCount: 100,
+      start: '2026-10-24T22:00:00.000Z',
+      end: '2026-10-25T23:00:00.000Z',
+    });
+    // [D] the window starts at the profile's first interval, so its prices are the first 100 uploaded.
+    expect(profile.body.values).toEqual(prices.slice(0, 100).map((p) => (p === 0 ? 0 : p)));
+  });
+});
