@@ -24,7 +24,9 @@ const usage = 'Usage: npm run create-admin [-- --email ADDRESS --name "FULL NAME
 async function readStdin(): Promise<string> {
   const chunks: Buffer[] = [];
   for await (const chunk of process.stdin) chunks.push(chunk as Buffer);
-  return Buffer.concat(chunks).toString('utf8').replace(/\r?\n$/, '');
+  return Buffer.concat(chunks)
+    .toString('utf8')
+    .replace(/\r?\n$/, '');
 }
 
 /** A prompt whose answer is not echoed (for passwords). */
@@ -54,7 +56,12 @@ async function ask(question: string): Promise<string> {
 
 async function collect() {
   const { values } = parseArgs({
-    options: { email: { type: 'string' }, name: { type: 'string' }, 'password-stdin': { type: 'boolean' }, help: { type: 'boolean' } },
+    options: {
+      email: { type: 'string' },
+      name: { type: 'string' },
+      'password-stdin': { type: 'boolean' },
+      help: { type: 'boolean' },
+    },
   });
   if (values.help) {
     console.log(usage);
@@ -80,7 +87,8 @@ async function collect() {
   const parsed = inviteUserSchema.safeParse({ email, name, role: 'admin' });
   if (!parsed.success || !password) {
     const issues = parsed.success ? [] : parsed.error.issues.map((i) => `  ${i.path.join('.')}: ${i.message}`);
-    if (!password) issues.push('  password: give it with --password-stdin or SLACKWATER_ADMIN_PASSWORD, or run in a terminal to be asked.');
+    if (!password)
+      issues.push('  password: give it with --password-stdin or SLACKWATER_ADMIN_PASSWORD, or run in a terminal to be asked.');
     throw new SetupError(`Cannot create the admin:\n${issues.join('\n')}\n${usage}`);
   }
   return { email: parsed.data.email, name: parsed.data.name, password };

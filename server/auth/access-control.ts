@@ -56,7 +56,10 @@ export function accessControl(registeredRoutes: () => readonly RegisteredRoute[]
 
 async function auditRefusal(req: Parameters<RequestHandler>[0], path: string, reason: string) {
   try {
-    await recordAudit(getDb(), req, { action: 'access.denied', details: { method: req.method, path: path.slice(0, 300), reason } });
+    await recordAudit(getDb(), req, {
+      action: 'access.denied',
+      details: { method: req.method, path: path.slice(0, 300), reason },
+    });
   } catch (error) {
     logger.error('Could not record a refused request in the audit trail', error);
   }

@@ -24,11 +24,25 @@ export interface FailureCounts {
   oldestAt: Date | null;
 }
 
-export async function recentFailures(db: DbOrTx, kind: AttemptKind, email: string, ip: string, since: Date): Promise<FailureCounts> {
+export async function recentFailures(
+  db: DbOrTx,
+  kind: AttemptKind,
+  email: string,
+  ip: string,
+  since: Date,
+): Promise<FailureCounts> {
   const window = and(eq(authAttempts.kind, kind), eq(authAttempts.success, false), gte(authAttempts.at, since));
-  const [byEmail] = await db.select({ n: count(), oldest: min(authAttempts.at) }).from(authAttempts).where(and(window, eq(authAttempts.email, email)));
-  const [byIp] = await db.select({ n: count(), oldest: min(authAttempts.at) }).from(authAttempts).where(and(window, eq(authAttempts.ip, ip)));
-  const oldest = [byEmail?.oldest, byIp?.oldest].filter((d): d is Date => d instanceof Date).sort((a, b) => a.getTime() - b.getTime())[0];
+  const [byEmail] = await db
+    .select({ n: count(), oldest: min(authAttempts.at) })
+    .from(authAttempts)
+    .where(and(window, eq(authAttempts.email, email)));
+  const [byIp] = await db
+    .select({ n: count(), oldest: min(authAttempts.at) })
+    .from(authAttempts)
+    .where(and(window, eq(authAttempts.ip, ip)));
+  const oldest = [byEmail?.oldest, byIp?.oldest]
+    .filter((d): d is Date => d instanceof Date)
+    .sort((a, b) => a.getTime() - b.getTime())[0];
   return { byEmail: byEmail?.n ?? 0, byIp: byIp?.n ?? 0, oldestAt: oldest ?? null };
 }
 

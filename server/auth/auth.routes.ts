@@ -80,7 +80,9 @@ authRouter.post('/auth/password-reset', async (req, res) => {
     sendRetryAfter(res, error);
     throw error;
   }
-  res.status(202).json({ message: 'If this address belongs to an active account, a reset link is on its way. It works once, for one hour.' });
+  res
+    .status(202)
+    .json({ message: 'If this address belongs to an active account, a reset link is on its way. It works once, for one hour.' });
   send().catch((error: unknown) => logger.error('The password reset e-mail could not be sent', error));
 });
 

@@ -27,9 +27,15 @@ export const wrongCredentials = () => new AppError('invalid_credentials', 'The e
 
 function tooMany(oldestAt: Date | null) {
   const retryAfter = Math.max(60, Math.ceil(((oldestAt?.getTime() ?? Date.now()) + windowMs - Date.now()) / 1000));
-  return new AppError('rate_limited', `Too many failed attempts. Try again in about ${Math.ceil(retryAfter / 60)} minutes.`, 429, undefined, {
-    retryAfterSeconds: retryAfter,
-  });
+  return new AppError(
+    'rate_limited',
+    `Too many failed attempts. Try again in about ${Math.ceil(retryAfter / 60)} minutes.`,
+    429,
+    undefined,
+    {
+      retryAfterSeconds: retryAfter,
+    },
+  );
 }
 
 type Outcome = { user: AuthUser } | { error: AppError };
@@ -47,14 +53,32 @@ export async function signIn(email: string, password: string, ip: string): Promi
     const user = await repo.findUserByEmail(tx, email);
     const ok = user?.passwordHash ? await verifyPassword(user.passwordHash, password) : await spendVerifyTime(password);
     if (!user || !ok || user.disabled) {
-      const reason = !user ? 'unknown e-mail' : !user.passwordHash ? 'no password set yet' : !ok ? 'wrong password' : 'account disabled';
+      const reason = !user
+        ? 'unknown e-mail'
+        : !user.passwordHash
+          ? 'no password set yet'
+          : !ok
+            ? 'wrong password'
+            : 'account disabled';
       await repo.recordAttempt(tx, 'sign-in', email, ip, false);
-      await recordAudit(tx, { actorId: user?.id ?? null, actorEmail: email, ip }, { action: 'auth.sign_in_failed', details: { reason } });
+      await recordAudit(
+        tx,
+        { actorId: user?.id ?? null, actorEmail: email, ip },
+        { action: 'auth.sign_in_failed', details: { reason } },
+      );
       return { error: wrongCredentials() };
     }
     await repo.recordAttempt(tx, 'sign-in', email, ip, true);
-    await repo.markSignedIn(tx, user.id, user.passwordHash && needsRehash(user.passwordHash) ? await hashPassword(password) : undefined);
-    await recordAudit(tx, { actorId: user.id, actorEmail: user.email, ip }, { action: 'auth.sign_in', entityType: 'user', entityId: user.id });
+    await repo.markSignedIn(
+      tx,
+      user.id,
+      user.passwordHash && needsRehash(user.passwordHash) ? await hashPassword(password) : undefined,
+    );
+    await recordAudit(
+      tx,
+      { actorId: user.id, actorEmail: user.email, ip },
+      { action: 'auth.sign_in', entityType: 'user', entityId: user.id },
+    );
     return { user: { id: user.id, email: user.email, name: user.name, role: user.role } };
   });
   // Housekeeping outside the sign-in transaction; a failure here must not fail a sign-in.
@@ -74,12 +98,22 @@ export async function changePassword(user: AuthUser, currentPassword: string, ne
     const row = await repo.findUserById(tx, user.id);
     if (!row?.passwordHash || !(await verifyPassword(row.passwordHash, currentPassword))) {
       await repo.recordAttempt(tx, 'sign-in', user.email, ip, false);
-      await recordAudit(tx, { actorId: user.id, actorEmail: user.email, ip }, { action: 'auth.password_change_failed', entityType: 'user', entityId: user.id });
-      return unprocessable('The password was not changed: see issues.', [{ path: 'currentPassword', message: 'The current password is wrong.' }]);
+      await recordAudit(
+        tx,
+        { actorId: user.id, actorEmail: user.email, ip },
+        { action: 'auth.password_change_failed', entityType: 'user', entityId: user.id },
+      );
+      return unprocessable('The password was not changed: see issues.', [
+        { path: 'currentPassword', message: 'The current password is wrong.' },
+      ]);
     }
     assertAcceptablePassword(newPassword, { email: row.email, name: row.name }, 'newPassword');
     await repo.setPasswordHash(tx, user.id, await hashPassword(newPassword));
-    await recordAudit(tx, { actorId: user.id, actorEmail: user.email, ip }, { action: 'auth.password_changed', entityType: 'user', entityId: user.id });
+    await recordAudit(
+      tx,
+      { actorId: user.id, actorEmail: user.email, ip },
+      { action: 'auth.password_changed', entityType: 'user', entityId: user.id },
+    );
     return null;
   });
   if (outcome) throw outcome;
@@ -100,10 +134,14 @@ export async function requestPasswordReset(email: string, ip: string, appOrigin:
     await repo.recordAttempt(tx, 'reset-request', email, ip, false);
     const user = await repo.findUserByEmail(tx, email);
     const send = !!user && !user.disabled && recent.byEmail < limits.perAccount;
-    await recordAudit(tx, { actorId: user?.id ?? null, actorEmail: email, ip }, {
-      action: 'auth.password_reset_requested',
-      details: { known: !!user, sent: send },
-    });
+    await recordAudit(
+      tx,
+      { actorId: user?.id ?? null, actorEmail: email, ip },
+      {
+        action: 'auth.password_reset_requested',
+        details: { known: !!user, sent: send },
+      },
+    );
     if (!send || !user) return { user: null };
     return { user, token: await issueLink(tx, user.id, 'reset') };
   });

@@ -5,6 +5,7 @@
  * short list on purpose (ASVS 5.0 6.2.4 asks for the top ~3000 of a breach corpus; ours
  * is a floor, and the base-word rule in password-policy.ts widens its reach).
  */
+// prettier-ignore
 export const commonPasswords = new Set([
   '123456789012', '1234567890123', '12345678901234', '123456789123', '123123123123', '111111111111',
   '000000000000', '121212121212', '123456123456', '987654321098', '098765432112', '147258369147',
@@ -24,6 +25,7 @@ export const commonPasswords = new Set([
 ]);
 
 /** Words that stay guessable whatever digits or symbols are wrapped around them. */
+// prettier-ignore
 export const guessableBaseWords = new Set([
   'password', 'passwort', 'passw', 'qwerty', 'qwertyuiop', 'asdfgh', 'asdfghjkl', 'zxcvbnm', 'letmein',
   'welcome', 'iloveyou', 'admin', 'administrator', 'changeme', 'monkey', 'dragon', 'football', 'baseball',

@@ -15,7 +15,12 @@ const oneLine = (s: string) => s.replace(/[\r\n\t\u2028\u2029]+/g, ' ').trim();
 const escapeHtml = (s: string) =>
   s.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c] ?? c);
 
-export function passwordLinkMail(purpose: LinkPurpose, to: { email: string; name: string }, url: string, invitedBy?: string): MailInput {
+export function passwordLinkMail(
+  purpose: LinkPurpose,
+  to: { email: string; name: string },
+  url: string,
+  invitedBy?: string,
+): MailInput {
   const hours = linkLifetimeHours[purpose];
   const name = oneLine(to.name);
   const lines =

@@ -25,7 +25,8 @@ export async function issueLink(db: DbOrTx, userId: string, purpose: repo.LinkPu
 type LinkRow = NonNullable<Awaited<ReturnType<typeof repo.findLink>>>;
 
 function usableLink(row: LinkRow | undefined): LinkRow {
-  if (!row) throw new AppError('link_invalid', 'This link is not valid. Copy the whole link from the e-mail, or ask for a new one.', 400);
+  if (!row)
+    throw new AppError('link_invalid', 'This link is not valid. Copy the whole link from the e-mail, or ask for a new one.', 400);
   if (row.link.usedAt) throw new AppError('link_used', 'This link was already used. Sign in, or ask for a new link.', 410);
   if (row.link.expiresAt.getTime() <= Date.now()) {
     throw new AppError('link_expired', `This link expired at ${row.link.expiresAt.toISOString()}. Ask for a new one.`, 410);
@@ -51,11 +52,15 @@ export async function redeemLink(token: string, password: string, who: AuditActo
     await repo.setPasswordHash(tx, user.id, await hashPassword(password));
     await repo.markLinkUsed(tx, link.id);
     await repo.deleteUnusedLinks(tx, user.id);
-    await recordAudit(tx, { ...who, actorId: user.id, actorEmail: user.email }, {
-      action: link.purpose === 'invite' ? 'auth.password_set' : 'auth.password_reset',
-      entityType: 'user',
-      entityId: user.id,
-    });
+    await recordAudit(
+      tx,
+      { ...who, actorId: user.id, actorEmail: user.email },
+      {
+        action: link.purpose === 'invite' ? 'auth.password_set' : 'auth.password_reset',
+        entityType: 'user',
+        entityId: user.id,
+      },
+    );
     return { userId: user.id };
   });
 }

@@ -30,7 +30,8 @@ export function passwordProblems(password: string, context: PasswordContext = {}
   const local = context.email?.split('@')[0]?.toLowerCase();
   if (local && local.length >= 4 && lower.includes(local)) problems.push('Do not use your e-mail address in your password.');
   const name = context.name?.toLowerCase().replace(/\s+/g, '');
-  if (name && name.length >= 4 && lower.replace(/\s+/g, '').includes(name)) problems.push('Do not use your name in your password.');
+  if (name && name.length >= 4 && lower.replace(/\s+/g, '').includes(name))
+    problems.push('Do not use your name in your password.');
   return problems;
 }
 

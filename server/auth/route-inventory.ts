@@ -33,7 +33,7 @@ function pathsOf(raw: unknown): string[] {
 
 export function listRoutes(router: Router | { stack?: unknown }, prefix = ''): RegisteredRoute[] {
   const found: RegisteredRoute[] = [];
-  const stack = ((router as { stack?: LayerLike[] }).stack ?? []);
+  const stack = (router as { stack?: LayerLike[] }).stack ?? [];
   for (const layer of stack) {
     if (layer.route) {
       const methods = Object.keys(layer.route.methods).filter((m) => m !== '_all' && layer.route?.methods[m]);

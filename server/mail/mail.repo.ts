@@ -12,7 +12,13 @@ const likeLiteral = (s: string) => s.replace(/[\\%_]/g, (c) => `\\${c}`);
 
 export async function listMail(db: DbOrTx, filter: { to?: string; limit: number }) {
   return db
-    .select({ id: mailOutbox.id, from: mailOutbox.from, to: mailOutbox.to, subject: mailOutbox.subject, sentAt: mailOutbox.sentAt })
+    .select({
+      id: mailOutbox.id,
+      from: mailOutbox.from,
+      to: mailOutbox.to,
+      subject: mailOutbox.subject,
+      sentAt: mailOutbox.sentAt,
+    })
     .from(mailOutbox)
     .where(filter.to ? ilike(mailOutbox.to, `%${likeLiteral(filter.to)}%`) : undefined)
     .orderBy(desc(mailOutbox.id))

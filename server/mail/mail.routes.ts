@@ -20,5 +20,13 @@ mailRouter.get('/mail/outbox/:id', async (req, res) => {
   const id = idSchema.safeParse(req.params.id);
   const row = id.success ? await findMail(getDb(), id.data) : undefined;
   if (!row) throw notFound('The message');
-  res.json({ id: row.id, from: row.from, to: row.to, subject: row.subject, text: row.text, html: row.html, sentAt: row.sentAt.toISOString() });
+  res.json({
+    id: row.id,
+    from: row.from,
+    to: row.to,
+    subject: row.subject,
+    text: row.text,
+    html: row.html,
+    sentAt: row.sentAt.toISOString(),
+  });
 });

@@ -17,7 +17,10 @@ export interface MailInput {
   html?: string;
 }
 
-type MailSettings = Pick<AppConfig, 'SMTP_HOST' | 'SMTP_PORT' | 'SMTP_USER' | 'SMTP_PASSWORD' | 'SMTP_SECURE' | 'MAIL_FROM' | 'FAKE_SMTP'>;
+type MailSettings = Pick<
+  AppConfig,
+  'SMTP_HOST' | 'SMTP_PORT' | 'SMTP_USER' | 'SMTP_PASSWORD' | 'SMTP_SECURE' | 'MAIL_FROM' | 'FAKE_SMTP'
+>;
 
 let settings: MailSettings | null = null;
 let fake: Promise<FakeSmtp> | null = null;
@@ -66,11 +69,23 @@ const oneLine = (s: string) => s.replace(/[\r\n\t\u2028\u2029]+/g, ' ').trim();
  * whether that fails the request.
  */
 export async function sendMail(mail: MailInput): Promise<void> {
-  const s = settings ?? { SMTP_HOST: '127.0.0.1', SMTP_PORT: 0, SMTP_SECURE: 'false', MAIL_FROM: 'Slackwater <no-reply@slackwater.example>', FAKE_SMTP: 'true' };
+  const s = settings ?? {
+    SMTP_HOST: '127.0.0.1',
+    SMTP_PORT: 0,
+    SMTP_SECURE: 'false',
+    MAIL_FROM: 'Slackwater <no-reply@slackwater.example>',
+    FAKE_SMTP: 'true',
+  };
   transporter ??= buildTransport(s);
   const transport = await transporter.catch((error: unknown) => {
     transporter = null;
     throw error;
   });
-  await transport.sendMail({ from: s.MAIL_FROM, to: mail.to, subject: oneLine(mail.subject), text: mail.text, ...(mail.html ? { html: mail.html } : {}) });
+  await transport.sendMail({
+    from: s.MAIL_FROM,
+    to: mail.to,
+    subject: oneLine(mail.subject),
+    text: mail.text,
+    ...(mail.html ? { html: mail.html } : {}),
+  });
 }

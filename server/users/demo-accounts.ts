@@ -18,7 +18,8 @@ export const demoAccounts: readonly { email: string; name: string; role: Role }[
 ];
 
 /** Deterministic ids, so other seeders can refer to the demo planner and approver. */
-export const demoUserId = (role: Role) => `00000000-0000-4000-a000-00000000000${demoAccounts.findIndex((a) => a.role === role) + 1}`;
+export const demoUserId = (role: Role) =>
+  `00000000-0000-4000-a000-00000000000${demoAccounts.findIndex((a) => a.role === role) + 1}`;
 
 export async function seedDemoAccounts(log: (m: string) => void): Promise<void> {
   const db = getDb();
@@ -26,7 +27,8 @@ export async function seedDemoAccounts(log: (m: string) => void): Promise<void> 
   for (const account of demoAccounts) {
     if (await findUserByEmail(db, account.email)) continue;
     const passwordHash = await hashPassword(demoPassword);
-    if (await insertUser(db, { id: demoUserId(account.role), ...account, passwordHash, passwordChangedAt: new Date() })) created += 1;
+    if (await insertUser(db, { id: demoUserId(account.role), ...account, passwordHash, passwordChangedAt: new Date() }))
+      created += 1;
   }
   log(created ? `Demo accounts created: ${created} (password "${demoPassword}", demo only).` : 'Demo accounts present.');
 }

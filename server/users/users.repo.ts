@@ -28,7 +28,11 @@ export async function insertUser(db: DbOrTx, user: NewUser): Promise<UserRow | u
 }
 
 export async function updateUser(db: DbOrTx, id: string, patch: UserPatch): Promise<UserRow | undefined> {
-  const [row] = await db.update(users).set({ ...patch, updatedAt: new Date() }).where(eq(users.id, id)).returning();
+  const [row] = await db
+    .update(users)
+    .set({ ...patch, updatedAt: new Date() })
+    .where(eq(users.id, id))
+    .returning();
   return row;
 }
 

@@ -48,11 +48,20 @@ async function mailLink(user: UserRow, token: string, appOrigin: string, admin: 
   }
 }
 
-export async function inviteUser(input: { email: string; name: string; role: Role }, admin: Admin, appOrigin: string): Promise<InviteResult> {
+export async function inviteUser(
+  input: { email: string; name: string; role: Role },
+  admin: Admin,
+  appOrigin: string,
+): Promise<InviteResult> {
   const { user, token } = await getDb().transaction(async (tx) => {
     const created = await repo.insertUser(tx, { id: randomUUID(), email: input.email, name: input.name, role: input.role });
     if (!created) throw conflict(`A user with the e-mail ${input.email} already exists.`);
-    await recordAudit(tx, admin, { action: 'user.invited', entityType: 'user', entityId: created.id, details: { email: created.email, role: created.role } });
+    await recordAudit(tx, admin, {
+      action: 'user.invited',
+      entityType: 'user',
+      entityId: created.id,
+      details: { email: created.email, role: created.role },
+    });
     return { user: created, token: await issueLink(tx, created.id, 'invite') };
   });
   return { user: toUser(user), mail: await mailLink(user, token, appOrigin, admin) };
@@ -64,7 +73,8 @@ export async function resendInvitation(id: string, admin: Admin, appOrigin: stri
     const row = await repo.findUserById(tx, id, true);
     if (!row) throw notFound('The user');
     if (row.disabled) throw conflict(`${row.email} is disabled: enable the account before inviting again.`);
-    if (row.passwordHash) throw conflict(`${row.email} has already set a password; they can use "Forgot password" on the sign-in page.`);
+    if (row.passwordHash)
+      throw conflict(`${row.email} has already set a password; they can use "Forgot password" on the sign-in page.`);
     await recordAudit(tx, admin, { action: 'user.invitation_resent', entityType: 'user', entityId: row.id });
     return { user: row, token: await issueLink(tx, row.id, 'invite') };
   });
@@ -91,7 +101,8 @@ export async function updateUser(id: string, patch: repo.UserPatch, admin: Admin
     const audit = (action: string, details: Record<string, unknown>) =>
       recordAudit(tx, admin, { action, entityType: 'user', entityId: id, details: { email: row.email, ...details } });
     if (patch.role && patch.role !== row.role) await audit('user.role_changed', { from: row.role, to: patch.role });
-    if (patch.disabled !== undefined && patch.disabled !== row.disabled) await audit(patch.disabled ? 'user.disabled' : 'user.enabled', {});
+    if (patch.disabled !== undefined && patch.disabled !== row.disabled)
+      await audit(patch.disabled ? 'user.disabled' : 'user.enabled', {});
     if (patch.name && patch.name !== row.name) await audit('user.renamed', { from: row.name, to: patch.name });
     return next;
   });
@@ -108,9 +119,20 @@ export async function createAdminAccount(input: { email: string; name: string; p
   assertAcceptablePassword(input.password, { email: input.email, name: input.name });
   const passwordHash = await hashPassword(input.password);
   return getDb().transaction(async (tx) => {
-    const row = await repo.insertUser(tx, { id: randomUUID(), email: input.email, name: input.name, role: 'admin', passwordHash, passwordChangedAt: new Date() });
+    const row = await repo.insertUser(tx, {
+      id: randomUUID(),
+      email: input.email,
+      name: input.name,
+      role: 'admin',
+      passwordHash,
+      passwordChangedAt: new Date(),
+    });
     if (!row) throw conflict(`A user with the e-mail ${input.email} already exists.`);
-    await recordAudit(tx, { actorEmail: 'create-admin script' }, { action: 'user.admin_created', entityType: 'user', entityId: row.id, details: { email: row.email } });
+    await recordAudit(
+      tx,
+      { actorEmail: 'create-admin script' },
+      { action: 'user.admin_created', entityType: 'user', entityId: row.id, details: { email: row.email } },
+    );
     return toUser(row);
   });
 }

@@ -78,7 +78,10 @@ export const passwordLinkCheckSchema = z.strictObject({ token: tokenSchema });
 export const passwordLinkRedeemSchema = z.strictObject({ token: tokenSchema, password: newPasswordSchema });
 export const passwordResetRequestSchema = z.strictObject({ email: emailSchema });
 export const passwordChangeSchema = z.strictObject({
-  currentPassword: z.string({ error: 'Your current password is required.' }).min(1, 'Your current password is required.').max(512),
+  currentPassword: z
+    .string({ error: 'Your current password is required.' })
+    .min(1, 'Your current password is required.')
+    .max(512),
   newPassword: newPasswordSchema,
 });
 

@@ -43,7 +43,9 @@ beforeAll(async () => {
 
 afterAll(() => {
   if (missingHandlers.size > 0) {
-    console.info(`Access table lines whose handler is not written yet (allowed roles got the API's 404):\n  ${[...missingHandlers].sort().join('\n  ')}`);
+    console.info(
+      `Access table lines whose handler is not written yet (allowed roles got the API's 404):\n  ${[...missingHandlers].sort().join('\n  ')}`,
+    );
   }
 });
 

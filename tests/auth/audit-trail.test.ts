@@ -25,7 +25,11 @@ describe('GET /api/audit', () => {
     expect(new Date(denied.at).toISOString()).toBe(denied.at); // UTC instant
 
     const onlyAuth = await admin.get('/api/audit').query({ actor: viewer.user.email, action: 'auth.' });
-    expect(onlyAuth.body.events.map((e: { action: string }) => e.action)).toEqual(['auth.sign_out', 'auth.sign_in_failed', 'auth.sign_in']);
+    expect(onlyAuth.body.events.map((e: { action: string }) => e.action)).toEqual([
+      'auth.sign_out',
+      'auth.sign_in_failed',
+      'auth.sign_in',
+    ]);
     // Passwords never reach the trail.
     expect(JSON.stringify(response.body)).not.toMatch(/wrong but long enough/);
   });
@@ -34,7 +38,11 @@ describe('GET /api/audit', () => {
     const admin = await signInAs(app, 'admin');
     const subject = await createUser('viewer');
     for (let i = 0; i < 3; i++) {
-      await recordAudit(getDb(), { actorId: admin.user.id, actorEmail: admin.user.email }, { action: 'test.paging', entityType: 'user', entityId: subject.id, details: { i } });
+      await recordAudit(
+        getDb(),
+        { actorId: admin.user.id, actorEmail: admin.user.email },
+        { action: 'test.paging', entityType: 'user', entityId: subject.id, details: { i } },
+      );
     }
     const first = await admin.get('/api/audit').query({ entityId: subject.id, limit: 2 });
     expect(first.body.events.map((e: { details: { i: number } }) => e.details.i)).toEqual([2, 1]);

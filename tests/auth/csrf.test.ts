@@ -46,9 +46,15 @@ describe('the Origin check', () => {
 
   it('falls back to the Referer when a browser sends no Origin', async () => {
     const user = await createUser('viewer');
-    const same = await request(app).post('/api/auth/sign-in').set('Referer', `${testOrigin}/sign-in`).send({ email: user.email, password: testPassword });
+    const same = await request(app)
+      .post('/api/auth/sign-in')
+      .set('Referer', `${testOrigin}/sign-in`)
+      .send({ email: user.email, password: testPassword });
     expect(same.status).toBe(200);
-    const other = await request(app).post('/api/auth/sign-in').set('Referer', 'https://evil.example/page').send({ email: user.email, password: testPassword });
+    const other = await request(app)
+      .post('/api/auth/sign-in')
+      .set('Referer', 'https://evil.example/page')
+      .send({ email: user.email, password: testPassword });
     expect(other.status).toBe(403);
   });
 

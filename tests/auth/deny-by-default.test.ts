@@ -56,7 +56,11 @@ describe('a route registered in Express but missing from the access table', () =
       .where(and(eq(auditEvents.action, 'access.denied'), eq(auditEvents.actorId, admin.id)))
       .orderBy(desc(auditEvents.id))
       .limit(1);
-    expect(audit?.details).toMatchObject({ method: 'GET', path: '/api/secret-report', reason: 'route missing from the access table' });
+    expect(audit?.details).toMatchObject({
+      method: 'GET',
+      path: '/api/secret-report',
+      reason: 'route missing from the access table',
+    });
   });
 
   it('does not hide routes that are listed, and answers 404 where nothing is served', async () => {

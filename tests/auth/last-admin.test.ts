@@ -62,7 +62,8 @@ describe('the last active admin', () => {
   it('survives two admins demoting each other at the same moment: exactly one change wins', async () => {
     const a = await signInAs(app, 'admin');
     const b = await signInAs(app, 'admin');
-    const activeAdmins = async () => (await getDb().select().from(users).where(eq(users.role, 'admin'))).filter((u) => !u.disabled);
+    const activeAdmins = async () =>
+      (await getDb().select().from(users).where(eq(users.role, 'admin'))).filter((u) => !u.disabled);
     // Leave exactly these two active admins.
     for (const u of await activeAdmins()) {
       if (u.id !== a.user.id && u.id !== b.user.id) await a.patch(`/api/users/${u.id}`).send({ role: 'viewer' }).expect(200);

@@ -9,7 +9,12 @@ const app = createTestApp();
 describe('sendMail and the mail outbox', () => {
   it('delivers text and HTML over SMTP to the fake server, which stores them before sendMail resolves', async () => {
     const to = `outbox-${Date.now()}@test.slackwater.example`;
-    await sendMail({ to, subject: 'Plan awaiting\r\nBcc: someone@evil.example', text: 'Line one\nLine two', html: '<p>Line one</p>' });
+    await sendMail({
+      to,
+      subject: 'Plan awaiting\r\nBcc: someone@evil.example',
+      text: 'Line one\nLine two',
+      html: '<p>Line one</p>',
+    });
     const mail = await waitForMail(to, { timeoutMs: 0 });
     expect(mail.to).toBe(to);
     // A line break in a subject cannot add a header (ASVS 5.0 1.2.x, header injection).

@@ -62,7 +62,10 @@ describe('an invitation', () => {
     const email = `late-${admin.user.id.slice(0, 8)}@test.slackwater.example`;
     const invite = await admin.post('/api/users').send({ email, name: 'Lars Late', role: 'viewer' });
     const first = tokenFrom((await waitForMail(email)).text);
-    await getDb().update(oneTimeTokens).set({ expiresAt: new Date(Date.now() - 1000) }).where(eq(oneTimeTokens.userId, invite.body.user.id));
+    await getDb()
+      .update(oneTimeTokens)
+      .set({ expiresAt: new Date(Date.now() - 1000) })
+      .where(eq(oneTimeTokens.userId, invite.body.user.id));
     const expired = await post('/api/auth/password-links/redeem').send({ token: first, password: 'low tide over the mudflats' });
     expect(expired.status).toBe(410);
     expect(expired.body.error).toMatch(/expired/);
@@ -73,8 +76,12 @@ describe('an invitation', () => {
     expect((await admin.post(`/api/users/${invite.body.user.id}/invitations`)).status).toBe(202);
     const second = tokenFrom((await waitForMail(email, { sinceId })).text);
     expect(second).not.toBe(first);
-    expect((await post('/api/auth/password-links/redeem').send({ token: first, password: 'low tide over the mudflats' })).status).toBe(400);
-    expect((await post('/api/auth/password-links/redeem').send({ token: second, password: 'low tide over the mudflats' })).status).toBe(204);
+    expect(
+      (await post('/api/auth/password-links/redeem').send({ token: first, password: 'low tide over the mudflats' })).status,
+    ).toBe(400);
+    expect(
+      (await post('/api/auth/password-links/redeem').send({ token: second, password: 'low tide over the mudflats' })).status,
+    ).toBe(204);
   });
 
   it('answers a made-up or truncated token with a clear 4xx', async () => {

@@ -19,7 +19,10 @@ describe('stored password hashes', () => {
 
   it('are what a user signing in through the API gets in the database', async () => {
     const agent = await signInAs(app, 'viewer');
-    await agent.post('/api/auth/password').send({ currentPassword: agent.user.password, newPassword: 'quiet estuary morning fog' }).expect(204);
+    await agent
+      .post('/api/auth/password')
+      .send({ currentPassword: agent.user.password, newPassword: 'quiet estuary morning fog' })
+      .expect(204);
     const [row] = await getDb().select().from(users).where(eq(users.id, agent.user.id));
     expect(row?.passwordHash?.startsWith('$argon2id$v=19$m=19456,t=2,p=1$')).toBe(true);
   });
@@ -50,7 +53,11 @@ describe('the new-password policy', () => {
   it('rejects the demo password printed in the README and context words (ASVS 5.0 6.2.11)', () => {
     expect(passwordProblems('slackwater-demo').length).toBeGreaterThan(0);
     expect(passwordProblems('my slackwater login')).toContain('Do not use the name of this application in your password.');
-    expect(passwordProblems('marina.vale-secret-99', { email: 'marina.vale@example.com' })).toContain('Do not use your e-mail address in your password.');
-    expect(passwordProblems('tidewater-Jonas Berg-1', { name: 'Jonas Berg' })).toContain('Do not use your name in your password.');
+    expect(passwordProblems('marina.vale-secret-99', { email: 'marina.vale@example.com' })).toContain(
+      'Do not use your e-mail address in your password.',
+    );
+    expect(passwordProblems('tidewater-Jonas Berg-1', { name: 'Jonas Berg' })).toContain(
+      'Do not use your name in your password.',
+    );
   });
 });

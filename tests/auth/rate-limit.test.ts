@@ -22,7 +22,9 @@ const signIn = (email: string, password: string, ip: string) =>
 async function insertFailures(n: number, email: string, ip: string, minutesAgo = 1) {
   const at = sql`now() - make_interval(mins => ${minutesAgo})`;
   const rows = Array.from({ length: n }, () => ({ kind: 'sign-in' as const, email, ip, success: false, at }));
-  await getDb().insert(authAttempts).values(rows as never);
+  await getDb()
+    .insert(authAttempts)
+    .values(rows as never);
 }
 
 describe('the per-account limit', () => {

@@ -32,7 +32,10 @@ describe('session lifetime', () => {
 
   it('ends a session left idle past its expiry and clears the cookie', async () => {
     const agent = await signInAs(app, 'viewer');
-    await getDb().update(sessions).set({ expiresAt: new Date(Date.now() - 1000) }).where(eq(sessions.userId, agent.user.id));
+    await getDb()
+      .update(sessions)
+      .set({ expiresAt: new Date(Date.now() - 1000) })
+      .where(eq(sessions.userId, agent.user.id));
     const response = await agent.get('/api/auth/me');
     expect(response.status).toBe(401);
     expect(String(response.headers['set-cookie'])).toMatch(/slackwater_session=;/);
@@ -78,7 +81,9 @@ describe('ending sessions', () => {
     const before = (await getDb().select().from(sessions).where(eq(sessions.userId, user.id))).map((s) => s.id);
     expect(before).toHaveLength(2);
 
-    const changed = await laptop.post('/api/auth/password').send({ currentPassword: user.password, newPassword: 'breakwater lantern seventeen' });
+    const changed = await laptop
+      .post('/api/auth/password')
+      .send({ currentPassword: user.password, newPassword: 'breakwater lantern seventeen' });
     expect(changed.status).toBe(204);
     expect((await phone.get('/api/auth/me')).status).toBe(401);
     expect((await laptop.get('/api/auth/me')).status).toBe(200);
@@ -89,7 +94,9 @@ describe('ending sessions', () => {
 
   it('a wrong current password changes nothing and says which field is wrong', async () => {
     const agent = await signInAs(app, 'viewer');
-    const response = await agent.post('/api/auth/password').send({ currentPassword: 'not my password', newPassword: 'breakwater lantern seventeen' });
+    const response = await agent
+      .post('/api/auth/password')
+      .send({ currentPassword: 'not my password', newPassword: 'breakwater lantern seventeen' });
     expect(response.status).toBe(422);
     expect(response.body.issues).toEqual([{ path: 'currentPassword', message: 'The current password is wrong.' }]);
     expect((await agent.get('/api/auth/me')).status).toBe(200);

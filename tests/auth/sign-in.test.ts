@@ -36,7 +36,10 @@ describe('POST /api/auth/sign-in', () => {
   it('answers an unknown e-mail and a wrong password with the same 401 and body (ASVS 5.0 6.3.8)', async () => {
     const user = await createUser('planner');
     const wrongPassword = await post('/api/auth/sign-in').send({ email: user.email, password: 'not-the-password-at-all' });
-    const unknownEmail = await post('/api/auth/sign-in').send({ email: `nobody-${user.id}@test.slackwater.example`, password: testPassword });
+    const unknownEmail = await post('/api/auth/sign-in').send({
+      email: `nobody-${user.id}@test.slackwater.example`,
+      password: testPassword,
+    });
     expect(wrongPassword.status).toBe(401);
     expect(unknownEmail.status).toBe(401);
     expect(unknownEmail.body).toEqual(wrongPassword.body);
@@ -63,7 +66,10 @@ describe('POST /api/auth/sign-in', () => {
     expect(missing.status).toBe(422);
     expect(missing.body.issues).toContainEqual(expect.objectContaining({ path: 'password' }));
 
-    const longEmail = await post('/api/auth/sign-in').send({ email: `${'x'.repeat(300)}@test.slackwater.example`, password: 'x' });
+    const longEmail = await post('/api/auth/sign-in').send({
+      email: `${'x'.repeat(300)}@test.slackwater.example`,
+      password: 'x',
+    });
     expect(longEmail.status).toBe(422);
     expect(longEmail.body.issues[0].path).toBe('email');
     expect(JSON.stringify(longEmail.body)).not.toMatch(/at .*\.ts:\d+/); // no stack trace
@@ -98,9 +104,14 @@ describe('the session cookie', () => {
 
   it('is Secure with the __Host- prefix when the app is served over HTTPS (ASVS 5.0 3.3.1, 3.3.3)', async () => {
     const origin = 'https://slackwater.test';
-    const httpsApp = createApp(loadConfig({ NODE_ENV: 'test', DATABASE_URL: testDatabaseUrl(), APP_ORIGIN: origin, LOG_LEVEL: 'error' }));
+    const httpsApp = createApp(
+      loadConfig({ NODE_ENV: 'test', DATABASE_URL: testDatabaseUrl(), APP_ORIGIN: origin, LOG_LEVEL: 'error' }),
+    );
     const user = await createUser('viewer');
-    const response = await request(httpsApp).post('/api/auth/sign-in').set('Origin', origin).send({ email: user.email, password: testPassword });
+    const response = await request(httpsApp)
+      .post('/api/auth/sign-in')
+      .set('Origin', origin)
+      .send({ email: user.email, password: testPassword });
     expect(response.status).toBe(200);
     const cookie = String(response.headers['set-cookie']);
     expect(cookie).toMatch(/^__Host-slackwater_session=[a-z0-9]+;/);
@@ -128,7 +139,9 @@ describe('GET /api/auth/me and POST /api/auth/sign-out', () => {
 
   it('answers 401 to an anonymous caller and to a forged session cookie', async () => {
     expect((await request(app).get('/api/auth/me')).status).toBe(401);
-    const forged = await request(app).get('/api/auth/me').set('Cookie', 'slackwater_session=aaaaaaaaaaaaaaaaaaaaaaaaaaaaaaaaaaaaaaaa');
+    const forged = await request(app)
+      .get('/api/auth/me')
+      .set('Cookie', 'slackwater_session=aaaaaaaaaaaaaaaaaaaaaaaaaaaaaaaaaaaaaaaa');
     expect(forged.status).toBe(401);
   });
 

@@ -75,13 +75,23 @@ describe('PATCH /api/users/:id', () => {
     expect(response.status).toBe(200);
     expect(response.body.role).toBe('approver');
     const [event] = await auditFor(user.id);
-    expect(event).toMatchObject({ action: 'user.role_changed', actorEmail: admin.user.email, details: { from: 'viewer', to: 'approver' } });
+    expect(event).toMatchObject({
+      action: 'user.role_changed',
+      actorEmail: admin.user.email,
+      details: { from: 'viewer', to: 'approver' },
+    });
   });
 
   it('refuses an empty patch, an unknown role and unknown fields with 422, changing nothing', async () => {
     const admin = await signInAs(app, 'admin');
     const user = await createUser('viewer');
-    for (const body of [{}, { role: 'owner' }, { passwordHash: 'x' }, { email: 'new@test.slackwater.example' }, { disabled: 'yes' }]) {
+    for (const body of [
+      {},
+      { role: 'owner' },
+      { passwordHash: 'x' },
+      { email: 'new@test.slackwater.example' },
+      { disabled: 'yes' },
+    ]) {
       expect((await admin.patch(`/api/users/${user.id}`).send(body)).status, JSON.stringify(body)).toBe(422);
     }
     const [row] = await getDb().select().from(users).where(eq(users.id, user.id));

@@ -52,7 +52,9 @@ export async function createUser(role: Role = 'planner', overrides: CreateUserOv
   testHash ??= hashPassword(testPassword);
   const passwordHash = overrides.invited ? null : password === testPassword ? await testHash : await hashPassword(password);
   const name = overrides.name ?? `Test ${role} ${id.slice(0, 4)}`;
-  await getDb().insert(users).values({ id, email, name, role, passwordHash, disabled: overrides.disabled ?? false });
+  await getDb()
+    .insert(users)
+    .values({ id, email, name, role, passwordHash, disabled: overrides.disabled ?? false });
   return { id, email, name, role, password };
 }
 

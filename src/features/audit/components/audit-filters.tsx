@@ -29,7 +29,11 @@ export function AuditFilters({ onApply }: { onApply: (filters: AuditFilterValues
   };
   const field = 'flex flex-col gap-1 text-sm font-medium text-ink-800';
   return (
-    <form onSubmit={submit} aria-label="Filter the audit trail" className="flex flex-wrap items-end gap-4 rounded-lg border border-ink-100 bg-white p-4 shadow-sm">
+    <form
+      onSubmit={submit}
+      aria-label="Filter the audit trail"
+      className="flex flex-wrap items-end gap-4 rounded-lg border border-ink-100 bg-white p-4 shadow-sm"
+    >
       <label className={field}>
         Action
         <select value={action} onChange={(e) => setAction(e.target.value)} className={inputClass}>
@@ -42,7 +46,13 @@ export function AuditFilters({ onApply }: { onApply: (filters: AuditFilterValues
       </label>
       <label className={field}>
         Who (e-mail contains)
-        <input type="search" value={actor} maxLength={254} onChange={(e) => setActor(e.target.value)} className={`${inputClass} w-60`} />
+        <input
+          type="search"
+          value={actor}
+          maxLength={254}
+          onChange={(e) => setActor(e.target.value)}
+          className={`${inputClass} w-60`}
+        />
       </label>
       <label className={field}>
         From (day)

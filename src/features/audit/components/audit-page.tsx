@@ -38,7 +38,9 @@ export function AuditPage() {
     <section className="space-y-6">
       <div>
         <h1 className="text-2xl font-semibold text-ink-900">Audit trail</h1>
-        <p className="mt-1 text-ink-700">Who did what and when, from where. Entries are never changed or removed. Times are shown in your time zone.</p>
+        <p className="mt-1 text-ink-700">
+          Who did what and when, from where. Entries are never changed or removed. Times are shown in your time zone.
+        </p>
       </div>
       <AuditFilters onApply={setFilters} />
       {query.isPending && <LoadingState label="Loading the audit trail…" />}
@@ -66,7 +68,12 @@ export function AuditPage() {
         </div>
       )}
       {query.hasNextPage && (
-        <button type="button" onClick={() => void query.fetchNextPage()} disabled={query.isFetchingNextPage} className={buttonClass.secondary}>
+        <button
+          type="button"
+          onClick={() => void query.fetchNextPage()}
+          disabled={query.isFetchingNextPage}
+          className={buttonClass.secondary}
+        >
           {query.isFetchingNextPage ? 'Loading…' : 'Show older entries'}
         </button>
       )}

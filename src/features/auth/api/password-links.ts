@@ -15,6 +15,7 @@ export const usePasswordLink = (token: string | null) =>
   });
 
 /** `POST /api/auth/password-links/redeem`: sets the password; the link then stops working. */
-export const redeemPasswordLink = (body: { token: string; password: string }) => api.post<void>('/api/auth/password-links/redeem', body);
+export const redeemPasswordLink = (body: { token: string; password: string }) =>
+  api.post<void>('/api/auth/password-links/redeem', body);
 
 export const useRedeemPasswordLink = () => useMutation({ mutationFn: redeemPasswordLink });

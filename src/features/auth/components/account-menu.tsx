@@ -51,7 +51,10 @@ export function AccountMenu({ user }: { user: AuthUser }) {
         onClick={() => setOpen((o) => !o)}
         className="flex items-center gap-2 rounded-full py-1 pr-3 pl-1 text-sm text-ink-50 hover:bg-ink-800"
       >
-        <span aria-hidden="true" className="grid h-8 w-8 place-items-center rounded-full bg-seaglass-600 text-xs font-bold text-white">
+        <span
+          aria-hidden="true"
+          className="grid h-8 w-8 place-items-center rounded-full bg-seaglass-600 text-xs font-bold text-white"
+        >
           {initials(user.name)}
         </span>
         <span className="hidden text-left leading-tight sm:block">
@@ -61,19 +64,31 @@ export function AccountMenu({ user }: { user: AuthUser }) {
         <span className="sr-only">Account menu</span>
       </button>
       {open && (
-        <div id={panelId} className="absolute right-0 z-20 mt-2 w-72 rounded-lg border border-ink-100 bg-white py-2 text-ink-900 shadow-lg">
+        <div
+          id={panelId}
+          className="absolute right-0 z-20 mt-2 w-72 rounded-lg border border-ink-100 bg-white py-2 text-ink-900 shadow-lg"
+        >
           <p className="border-b border-ink-100 px-4 pb-2 text-sm">
             Signed in as <span className="font-medium break-all">{user.email}</span>
             <span className="mt-0.5 block text-xs text-ink-500">Role: {roleLabels[user.role]}</span>
           </p>
           <ul className="pt-1 text-sm">
             <li>
-              <Link to="/account/password" onClick={() => setOpen(false)} className="block px-4 py-2 hover:bg-ink-50 focus-visible:bg-ink-50">
+              <Link
+                to="/account/password"
+                onClick={() => setOpen(false)}
+                className="block px-4 py-2 hover:bg-ink-50 focus-visible:bg-ink-50"
+              >
                 Change password
               </Link>
             </li>
             <li>
-              <button type="button" onClick={doSignOut} disabled={signOut.isPending} className="block w-full px-4 py-2 text-left hover:bg-ink-50">
+              <button
+                type="button"
+                onClick={doSignOut}
+                disabled={signOut.isPending}
+                className="block w-full px-4 py-2 text-left hover:bg-ink-50"
+              >
                 {signOut.isPending ? 'Signing out…' : 'Sign out'}
               </button>
             </li>

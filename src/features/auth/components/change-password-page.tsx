@@ -1,5 +1,6 @@
 import { useState, type FormEvent } from 'react';
-import { FormField, buttonClass, describedBy, inputClass } from '@/components/form-field';
+import { buttonClass } from '@/components/form-field';
+import { Notice, TextField } from '@/components/text-field';
 import { useChangePassword } from '../api/change-password';
 import { fieldError, formError } from './field-errors';
 import { NewPasswordFields, newPasswordErrors, type NewPassword } from './new-password-fields';
@@ -36,36 +37,25 @@ export function ChangePasswordPage() {
         <h1 className="text-2xl font-semibold text-ink-900">Change your password</h1>
         <p className="mt-1 text-ink-700">Other browsers signed in to your account are signed out.</p>
       </div>
-      {change.isSuccess && (
-        <p role="status" className="rounded border border-seaglass-500 bg-seaglass-100 px-3 py-2 text-ink-900">
-          Your password is changed. Other sessions were ended.
-        </p>
-      )}
+      {change.isSuccess && <Notice tone="success">Your password is changed. Other sessions were ended.</Notice>}
       <form onSubmit={submit} noValidate className="space-y-5 rounded-lg border border-ink-100 bg-white p-6 shadow-sm">
-        <FormField id="current-password" label="Current password" error={currentError}>
-          <input
-            id="current-password"
-            type="password"
-            autoComplete="current-password"
-            required
-            value={current}
-            onChange={(e) => setCurrent(e.target.value)}
-            className={inputClass}
-            aria-invalid={!!currentError}
-            aria-describedby={describedBy('current-password', { error: currentError })}
-          />
-        </FormField>
+        <TextField
+          id="current-password"
+          label="Current password"
+          type="password"
+          autoComplete="current-password"
+          required
+          value={current}
+          onValue={setCurrent}
+          error={currentError}
+        />
         <NewPasswordFields
           idPrefix="change"
           value={value}
           onChange={setValue}
           errors={{ password: local.password ?? fieldError(change.error, 'newPassword'), confirm: local.confirm }}
         />
-        {message && (
-          <p role="alert" className="rounded border border-brick-600 bg-brick-100 px-3 py-2 text-sm text-brick-700">
-            {message}
-          </p>
-        )}
+        {message && <Notice tone="error">{message}</Notice>}
         <button type="submit" disabled={change.isPending} className={buttonClass.primary}>
           {change.isPending ? 'Saving…' : 'Change password'}
         </button>

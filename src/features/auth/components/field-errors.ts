@@ -10,7 +10,8 @@ export function fieldError(error: unknown, field: string): string | undefined {
 /** The error's sentence for the form as a whole, unless every issue sits beside a field. */
 export function formError(error: unknown, fields: readonly string[]): string | undefined {
   if (!error) return undefined;
-  if (error instanceof ApiError && error.issues.length > 0 && error.issues.every((i) => i.path && fields.includes(i.path))) return undefined;
+  if (error instanceof ApiError && error.issues.length > 0 && error.issues.every((i) => i.path && fields.includes(i.path)))
+    return undefined;
   return error instanceof Error ? error.message : 'Something went wrong. Try again.';
 }
 

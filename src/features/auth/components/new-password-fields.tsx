@@ -1,5 +1,5 @@
 import { newPasswordSchema, passwordRules } from '@shared/schemas/auth';
-import { FormField, describedBy, inputClass } from '@/components/form-field';
+import { TextField } from '@/components/text-field';
 
 export interface NewPassword {
   password: string;
@@ -29,36 +29,29 @@ export function NewPasswordFields({
   onChange: (next: NewPassword) => void;
   errors: { password?: string | undefined; confirm?: string | undefined };
 }) {
-  const pid = `${idPrefix}-password`;
-  const cid = `${idPrefix}-confirm`;
   return (
     <>
-      <FormField id={pid} label="New password" hint={hint} error={errors.password}>
-        <input
-          id={pid}
-          type="password"
-          autoComplete="new-password"
-          required
-          value={value.password}
-          onChange={(e) => onChange({ ...value, password: e.target.value })}
-          className={inputClass}
-          aria-invalid={!!errors.password}
-          aria-describedby={describedBy(pid, { error: errors.password, hint })}
-        />
-      </FormField>
-      <FormField id={cid} label="New password again" error={errors.confirm}>
-        <input
-          id={cid}
-          type="password"
-          autoComplete="new-password"
-          required
-          value={value.confirm}
-          onChange={(e) => onChange({ ...value, confirm: e.target.value })}
-          className={inputClass}
-          aria-invalid={!!errors.confirm}
-          aria-describedby={describedBy(cid, { error: errors.confirm })}
-        />
-      </FormField>
+      <TextField
+        id={`${idPrefix}-password`}
+        label="New password"
+        type="password"
+        autoComplete="new-password"
+        required
+        hint={hint}
+        value={value.password}
+        onValue={(password) => onChange({ ...value, password })}
+        error={errors.password}
+      />
+      <TextField
+        id={`${idPrefix}-confirm`}
+        label="New password again"
+        type="password"
+        autoComplete="new-password"
+        required
+        value={value.confirm}
+        onValue={(confirm) => onChange({ ...value, confirm })}
+        error={errors.confirm}
+      />
     </>
   );
 }

@@ -1,5 +1,6 @@
 import { useState, type FormEvent } from 'react';
 import { Link, useNavigate } from 'react-router-dom';
+import { Notice } from '@/components/text-field';
 import { usePasswordLink, useRedeemPasswordLink } from '../api/password-links';
 import { AuthFrame, wideButton } from './auth-frame';
 import { fieldError, formError } from './field-errors';
@@ -30,7 +31,10 @@ export function SetPasswordPage() {
     if (!token || Object.keys(newPasswordErrors(value)).length > 0) return;
     redeem.mutate(
       { token, password: value.password },
-      { onSuccess: () => void navigate('/sign-in', { replace: true, state: { notice: 'Your password is set. Sign in with it now.' } }) },
+      {
+        onSuccess: () =>
+          void navigate('/sign-in', { replace: true, state: { notice: 'Your password is set. Sign in with it now.' } }),
+      },
     );
   };
 
@@ -38,9 +42,7 @@ export function SetPasswordPage() {
     const reason = link.error instanceof Error ? link.error.message : 'This page needs the link from your e-mail.';
     return (
       <AuthFrame title="This link does not work">
-        <p role="alert" className="rounded border border-brick-600 bg-brick-100 px-3 py-3 text-ink-900">
-          {reason}
-        </p>
+        <Notice tone="error">{reason}</Notice>
         <p className="mt-6 text-sm text-ink-700">
           <Link to="/forgot-password" className="font-medium text-seaglass-700 underline underline-offset-2">
             Ask for a new link
@@ -77,11 +79,7 @@ export function SetPasswordPage() {
           onChange={setValue}
           errors={{ password: local.password ?? fieldError(redeem.error, 'password'), confirm: local.confirm }}
         />
-        {message && (
-          <p role="alert" className="rounded border border-brick-600 bg-brick-100 px-3 py-2 text-sm text-brick-700">
-            {message}
-          </p>
-        )}
+        {message && <Notice tone="error">{message}</Notice>}
         <button type="submit" disabled={redeem.isPending} className={wideButton}>
           {redeem.isPending ? 'Saving…' : invite ? 'Set my password' : 'Save the new password'}
         </button>

@@ -1,6 +1,6 @@
 import { useState, type FormEvent } from 'react';
 import { Link, Navigate, useLocation, useNavigate, useSearchParams } from 'react-router-dom';
-import { FormField, describedBy, inputClass } from '@/components/form-field';
+import { Notice, TextField } from '@/components/text-field';
 import { useMe } from '../api/get-me';
 import { useSignIn } from '../api/sign-in';
 import { AuthFrame, wideButton } from './auth-frame';
@@ -30,48 +30,41 @@ export function SignInPage() {
   return (
     <AuthFrame title="Sign in" intro="Plan, check and sign off battery dispatch schedules.">
       {notice && (
-        <p role="status" className="mb-6 rounded border border-seaglass-500 bg-seaglass-100 px-3 py-2 text-sm text-ink-900">
-          {notice}
-        </p>
+        <div className="mb-6">
+          <Notice tone="success">{notice}</Notice>
+        </div>
       )}
       <form onSubmit={submit} noValidate className="space-y-5">
-        <FormField id="sign-in-email" label="E-mail address" error={emailError}>
-          <input
-            id="sign-in-email"
-            type="email"
-            autoComplete="username"
-            required
-            value={email}
-            onChange={(e) => setEmail(e.target.value)}
-            className={inputClass}
-            aria-invalid={!!emailError}
-            aria-describedby={describedBy('sign-in-email', { error: emailError })}
-          />
-        </FormField>
-        <FormField id="sign-in-password" label="Password" error={passwordError}>
-          <input
-            id="sign-in-password"
-            type="password"
-            autoComplete="current-password"
-            required
-            value={password}
-            onChange={(e) => setPassword(e.target.value)}
-            className={inputClass}
-            aria-invalid={!!passwordError}
-            aria-describedby={describedBy('sign-in-password', { error: passwordError })}
-          />
-        </FormField>
-        {message && (
-          <p role="alert" className="rounded border border-brick-600 bg-brick-100 px-3 py-2 text-sm text-brick-700">
-            {message}
-          </p>
-        )}
+        <TextField
+          id="sign-in-email"
+          label="E-mail address"
+          type="email"
+          autoComplete="username"
+          required
+          value={email}
+          onValue={setEmail}
+          error={emailError}
+        />
+        <TextField
+          id="sign-in-password"
+          label="Password"
+          type="password"
+          autoComplete="current-password"
+          required
+          value={password}
+          onValue={setPassword}
+          error={passwordError}
+        />
+        {message && <Notice tone="error">{message}</Notice>}
         <button type="submit" disabled={signIn.isPending} className={wideButton}>
           {signIn.isPending ? 'Signing in…' : 'Sign in'}
         </button>
       </form>
       <p className="mt-6 text-sm text-ink-700">
-        <Link to="/forgot-password" className="font-medium text-seaglass-700 underline underline-offset-2 hover:text-seaglass-600">
+        <Link
+          to="/forgot-password"
+          className="font-medium text-seaglass-700 underline underline-offset-2 hover:text-seaglass-600"
+        >
           Forgot your password?
         </Link>
       </p>

@@ -27,7 +27,13 @@ export function TideIllustration() {
         <line key={y} x1="0" x2={width} y1={y} y2={y} stroke="#2a4470" strokeWidth="1" strokeDasharray="2 6" />
       ))}
       <path d={`${path(upper)} ${path(lower).replace('M', 'L')} Z`} fill="#45b394" fillOpacity="0.18" />
-      <path d={path(xs.map((x) => [x, steady(x)] as const))} fill="none" stroke="#98dcc6" strokeWidth="1.5" strokeDasharray="5 5" />
+      <path
+        d={path(xs.map((x) => [x, steady(x)] as const))}
+        fill="none"
+        stroke="#98dcc6"
+        strokeWidth="1.5"
+        strokeDasharray="5 5"
+      />
       <path d={path(soc.filter(([x]) => x <= 340))} fill="none" stroke="#45b394" strokeWidth="3.5" strokeLinecap="round" />
       <path d={path(leaving)} fill="none" stroke="#e0961f" strokeWidth="3.5" strokeLinecap="round" />
     </svg>

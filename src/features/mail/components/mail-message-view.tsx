@@ -45,7 +45,12 @@ export function MailMessageView({ id }: { id: number | null }) {
         <details className="text-sm">
           <summary className="cursor-pointer text-ink-700">HTML version</summary>
           {/* sandbox without permissions: no scripts, no forms, no navigation of this page */}
-          <iframe title={`HTML version of ${m.subject}`} sandbox="" srcDoc={m.html} className="mt-2 h-80 w-full rounded border border-ink-100 bg-white" />
+          <iframe
+            title={`HTML version of ${m.subject}`}
+            sandbox=""
+            srcDoc={m.html}
+            className="mt-2 h-80 w-full rounded border border-ink-100 bg-white"
+          />
         </details>
       )}
     </article>

@@ -15,7 +15,8 @@ export function MailOutboxPage() {
       <div>
         <h1 className="text-2xl font-semibold text-ink-900">Mail outbox</h1>
         <p className="mt-1 text-ink-700">
-          Every e-mail Slackwater sent through the local test mail server: invitations, password links, sign-off notices. Nothing here left this machine.
+          Every e-mail Slackwater sent through the local test mail server: invitations, password links, sign-off notices. Nothing
+          here left this machine.
         </p>
       </div>
       <label className="flex max-w-sm flex-col gap-1 text-sm font-medium text-ink-800">
@@ -24,10 +25,15 @@ export function MailOutboxPage() {
       </label>
       {outbox.isPending && <LoadingState label="Loading the outbox…" />}
       {outbox.isError && <ErrorState error={outbox.error} onRetry={() => void outbox.refetch()} />}
-      {outbox.data?.length === 0 && <EmptyState title="No e-mail yet.">Invite a user or ask for a password reset to see one here.</EmptyState>}
+      {outbox.data?.length === 0 && (
+        <EmptyState title="No e-mail yet.">Invite a user or ask for a password reset to see one here.</EmptyState>
+      )}
       {outbox.data && outbox.data.length > 0 && (
         <div className="grid overflow-hidden rounded-lg border border-ink-100 bg-white shadow-sm lg:grid-cols-[minmax(0,2fr)_minmax(0,3fr)]">
-          <ul aria-label="Messages, newest first" className="max-h-[70vh] divide-y divide-ink-100 overflow-y-auto border-ink-100 lg:border-r">
+          <ul
+            aria-label="Messages, newest first"
+            className="max-h-[70vh] divide-y divide-ink-100 overflow-y-auto border-ink-100 lg:border-r"
+          >
             {outbox.data.map((m) => (
               <li key={m.id}>
                 <button

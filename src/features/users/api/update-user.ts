@@ -2,7 +2,8 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { UpdateUserRequest, User } from '@shared/schemas/users';
 import { api } from '@/lib/api-client';
 
-export const updateUser = ({ id, ...patch }: UpdateUserRequest & { id: string }) => api.patch<User>(`/api/users/${encodeURIComponent(id)}`, patch);
+export const updateUser = ({ id, ...patch }: UpdateUserRequest & { id: string }) =>
+  api.patch<User>(`/api/users/${encodeURIComponent(id)}`, patch);
 
 export function useUpdateUser() {
   const queryClient = useQueryClient();

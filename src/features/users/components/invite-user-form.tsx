@@ -1,11 +1,17 @@
 import { useState, type FormEvent } from 'react';
 import { roleLabels, roles, type Role } from '@shared/schemas/auth';
-import { FormField, buttonClass, describedBy, inputClass } from '@/components/form-field';
+import { FormField, buttonClass, inputClass } from '@/components/form-field';
+import { TextField } from '@/components/text-field';
 import { ApiError } from '@/lib/api-client';
 import { useInviteUser } from '../api/invite-user';
 
 const issueFor = (error: unknown, path: string) =>
-  error instanceof ApiError ? error.issues.filter((i) => i.path === path).map((i) => i.message).join(' ') || undefined : undefined;
+  error instanceof ApiError
+    ? error.issues
+        .filter((i) => i.path === path)
+        .map((i) => i.message)
+        .join(' ') || undefined
+    : undefined;
 
 /** Invite someone by e-mail with a role; they choose their password through the link. */
 export function InviteUserForm() {
@@ -15,41 +21,49 @@ export function InviteUserForm() {
     event.preventDefault();
     invite.mutate(form, { onSuccess: () => setForm({ email: '', name: '', role: form.role }) });
   };
-  const errors = { email: issueFor(invite.error, 'email'), name: issueFor(invite.error, 'name'), role: issueFor(invite.error, 'role') };
+  const errors = {
+    email: issueFor(invite.error, 'email'),
+    name: issueFor(invite.error, 'name'),
+    role: issueFor(invite.error, 'role'),
+  };
   const general = invite.error instanceof ApiError && invite.error.issues.length === 0 ? invite.error.message : undefined;
 
   return (
-    <form onSubmit={submit} noValidate aria-labelledby="invite-heading" className="rounded-lg border border-ink-100 bg-white p-5 shadow-sm">
+    <form
+      onSubmit={submit}
+      noValidate
+      aria-labelledby="invite-heading"
+      className="rounded-lg border border-ink-100 bg-white p-5 shadow-sm"
+    >
       <h2 id="invite-heading" className="text-lg font-semibold text-ink-900">
         Invite a user
       </h2>
       <div className="mt-4 grid gap-4 md:grid-cols-[2fr_2fr_1fr_auto] md:items-start">
-        <FormField id="invite-email" label="E-mail address" error={errors.email}>
-          <input
-            id="invite-email"
-            type="email"
-            required
-            value={form.email}
-            onChange={(e) => setForm({ ...form, email: e.target.value })}
-            className={inputClass}
-            aria-invalid={!!errors.email}
-            aria-describedby={describedBy('invite-email', { error: errors.email })}
-          />
-        </FormField>
-        <FormField id="invite-name" label="Name" error={errors.name}>
-          <input
-            id="invite-name"
-            required
-            maxLength={100}
-            value={form.name}
-            onChange={(e) => setForm({ ...form, name: e.target.value })}
-            className={inputClass}
-            aria-invalid={!!errors.name}
-            aria-describedby={describedBy('invite-name', { error: errors.name })}
-          />
-        </FormField>
+        <TextField
+          id="invite-email"
+          label="E-mail address"
+          type="email"
+          required
+          value={form.email}
+          onValue={(email) => setForm({ ...form, email })}
+          error={errors.email}
+        />
+        <TextField
+          id="invite-name"
+          label="Name"
+          required
+          maxLength={100}
+          value={form.name}
+          onValue={(name) => setForm({ ...form, name })}
+          error={errors.name}
+        />
         <FormField id="invite-role" label="Role" error={errors.role}>
-          <select id="invite-role" value={form.role} onChange={(e) => setForm({ ...form, role: e.target.value as Role })} className={inputClass}>
+          <select
+            id="invite-role"
+            value={form.role}
+            onChange={(e) => setForm({ ...form, role: e.target.value as Role })}
+            className={inputClass}
+          >
             {roles.map((r) => (
               <option key={r} value={r}>
                 {roleLabels[r]}

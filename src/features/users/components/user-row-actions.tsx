@@ -49,19 +49,29 @@ export function UserActions({ user, report, lastAdmin }: { user: User; report: R
     update.mutate(
       { id: user.id, disabled: !disabled },
       {
-        onSuccess: () => report(disabled ? `${user.email} can sign in again.` : `${user.email} is disabled and was signed out.`, 'ok'),
+        onSuccess: () =>
+          report(disabled ? `${user.email} can sign in again.` : `${user.email} is disabled and was signed out.`, 'ok'),
         onError: (e) => report(e.message, 'error'),
       },
     );
   const sendLink = () =>
     resend.mutate(user.id, {
-      onSuccess: (r) => report(r.mail === 'sent' ? `A new invitation link went to ${user.email}.` : 'The e-mail could not be sent.', r.mail === 'sent' ? 'ok' : 'error'),
+      onSuccess: (r) =>
+        report(
+          r.mail === 'sent' ? `A new invitation link went to ${user.email}.` : 'The e-mail could not be sent.',
+          r.mail === 'sent' ? 'ok' : 'error',
+        ),
       onError: (e) => report(e.message, 'error'),
     });
   return (
     <div className="flex flex-wrap gap-2">
       {user.status === 'invited' && (
-        <button type="button" onClick={sendLink} disabled={resend.isPending} className={buttonClass.secondary.replace('px-4 py-2', 'px-3 py-1')}>
+        <button
+          type="button"
+          onClick={sendLink}
+          disabled={resend.isPending}
+          className={buttonClass.secondary.replace('px-4 py-2', 'px-3 py-1')}
+        >
           Send a new link<span className="sr-only"> to {user.email}</span>
         </button>
       )}
@@ -70,7 +80,11 @@ export function UserActions({ user, report, lastAdmin }: { user: User; report: R
         onClick={toggle}
         disabled={update.isPending || lastAdmin}
         title={lastAdmin ? lastAdminHint : undefined}
-        className={disabled ? buttonClass.secondary.replace('px-4 py-2', 'px-3 py-1') : buttonClass.danger.replace('px-3 py-1.5', 'px-3 py-1')}
+        className={
+          disabled
+            ? buttonClass.secondary.replace('px-4 py-2', 'px-3 py-1')
+            : buttonClass.danger.replace('px-3 py-1.5', 'px-3 py-1')
+        }
       >
         {disabled ? 'Enable' : 'Disable'}
         <span className="sr-only"> {user.email}</span>

@@ -49,18 +49,29 @@ function buildColumns(report: ReportOutcome) {
       header: 'Role',
       filterFn: 'equalsString',
       sortFn: 'alphanumeric',
-      cell: (ctx) => <RoleSelect user={ctx.row.original} report={report} lastAdmin={isLastAdmin(ctx.row.original, ctx.table.options.data)} />,
+      cell: (ctx) => (
+        <RoleSelect user={ctx.row.original} report={report} lastAdmin={isLastAdmin(ctx.row.original, ctx.table.options.data)} />
+      ),
     }),
     helper.accessor('status', {
       header: 'Status',
       filterFn: 'equalsString',
-      cell: (ctx) => <span className={`rounded-full px-2 py-0.5 text-xs font-semibold ${statusStyle[ctx.getValue()]}`}>{ctx.getValue()}</span>,
+      cell: (ctx) => (
+        <span className={`rounded-full px-2 py-0.5 text-xs font-semibold ${statusStyle[ctx.getValue()]}`}>{ctx.getValue()}</span>
+      ),
     }),
-    helper.accessor('lastSignInAt', { header: 'Last sign-in', sortFn: 'datetime', sortUndefined: 'last', cell: (ctx) => formatTime(ctx.getValue()) }),
+    helper.accessor('lastSignInAt', {
+      header: 'Last sign-in',
+      sortFn: 'datetime',
+      sortUndefined: 'last',
+      cell: (ctx) => formatTime(ctx.getValue()),
+    }),
     helper.display({
       id: 'actions',
       header: 'Actions',
-      cell: (ctx) => <UserActions user={ctx.row.original} report={report} lastAdmin={isLastAdmin(ctx.row.original, ctx.table.options.data)} />,
+      cell: (ctx) => (
+        <UserActions user={ctx.row.original} report={report} lastAdmin={isLastAdmin(ctx.row.original, ctx.table.options.data)} />
+      ),
     }),
   ]);
 }
@@ -84,11 +95,20 @@ export function UsersTable({ users, report }: { users: User[]; report: ReportOut
       <div className="flex flex-wrap items-end gap-4">
         <label className="flex flex-col gap-1 text-sm font-medium text-ink-800">
           Search name or e-mail
-          <input type="search" value={String(table.state.globalFilter ?? '')} onChange={(e) => table.setGlobalFilter(e.target.value)} className={`${inputClass} w-64`} />
+          <input
+            type="search"
+            value={String(table.state.globalFilter ?? '')}
+            onChange={(e) => table.setGlobalFilter(e.target.value)}
+            className={`${inputClass} w-64`}
+          />
         </label>
         <label className="flex flex-col gap-1 text-sm font-medium text-ink-800">
           Role
-          <select value={(roleColumn?.getFilterValue() as string | undefined) ?? ''} onChange={(e) => roleColumn?.setFilterValue(e.target.value || undefined)} className={inputClass}>
+          <select
+            value={(roleColumn?.getFilterValue() as string | undefined) ?? ''}
+            onChange={(e) => roleColumn?.setFilterValue(e.target.value || undefined)}
+            className={inputClass}
+          >
             <option value="">All roles</option>
             {roles.map((r) => (
               <option key={r} value={r}>
@@ -99,7 +119,11 @@ export function UsersTable({ users, report }: { users: User[]; report: ReportOut
         </label>
         <label className="flex flex-col gap-1 text-sm font-medium text-ink-800">
           Status
-          <select value={(statusColumn?.getFilterValue() as string | undefined) ?? ''} onChange={(e) => statusColumn?.setFilterValue(e.target.value || undefined)} className={inputClass}>
+          <select
+            value={(statusColumn?.getFilterValue() as string | undefined) ?? ''}
+            onChange={(e) => statusColumn?.setFilterValue(e.target.value || undefined)}
+            className={inputClass}
+          >
             <option value="">All</option>
             {userStatuses.map((s) => (
               <option key={s} value={s}>
@@ -120,9 +144,18 @@ export function UsersTable({ users, report }: { users: User[]; report: ReportOut
                 {group.headers.map((header) => {
                   const sorted = header.column.getIsSorted();
                   return (
-                    <th key={header.id} scope="col" aria-sort={sorted ? (sorted === 'asc' ? 'ascending' : 'descending') : undefined} className="px-4 py-2 font-semibold">
+                    <th
+                      key={header.id}
+                      scope="col"
+                      aria-sort={sorted ? (sorted === 'asc' ? 'ascending' : 'descending') : undefined}
+                      className="px-4 py-2 font-semibold"
+                    >
                       {header.column.getCanSort() ? (
-                        <button type="button" onClick={header.column.getToggleSortingHandler()} className="inline-flex items-center gap-1 hover:text-ink-900">
+                        <button
+                          type="button"
+                          onClick={header.column.getToggleSortingHandler()}
+                          className="inline-flex items-center gap-1 hover:text-ink-900"
+                        >
                           <table.FlexRender header={header} />
                           <span aria-hidden="true" className="text-xs text-ink-500">
                             {sorted === 'asc' ? '▲' : sorted === 'desc' ? '▼' : '↕'}
