@@ -1,8 +1,10 @@
 /**
  * Micro benchmark of the exact dynamic program against plain GLPK (issue 9),
  * for `npm run bench`. Pure computation on an invented, seeded year; prints
- * nothing itself. DP times are the best of `repeats` runs (the first runs
- * include JIT compilation); GLPK baselines run once in the same process.
+ * nothing itself. Times are process CPU milliseconds (the 2-core machine is
+ * often shared, which inflates wall-clock times far more); DP times are the
+ * best of `repeats` runs (the first runs include JIT compilation); GLPK
+ * baselines run once in the same process.
  */
 import type { DispatchProblem, TerminalRule } from '../types';
 import { glpk } from '../lp/solver-runtime';
@@ -16,7 +18,7 @@ export interface DpBenchOptions {
   readonly problem?: DispatchProblem;
   /** DP timings are the best of this many runs (default 5). */
   readonly repeats?: number;
-  /** Measure the GLPK baselines here (default true); or pass figures measured elsewhere in the same run. */
+  /** Measure the GLPK baselines here (default true); or pass CPU milliseconds measured elsewhere in the same run. */
   readonly glpk?: boolean | { readonly yearMs: number; readonly loopMs: Readonly<Record<number, number>> };
   /** Closed-loop horizons compared with a plain GLPK loop, hours (default [24, 168]). */
   readonly loopHorizonsHours?: readonly number[];
@@ -24,6 +26,7 @@ export interface DpBenchOptions {
   readonly glpkLoopEvery?: number;
 }
 
+/** All times are process CPU milliseconds. */
 export interface DpBenchResult {
   readonly steps: number;
   readonly reference: { readonly dpMs: number; readonly glpkMs: number | null; readonly dpShareOfGlpkPct: number | null };
@@ -78,13 +81,17 @@ export function inventedYear(seed = 2026): DispatchProblem {
   };
 }
 
+/** Process CPU milliseconds of one call. */
+function cpuMs(run: () => void): number {
+  const before = process.cpuUsage();
+  run();
+  const used = process.cpuUsage(before);
+  return (used.user + used.system) / 1000;
+}
+
 function bestOf(repeats: number, run: () => void): number {
   let best = Infinity;
-  for (let i = 0; i < repeats; i++) {
-    const t0 = performance.now();
-    run();
-    best = Math.min(best, performance.now() - t0);
-  }
+  for (let i = 0; i < repeats; i++) best = Math.min(best, cpuMs(run));
   return best;
 }
 
@@ -110,16 +117,17 @@ function glpkSolve(p: DispatchProblem): number {
  */
 function glpkLoopMs(p: DispatchProblem, horizon: number, every: number, dpSoc: readonly number[]): number {
   const n = p.priceImport.length;
-  const t0 = performance.now();
-  let e = p.initialEnergyKwh;
   let solved = 0;
-  for (let s = 0; s < n; s += every) {
-    const e1 = glpkSolve(windowOf(p, s, Math.min(n, s + horizon), every === 1 ? e : (dpSoc[s] ?? e)));
-    if (every === 1) e = e1;
-    solved++;
-  }
+  const ms = cpuMs(() => {
+    let e = p.initialEnergyKwh;
+    for (let s = 0; s < n; s += every) {
+      const e1 = glpkSolve(windowOf(p, s, Math.min(n, s + horizon), every === 1 ? e : (dpSoc[s] ?? e)));
+      if (every === 1) e = e1;
+      solved++;
+    }
+  });
   // One window per step when re-planning every step.
-  return ((performance.now() - t0) * n) / solved;
+  return (ms * n) / solved;
 }
 
 /** Runs the DP figures of issue 9 (and, unless given, their GLPK baselines). */
@@ -132,11 +140,7 @@ export function benchDp(options: DpBenchOptions = {}): DpBenchResult {
   const measure = options.glpk !== false && given === null;
   const dpMs = bestOf(repeats * 3, () => solveDispatchDp(p));
   let glpkYearMs: number | null = given?.yearMs ?? null;
-  if (measure) {
-    const t0 = performance.now();
-    glpkSolve(p);
-    glpkYearMs = performance.now() - t0;
-  }
+  if (measure) glpkYearMs = cpuMs(() => glpkSolve(p));
   const loop = createDpClosedLoop(p);
   const closedLoop = (options.loopHorizonsHours ?? [24, 168]).map((hours) => {
     const h = steps(hours);
