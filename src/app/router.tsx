@@ -1,4 +1,6 @@
+import type { ComponentType } from 'react';
 import { createBrowserRouter, RouterProvider } from 'react-router-dom';
+import { LoadingState } from '@/components/query-state';
 import { SignInPage } from '@/features/auth/components/sign-in-page';
 import { ForgotPasswordPage } from '@/features/auth/components/forgot-password-page';
 import { SetPasswordPage } from '@/features/auth/components/set-password-page';
@@ -26,6 +28,11 @@ const nav: RoleNavItem[] = [
   { to: '/audit', label: 'Audit', action: 'audit.read' },
   { to: '/mail', label: 'Mail outbox', action: 'mail.read' },
 ];
+
+/** A page loaded on first visit, with a loading state while its code arrives on a first page load. */
+function lazyPage(load: () => Promise<ComponentType>) {
+  return { lazy: () => load().then((Component) => ({ Component })), hydrateFallbackElement: <LoadingState /> };
+}
 
 /** Routes only compose features; each feature adds its pages here. */
 const router = createBrowserRouter([
@@ -64,20 +71,20 @@ const router = createBrowserRouter([
         ),
       },
       // Sites, batteries and profiles: loaded on first visit, so charts and tables stay out of the first bundle.
-      { path: 'sites', lazy: () => import('./routes/sites').then((m) => ({ Component: m.SitesRoute })) },
-      { path: 'sites/:id', lazy: () => import('./routes/site').then((m) => ({ Component: m.SiteRoute })) },
-      { path: 'batteries/:id', lazy: () => import('./routes/battery').then((m) => ({ Component: m.BatteryRoute })) },
-      { path: 'profiles', lazy: () => import('./routes/profiles').then((m) => ({ Component: m.ProfilesRoute })) },
-      { path: 'profiles/:id', lazy: () => import('./routes/profile').then((m) => ({ Component: m.ProfileRoute })) },
+      { path: 'sites', ...lazyPage(() => import('./routes/sites').then((m) => m.SitesRoute)) },
+      { path: 'sites/:id', ...lazyPage(() => import('./routes/site').then((m) => m.SiteRoute)) },
+      { path: 'batteries/:id', ...lazyPage(() => import('./routes/battery').then((m) => m.BatteryRoute)) },
+      { path: 'profiles', ...lazyPage(() => import('./routes/profiles').then((m) => m.ProfilesRoute)) },
+      { path: 'profiles/:id', ...lazyPage(() => import('./routes/profile').then((m) => m.ProfileRoute)) },
       { path: 'sign-off', lazy: () => import('./routes/sign-off').then((m) => ({ Component: m.SignOffRoute })) },
       // Plans and horizon studies: loaded on first visit (charts and tables stay out of the first bundle).
-      { path: 'plans', lazy: () => import('@/features/plans/components/plans-page').then((m) => ({ Component: m.PlansPage })) },
-      { path: 'plans/new', lazy: () => import('@/features/plans/components/new-plan-page').then((m) => ({ Component: m.NewPlanPage })) },
-      { path: 'plans/compare', lazy: () => import('@/features/plans/components/compare-page').then((m) => ({ Component: m.ComparePage })) },
-      { path: 'plans/:id', lazy: () => import('./routes/plan').then((m) => ({ Component: m.PlanRoute })) },
-      { path: 'studies', lazy: () => import('@/features/studies/components/studies-page').then((m) => ({ Component: m.StudiesPage })) },
-      { path: 'studies/new', lazy: () => import('@/features/studies/components/new-study-page').then((m) => ({ Component: m.NewStudyPage })) },
-      { path: 'studies/:id', lazy: () => import('@/features/studies/components/study-page').then((m) => ({ Component: m.StudyPage })) },
+      { path: 'plans', ...lazyPage(() => import('@/features/plans/components/plans-page').then((m) => m.PlansPage)) },
+      { path: 'plans/new', ...lazyPage(() => import('@/features/plans/components/new-plan-page').then((m) => m.NewPlanPage)) },
+      { path: 'plans/compare', ...lazyPage(() => import('@/features/plans/components/compare-page').then((m) => m.ComparePage)) },
+      { path: 'plans/:id', ...lazyPage(() => import('./routes/plan').then((m) => m.PlanRoute)) },
+      { path: 'studies', ...lazyPage(() => import('@/features/studies/components/studies-page').then((m) => m.StudiesPage)) },
+      { path: 'studies/new', ...lazyPage(() => import('@/features/studies/components/new-study-page').then((m) => m.NewStudyPage)) },
+      { path: 'studies/:id', ...lazyPage(() => import('@/features/studies/components/study-page').then((m) => m.StudyPage)) },
       { path: '*', element: <NotFoundRoute /> },
     ],
   },
