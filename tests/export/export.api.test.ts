@@ -174,6 +174,20 @@ describe('who may export what', () => {
     expect((await viewer.get(`/api/plans/${draft.id}/export.csv`)).status).toBe(403);
   });
 
+  it('marks a superseded plan as not current for a planner, and refuses it to a viewer', async () => {
+    const older = await approvedPlan('first', { fromHour: 24, hours: 6 });
+    await approvedPlan('second', { fromHour: 26, hours: 6 });
+    const response = await download(planner, older.id);
+    expect(response.status).toBe(200);
+    expect(response.headers['content-disposition']).toMatch(
+      new RegExp(`_superseded-not-current_sha256-${older.checksum}\\.csv"$`),
+    );
+    expect(response.headers['x-slackwater-checksum']).toBe(`sha256=${older.checksum}`);
+    const rows = rowsOf(response.body as string);
+    expect(rows.every((r) => r.plan_status === 'superseded: NOT CURRENT, a newer approved plan replaces it')).toBe(true);
+    expect((await viewer.get(`/api/plans/${older.id}/export.csv`)).status).toBe(403);
+  });
+
   it('answers 409 for a plan whose job has not produced a schedule', async () => {
     const pending = await insertDraftPlan(place, planner.user.id, { withResults: false });
     const response = await planner.get(`/api/plans/${pending.id}/export.csv`);
