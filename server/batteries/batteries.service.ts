@@ -15,7 +15,7 @@ import { batteryWarnings, type SiteLimits } from '@shared/schemas/battery-warnin
 import { insertAuditEvent } from '../audit/audit.repo';
 import { getDb } from '../db/client';
 import { conflict, notFound } from '../http/app-error';
-import { auditActor, pgErrorCode, UNIQUE_VIOLATION, type Actor } from '../sites/request-context';
+import { auditActor, withUniqueCheck, type Actor } from '../sites/request-context';
 import { requireSite } from '../sites/sites.service';
 import type { BatteryRow } from './batteries.schema';
 import * as repo from './batteries.repo';
@@ -51,16 +51,8 @@ function toBattery(row: BatteryRow, site: SiteLimits): Battery {
   };
 }
 
-async function withUniqueName<T>(name: string | undefined, work: () => Promise<T>): Promise<T> {
-  try {
-    return await work();
-  } catch (error) {
-    if (pgErrorCode(error) === UNIQUE_VIOLATION && name !== undefined) {
-      throw conflict(`This site already has a battery named "${name}". Choose another name.`);
-    }
-    throw error;
-  }
-}
+const duplicateName = (name: string | undefined) => () =>
+  conflict(`This site already has a battery named "${name}". Choose another name.`);
 
 export async function listSiteBatteries(siteId: string): Promise<Battery[]> {
   const db = getDb();
@@ -76,50 +68,58 @@ export async function getBattery(id: string): Promise<Battery> {
 }
 
 export async function createBattery(siteId: string, input: BatteryCreateInput, actor: Actor): Promise<Battery> {
-  return withUniqueName(input.name, () =>
-    getDb().transaction(async (tx) => {
-      const site = await requireSite(tx, siteId);
-      // Throws a ZodError (422 with the field's path) when the filled-in battery is inconsistent.
-      const fields = batterySchema.parse(withLithiumIonDefaults(input));
-      const row = await repo.insertBattery(tx, { ...fields, siteId, createdBy: actor.id });
-      await insertAuditEvent(tx, {
-        ...auditActor(actor),
-        action: 'battery.create',
-        entityType: 'battery',
-        entityId: row.id,
-        details: { siteId, ...fields, defaulted: Object.keys(fields).filter((k) => input[k as keyof BatteryCreateInput] === undefined) },
-      });
-      return toBattery(row, site);
-    }),
+  return withUniqueCheck(
+    () =>
+      getDb().transaction(async (tx) => {
+        const site = await requireSite(tx, siteId);
+        // Throws a ZodError (422 with the field's path) when the filled-in battery is inconsistent.
+        const fields = batterySchema.parse(withLithiumIonDefaults(input));
+        const row = await repo.insertBattery(tx, { ...fields, siteId, createdBy: actor.id });
+        await insertAuditEvent(tx, {
+          ...auditActor(actor),
+          action: 'battery.create',
+          entityType: 'battery',
+          entityId: row.id,
+          details: {
+            siteId,
+            ...fields,
+            defaulted: Object.keys(fields).filter((k) => input[k as keyof BatteryCreateInput] === undefined),
+          },
+        });
+        return toBattery(row, site);
+      }),
+    duplicateName(input.name),
   );
 }
 
 export async function updateBattery(id: string, patch: BatteryPatch, actor: Actor): Promise<Battery> {
   const { version, ...changes } = patch;
-  return withUniqueName(changes.name, () =>
-    getDb().transaction(async (tx) => {
-      const current = await repo.findBattery(tx, id);
-      if (!current) throw notFound(`The battery ${id}`);
-      if (current.version !== version) throw staleVersion(current.version, version);
-      const merged = batterySchema.parse({ ...fieldsOf(current), ...changes });
-      const row = await repo.updateBatteryAtVersion(tx, id, version, merged);
-      // Someone saved between the read and the update (the UPDATE re-checks the version).
-      if (!row) throw staleVersion(version + 1, version);
-      const before = fieldsOf(current);
-      const changed = Object.fromEntries(
-        Object.entries(changes)
-          .filter(([key, value]) => before[key as keyof BatteryFields] !== value)
-          .map(([key, value]) => [key, { from: before[key as keyof BatteryFields], to: value }]),
-      );
-      await insertAuditEvent(tx, {
-        ...auditActor(actor),
-        action: 'battery.update',
-        entityType: 'battery',
-        entityId: id,
-        details: { siteId: row.siteId, version: row.version, changes: changed },
-      });
-      return toBattery(row, await requireSite(tx, row.siteId));
-    }),
+  return withUniqueCheck(
+    () =>
+      getDb().transaction(async (tx) => {
+        const current = await repo.findBattery(tx, id);
+        if (!current) throw notFound(`The battery ${id}`);
+        if (current.version !== version) throw staleVersion(current.version, version);
+        const merged = batterySchema.parse({ ...fieldsOf(current), ...changes });
+        const row = await repo.updateBatteryAtVersion(tx, id, version, merged);
+        // Someone saved between the read and the update (the UPDATE re-checks the version).
+        if (!row) throw staleVersion(version + 1, version);
+        const before = fieldsOf(current);
+        const changed = Object.fromEntries(
+          Object.entries(changes)
+            .filter(([key, value]) => before[key as keyof BatteryFields] !== value)
+            .map(([key, value]) => [key, { from: before[key as keyof BatteryFields], to: value }]),
+        );
+        await insertAuditEvent(tx, {
+          ...auditActor(actor),
+          action: 'battery.update',
+          entityType: 'battery',
+          entityId: id,
+          details: { siteId: row.siteId, version: row.version, changes: changed },
+        });
+        return toBattery(row, await requireSite(tx, row.siteId));
+      }),
+    duplicateName(changes.name),
   );
 }
 

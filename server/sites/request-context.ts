@@ -5,7 +5,7 @@
 import type { Request } from 'express';
 import { z } from 'zod';
 import { clientIp, requireUser } from '../auth/current-user';
-import { notFound } from '../http/app-error';
+import { type AppError, notFound } from '../http/app-error';
 
 export interface Actor {
   id: string;
@@ -44,3 +44,13 @@ export function pgErrorCode(error: unknown): string | undefined {
 
 export const UNIQUE_VIOLATION = '23505';
 export const FOREIGN_KEY_VIOLATION = '23503';
+
+/** Runs `work`; a unique-constraint violation becomes `conflictError` (a clear 409 instead of a 500). */
+export async function withUniqueCheck<T>(work: () => Promise<T>, conflictError: () => AppError): Promise<T> {
+  try {
+    return await work();
+  } catch (error) {
+    if (pgErrorCode(error) === UNIQUE_VIOLATION) throw conflictError();
+    throw error;
+  }
+}

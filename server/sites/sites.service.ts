@@ -3,7 +3,7 @@ import type { Site, SiteFields, SitePatch } from '@shared/schemas/site';
 import { insertAuditEvent } from '../audit/audit.repo';
 import { getDb, type DbOrTx } from '../db/client';
 import { conflict, notFound } from '../http/app-error';
-import { auditActor, pgErrorCode, UNIQUE_VIOLATION, type Actor } from './request-context';
+import { auditActor, withUniqueCheck, type Actor } from './request-context';
 import * as repo from './sites.repo';
 
 function toSite(row: repo.SiteWithCounts): Site {
@@ -24,17 +24,8 @@ function toSite(row: repo.SiteWithCounts): Site {
   };
 }
 
-const duplicateName = (name: string) =>
+const duplicateName = (name: string | undefined) => () =>
   conflict(`A site named "${name}" already exists. Choose another name, or open the existing site.`);
-
-async function withUniqueName<T>(name: string | undefined, work: () => Promise<T>): Promise<T> {
-  try {
-    return await work();
-  } catch (error) {
-    if (pgErrorCode(error) === UNIQUE_VIOLATION && name !== undefined) throw duplicateName(name);
-    throw error;
-  }
-}
 
 export async function listSites(): Promise<Site[]> {
   return (await repo.listSites(getDb())).map(toSite);
@@ -52,27 +43,43 @@ export async function getSite(id: string): Promise<Site> {
 }
 
 export async function createSite(fields: SiteFields, actor: Actor): Promise<Site> {
-  const id = await withUniqueName(fields.name, () =>
-    getDb().transaction(async (tx) => {
-      const row = await repo.insertSite(tx, { ...fields, createdBy: actor.id });
-      await insertAuditEvent(tx, { ...auditActor(actor), action: 'site.create', entityType: 'site', entityId: row.id, details: { ...fields } });
-      return row.id;
-    }),
+  const id = await withUniqueCheck(
+    () =>
+      getDb().transaction(async (tx) => {
+        const row = await repo.insertSite(tx, { ...fields, createdBy: actor.id });
+        await insertAuditEvent(tx, {
+          ...auditActor(actor),
+          action: 'site.create',
+          entityType: 'site',
+          entityId: row.id,
+          details: { ...fields },
+        });
+        return row.id;
+      }),
+    duplicateName(fields.name),
   );
   return getSite(id);
 }
 
 export async function updateSite(id: string, patch: SitePatch, actor: Actor): Promise<Site> {
-  await withUniqueName(patch.name, () =>
-    getDb().transaction(async (tx) => {
-      const before = await requireSite(tx, id);
-      const row = await repo.updateSite(tx, id, patch);
-      if (!row) throw notFound(`The site ${id}`);
-      const changes = Object.fromEntries(
-        Object.entries(patch).map(([key, value]) => [key, { from: before[key as keyof SitePatch], to: value }]),
-      );
-      await insertAuditEvent(tx, { ...auditActor(actor), action: 'site.update', entityType: 'site', entityId: id, details: { changes } });
-    }),
+  await withUniqueCheck(
+    () =>
+      getDb().transaction(async (tx) => {
+        const before = await requireSite(tx, id);
+        const row = await repo.updateSite(tx, id, patch);
+        if (!row) throw notFound(`The site ${id}`);
+        const changes = Object.fromEntries(
+          Object.entries(patch).map(([key, value]) => [key, { from: before[key as keyof SitePatch], to: value }]),
+        );
+        await insertAuditEvent(tx, {
+          ...auditActor(actor),
+          action: 'site.update',
+          entityType: 'site',
+          entityId: id,
+          details: { changes },
+        });
+      }),
+    duplicateName(patch.name),
   );
   return getSite(id);
 }

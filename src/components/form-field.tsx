@@ -35,12 +35,7 @@ export function FormField({ id, label, unit, error, warning, hint, children }: F
           {error}
         </p>
       )}
-      {warning && !error && (
-        <p id={`${id}-warning`} className="rounded bg-amber-100 px-2 py-1 text-sm text-ink-900">
-          <span className="font-semibold text-amber-600">Check: </span>
-          {warning}
-        </p>
-      )}
+      {warning && !error && <WarningNote id={`${id}-warning`} message={warning} />}
     </div>
   );
 }
@@ -63,3 +58,46 @@ export const buttonClass = {
   secondary: 'rounded border border-ink-300 bg-white px-4 py-2 text-sm font-medium text-ink-800 hover:bg-ink-50 disabled:opacity-50',
   danger: 'rounded border border-brick-600 bg-white px-3 py-1.5 text-sm font-medium text-brick-700 hover:bg-brick-100 disabled:opacity-50',
 };
+
+/** A setting outside common practice: accepted, shown in amber with what to check. */
+export function WarningNote({ message, id }: { message: string; id?: string }) {
+  return (
+    <p id={id} className="rounded bg-amber-100 px-2 py-1 text-sm text-ink-900">
+      <span className="font-semibold text-amber-600">Check: </span>
+      {message}
+    </p>
+  );
+}
+
+export interface FormActionsProps {
+  pending: boolean;
+  submitLabel: string;
+  /** A message that belongs to no single field (e.g. a server error), shown above the buttons. */
+  formError?: string | undefined;
+  onCancel?: (() => void) | undefined;
+  children?: ReactNode;
+}
+
+/** The form's own error, then submit, any extra buttons, and cancel. */
+export function FormActions({ pending, submitLabel, formError, onCancel, children }: FormActionsProps) {
+  return (
+    <div className="space-y-3 sm:col-span-2">
+      {formError && (
+        <p role="alert" className="text-sm text-brick-700">
+          {formError}
+        </p>
+      )}
+      <div className="flex flex-wrap gap-3">
+        <button type="submit" className={buttonClass.primary} disabled={pending}>
+          {pending ? 'Saving…' : submitLabel}
+        </button>
+        {children}
+        {onCancel && (
+          <button type="button" className={buttonClass.secondary} onClick={onCancel}>
+            Cancel
+          </button>
+        )}
+      </div>
+    </div>
+  );
+}

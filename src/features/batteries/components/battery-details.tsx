@@ -1,4 +1,5 @@
 import { BATTERY_FIELD_LABELS, type Battery, type BatteryParams } from '@shared/schemas/battery';
+import { WarningNote } from '@/components/form-field';
 
 /** Every parameter with its unit, and the warnings in amber: the read-only view of a battery. */
 export function BatteryDetails({ battery, currency }: { battery: Battery; currency: string }) {
@@ -18,10 +19,7 @@ export function BatteryDetails({ battery, currency }: { battery: Battery; curren
         })}
       </dl>
       {battery.warnings.map((w) => (
-        <p key={w.message} className="rounded bg-amber-100 px-3 py-2 text-sm">
-          <span className="font-semibold text-amber-600">Check: </span>
-          {w.message}
-        </p>
+        <WarningNote key={w.message} message={w.message} />
       ))}
     </div>
   );

@@ -2,7 +2,7 @@ import { useState, type FormEvent } from 'react';
 import { BATTERY_FIELD_LABELS, batterySchema, type Battery, type BatteryFields, type BatteryParams } from '@shared/schemas/battery';
 import { lithiumIonDefaults } from '@shared/schemas/battery-defaults';
 import { batteryWarnings, type SiteLimits } from '@shared/schemas/battery-warnings';
-import { FormField, buttonClass, describedBy, inputClass } from '@/components/form-field';
+import { FormActions, FormField, WarningNote, buttonClass, describedBy, inputClass } from '@/components/form-field';
 import { fieldErrors, numberText, parseNumberInput } from '@/lib/form-values';
 import { BATTERY_FIELD_GROUPS } from './battery-form-fields';
 
@@ -96,29 +96,13 @@ export function BatteryForm({ battery, site, serverError, pending, onSubmit, onC
         </p>
       )}
       {general.map((w) => (
-        <p key={w.message} className="rounded bg-amber-100 px-3 py-2 text-sm">
-          <span className="font-semibold text-amber-600">Check: </span>
-          {w.message}
-        </p>
+        <WarningNote key={w.message} message={w.message} />
       ))}
-      {errors[''] && (
-        <p role="alert" className="text-sm text-brick-700">
-          {errors['']}
-        </p>
-      )}
-      <div className="flex flex-wrap gap-3">
-        <button type="submit" className={buttonClass.primary} disabled={pending}>
-          {pending ? 'Saving…' : battery ? 'Save battery' : 'Add battery'}
-        </button>
+      <FormActions pending={pending} submitLabel={battery ? 'Save battery' : 'Add battery'} formError={errors['']} onCancel={onCancel}>
         <button type="button" className={buttonClass.secondary} onClick={fillDefaults}>
           Use lithium-ion defaults for this energy
         </button>
-        {onCancel && (
-          <button type="button" className={buttonClass.secondary} onClick={onCancel}>
-            Cancel
-          </button>
-        )}
-      </div>
+      </FormActions>
     </form>
   );
 }

@@ -1,6 +1,6 @@
 import { useState, type FormEvent } from 'react';
 import { siteCreateSchema, type Site, type SiteFields } from '@shared/schemas/site';
-import { FormField, buttonClass, describedBy, inputClass } from '@/components/form-field';
+import { FormActions, FormField, describedBy, inputClass } from '@/components/form-field';
 import { fieldErrors, numberText, parseNumberInput } from '@/lib/form-values';
 import { TimeZoneSelect } from './time-zone-select';
 
@@ -90,21 +90,7 @@ export function SiteForm({ site, serverError, pending, onSubmit, onCancel }: Sit
         <input id="site-currency" className={`${inputClass} uppercase`} maxLength={3} value={text.currency} onChange={(e) => set('currency')(e.target.value)} aria-invalid={Boolean(errors.currency)} aria-describedby={describedBy('site-currency', { error: errors.currency, hint: CURRENCY_HINT })} />
       </FormField>
       {numberField('defaultHorizonHours', 'Default horizon', 'hours', 'Proposed for new plans; empty = choose each time.')}
-      {errors[''] && (
-        <p role="alert" className="text-sm text-brick-700 sm:col-span-2">
-          {errors['']}
-        </p>
-      )}
-      <div className="flex gap-3 sm:col-span-2">
-        <button type="submit" className={buttonClass.primary} disabled={pending}>
-          {pending ? 'Saving…' : site ? 'Save site' : 'Create site'}
-        </button>
-        {onCancel && (
-          <button type="button" className={buttonClass.secondary} onClick={onCancel}>
-            Cancel
-          </button>
-        )}
-      </div>
+      <FormActions pending={pending} submitLabel={site ? 'Save site' : 'Create site'} formError={errors['']} onCancel={onCancel} />
     </form>
   );
 }
