@@ -7,9 +7,10 @@
  * discharged that day, so each window prices only what it can still change.
  */
 import type { DispatchProblem, DispatchSolution } from '../types';
-import { createDpClosedLoop, type DpWindowPlan } from '../dp';
+import { createDpClosedLoop, type DpClosedLoop, type DpWindowPlan } from '../dp';
 import type { AlignedInputs } from '../inputs/align-inputs';
 import type { LpBasis } from '../lp/lp-model';
+import type { DispatchModel } from '../model/build-dispatch-model';
 import { HighsSession } from '../lp/solve';
 import { problemFor, usableEnergyKwh } from '../inputs/problem-for';
 import { validateProblem } from '../model/validate-problem';
@@ -77,6 +78,7 @@ export function runClosedLoop(inputs: AlignedInputs, req: ClosedLoopRequest): Cl
   const applied = { chargeKw: [] as number[], dischargeKw: [] as number[], gridImportKw: [] as number[], gridExportKw: [] as number[] };
   const socKwh = [req.initialEnergyKwh];
   let basis: LpBasis | undefined;
+  let model: DispatchModel | undefined;
   let solves = 0, shareSum = 0, leavingSum = 0, leavingIntoCommitted = 0, peak = 0, dpSolves = 0;
   try {
     for (let s = req.from; s < req.to; s += req.replanSteps) {
@@ -91,9 +93,16 @@ export function runClosedLoop(inputs: AlignedInputs, req: ClosedLoopRequest): Cl
       let plan: DispatchSolution | null = req.method !== 'lp' && checkDp(problem).ok ? solveWithDp(problem) : null;
       if (plan) dpSolves++;
       else {
-        const outcome = solveDispatchLp(problem, { session, validated: true, keepBasis: true, ...(basis ? { warmStart: { previous: basis, shift: req.replanSteps } } : {}) });
+        const outcome = solveDispatchLp(problem, {
+          session,
+          validated: true,
+          keepBasis: true,
+          ...(basis ? { warmStart: { previous: basis, shift: req.replanSteps } } : {}),
+          ...(model ? { previousModel: model } : {}),
+        });
         plan = outcome.solution;
         basis = outcome.basis;
+        model = outcome.model;
       }
       solves++;
       if (plan.status !== 'optimal') {
@@ -136,6 +145,18 @@ export function runClosedLoop(inputs: AlignedInputs, req: ClosedLoopRequest): Cl
   };
 }
 
+/** Prepared DP loops per inputs and period: the runs of a study share their stage costs. */
+const dpLoops = new WeakMap<AlignedInputs, Map<string, DpClosedLoop>>();
+
+function dpLoopFor(inputs: AlignedInputs, req: ClosedLoopRequest, whole: DispatchProblem): DpClosedLoop {
+  const key = `${req.from}:${req.to}:${req.initialEnergyKwh}`;
+  let loops = dpLoops.get(inputs);
+  if (!loops) dpLoops.set(inputs, (loops = new Map()));
+  let loop = loops.get(key);
+  if (!loop) loops.set(key, (loop = createDpClosedLoop(whole)));
+  return loop;
+}
+
 /**
  * The same closed loop on the exact dynamic program's warm receding-horizon
  * runner (issue 9): consecutive windows reuse value functions and decisions,
@@ -147,7 +168,7 @@ function runClosedLoopOnDp(
   let shareSum = 0, leavingSum = 0, leavingIntoCommitted = 0;
   // Views into one copy instead of a slice per window (thousands of windows per run).
   const reference = req.referenceSoc ? Float64Array.from(req.referenceSoc) : null;
-  const run = createDpClosedLoop(whole).run({
+  const run = dpLoopFor(inputs, req, whole).run({
     horizonSteps: req.horizonSteps,
     replanSteps: req.replanSteps,
     terminalForWindow: (_start, end) => terminalRuleFor(req.terminal, inputs, req.from + end, req.steady),
