@@ -10,7 +10,7 @@
 import type { DispatchProblem, DispatchSolution } from '../types';
 import type { LpResult } from '../lp/lp-model';
 import type { DispatchModel } from '../model/build-dispatch-model';
-import { gridFlows, scheduleCost } from './schedule-cost';
+import { scheduleCost } from './schedule-cost';
 
 const clip = (v: number, lo: number, hi: number) => (v < lo ? lo : v > hi ? hi : v);
 
@@ -25,13 +25,20 @@ export interface SolutionSeries {
 export function readSeries(problem: DispatchProblem, model: DispatchModel, x: Float64Array): SolutionSeries {
   const { layout, lp } = model;
   const n = layout.steps;
-  const out: SolutionSeries = { chargeKw: [], dischargeKw: [], gridImportKw: [], gridExportKw: [], socKwh: [] };
-  const e0 = layout.initialEnergyCol >= 0 ? x[layout.initialEnergyCol]! : problem.initialEnergyKwh;
-  out.socKwh.push(layout.initialEnergyCol >= 0 ? clip(e0, lp.colLower[layout.initialEnergyCol]!, lp.colUpper[layout.initialEnergyCol]!) : e0);
+  const out: SolutionSeries = {
+    chargeKw: new Array<number>(n),
+    dischargeKw: new Array<number>(n),
+    gridImportKw: new Array<number>(n),
+    gridExportKw: new Array<number>(n),
+    socKwh: new Array<number>(n + 1),
+  };
+  const free = layout.initialEnergyCol;
+  out.socKwh[0] = free >= 0 ? clip(x[free]!, lp.colLower[free]!, lp.colUpper[free]!) : problem.initialEnergyKwh;
+  const { powerChargeKw, powerDischargeKw } = problem.battery;
   for (let t = 0; t < n; t++) {
     const base = t * layout.colsPerStep;
-    const c = clip(x[base + layout.charge]!, 0, problem.battery.powerChargeKw);
-    const d = clip(x[base + layout.discharge]!, 0, problem.battery.powerDischargeKw);
+    const c = clip(x[base + layout.charge]!, 0, powerChargeKw);
+    const d = clip(x[base + layout.discharge]!, 0, powerDischargeKw);
     let m: number;
     let xp: number;
     if (layout.hasGrid) {
@@ -43,14 +50,16 @@ export function readSeries(problem: DispatchProblem, model: DispatchModel, x: Fl
         xp -= both;
       }
     } else {
-      [m, xp] = gridFlows(problem.loadKw[t]!, problem.generationKw[t]!, c, d);
+      const net = problem.loadKw[t]! - problem.generationKw[t]! + c - d;
+      m = net > 0 ? net : 0;
+      xp = net < 0 ? -net : 0;
     }
     const e = base + layout.energy;
-    out.chargeKw.push(c);
-    out.dischargeKw.push(d);
-    out.gridImportKw.push(m);
-    out.gridExportKw.push(xp);
-    out.socKwh.push(clip(x[e]!, lp.colLower[e]!, lp.colUpper[e]!));
+    out.chargeKw[t] = c;
+    out.dischargeKw[t] = d;
+    out.gridImportKw[t] = m;
+    out.gridExportKw[t] = xp;
+    out.socKwh[t + 1] = clip(x[e]!, lp.colLower[e]!, lp.colUpper[e]!);
   }
   return out;
 }
@@ -80,15 +89,20 @@ export function toDispatchSolution(
   extra: { tieBroken: boolean; seconds: number },
 ): DispatchSolution {
   const series = readSeries(problem, model, finalX);
-  const peak = series.gridImportKw.reduce((p, m) => Math.max(p, m), 0);
+  let peak = 0;
+  for (const m of series.gridImportKw) if (m > peak) peak = m;
+  const costInputs = {
+    stepHours: problem.stepHours,
+    priceImport: problem.priceImport,
+    priceExport: problem.priceExport,
+    degradationCostPerMwh: problem.battery.degradationCostPerMwh,
+    demandChargePerKw: problem.site.demandChargePerKw,
+  };
   return {
     status: 'optimal',
     method: 'lp',
     objective: stage1.objective,
-    cost: scheduleCost(
-      { ...problem, degradationCostPerMwh: problem.battery.degradationCostPerMwh, demandChargePerKw: problem.site.demandChargePerKw },
-      series,
-    ),
+    cost: scheduleCost(costInputs, series),
     ...series,
     storedEnergyValue: storedEnergyValues(model, stage1.rowDual),
     peakImportKw: peak,

@@ -32,9 +32,3 @@ export function scheduleCost(inputs: CostInputs, series: CostedSeries, from = 0,
   const demand = inputs.demandChargePerKw !== null ? inputs.demandChargePerKw * peak : 0;
   return ((energy + inputs.degradationCostPerMwh * discharged) * dt) / 1000 + demand;
 }
-
-/** Grid import/export for a step from the site balance m − x = L − G + c − d. */
-export function gridFlows(loadKw: number, generationKw: number, chargeKw: number, dischargeKw: number): [number, number] {
-  const net = loadKw - generationKw + chargeKw - dischargeKw;
-  return net >= 0 ? [net, 0] : [0, -net];
-}

@@ -6,9 +6,9 @@
 import type { DispatchProblem, DispatchSolution, SolveStatus } from '../types';
 import type { LpBasis } from '../lp/lp-model';
 import { solve, type SolveOptions } from '../lp/solve';
-import { buildDispatchModel, energyBounds } from '../model/build-dispatch-model';
+import { buildDispatchModel, energyBounds, type DispatchModel } from '../model/build-dispatch-model';
 import { rotateBasis } from '../model/rotate-basis';
-import { buildTieBreakModel, mayHaveTies } from '../model/tie-break';
+import { buildTieBreakModel, mayHaveTies, tieBreakWarmBasis } from '../model/tie-break';
 import { stepLabel, validateProblem } from '../model/validate-problem';
 import { toDispatchSolution } from './read-solution';
 
@@ -19,12 +19,16 @@ export interface LpDispatchOptions extends SolveOptions {
   readonly validated?: boolean;
   /** Warm start from the basis of the previous window, moved on by `shift` steps (HiGHS sessions). */
   readonly warmStart?: { readonly previous: LpBasis; readonly shift: number };
+  /** The previous window's model, whose matrix is shared when it is the same. */
+  readonly previousModel?: DispatchModel;
 }
 
 export interface LpDispatchOutcome {
   readonly solution: DispatchSolution;
   /** Stage-1 basis when keepBasis was asked for. */
   readonly basis?: LpBasis;
+  /** The model solved, for the next window's previousModel. */
+  readonly model?: DispatchModel;
 }
 
 export function failedSolution(status: Exclude<SolveStatus, 'optimal'>, message: string, method: 'lp' | 'dp' = 'lp'): DispatchSolution {
@@ -60,7 +64,7 @@ export function solveDispatchLp(problem: DispatchProblem, options: LpDispatchOpt
     const issue = validateProblem(problem);
     if (issue) return { solution: failedSolution('error', issue.message) };
   }
-  const model = buildDispatchModel(problem);
+  const model = buildDispatchModel(problem, options.previousModel ? { previous: options.previousModel } : {});
   const warmBasis = options.warmStart ? rotateBasis(options.warmStart.previous, model.layout, options.warmStart.shift) : undefined;
   // The basis (HiGHS) also makes the tie test exact, so it is always asked for.
   const stage1 = solve(model.lp, { ...options, keepBasis: true, ...(warmBasis ? { warmBasis } : {}) });
@@ -72,7 +76,9 @@ export function solveDispatchLp(problem: DispatchProblem, options: LpDispatchOpt
   let tieBroken = false;
   if (options.tieBreak !== false && mayHaveTies(model, stage1)) {
     const { min, max } = energyBounds(problem);
-    const stage2 = solve(buildTieBreakModel(model, stage1, problem.stepHours, (min + max) / 2));
+    const mid = (min + max) / 2;
+    const warm = tieBreakWarmBasis(model, stage1, mid);
+    const stage2 = solve(buildTieBreakModel(model, stage1, problem.stepHours, mid), warm ? { backend: 'highs', warmBasis: warm } : {});
     // If the second solve fails (numerically), the stage-1 schedule is still optimal.
     if (stage2.status === 'optimal') {
       finalX = stage2.x;
@@ -83,5 +89,6 @@ export function solveDispatchLp(problem: DispatchProblem, options: LpDispatchOpt
   return {
     solution: toDispatchSolution(problem, model, stage1, finalX, { tieBroken, seconds }),
     ...(stage1.basis ? { basis: stage1.basis } : {}),
+    model,
   };
 }

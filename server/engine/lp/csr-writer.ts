@@ -5,6 +5,11 @@
  */
 import type { LpModel } from './lp-model';
 
+/**
+ * With `matrixOf` set, the matrix is taken from that model and add() does nothing:
+ * receding-horizon windows of one layout share their matrix, so only costs and
+ * bounds are written (the caller guarantees the matrix is the same).
+ */
 export class CsrWriter {
   readonly colCost: Float64Array;
   readonly colLower: Float64Array;
@@ -21,15 +26,16 @@ export class CsrWriter {
     readonly numCols: number,
     readonly numRows: number,
     maxNonZeros: number,
+    private readonly matrixOf?: LpModel,
   ) {
     this.colCost = new Float64Array(numCols);
     this.colLower = new Float64Array(numCols);
     this.colUpper = new Float64Array(numCols);
     this.rowLower = new Float64Array(numRows);
     this.rowUpper = new Float64Array(numRows);
-    this.rowStarts = new Int32Array(numRows + 1);
-    this.colIndex = new Int32Array(maxNonZeros);
-    this.values = new Float64Array(maxNonZeros);
+    this.rowStarts = matrixOf ? matrixOf.rowStarts : new Int32Array(numRows + 1);
+    this.colIndex = matrixOf ? matrixOf.colIndex : new Int32Array(maxNonZeros);
+    this.values = matrixOf ? matrixOf.values : new Float64Array(maxNonZeros);
   }
 
   setColumn(j: number, cost: number, lower: number, upper: number): void {
@@ -43,18 +49,20 @@ export class CsrWriter {
     const i = this.row++;
     this.rowLower[i] = lower;
     this.rowUpper[i] = upper;
-    this.rowStarts[i] = this.nz;
+    if (!this.matrixOf) this.rowStarts[i] = this.nz;
     return i;
   }
 
   add(col: number, value: number): void {
+    if (this.matrixOf) return;
     this.colIndex[this.nz] = col;
     this.values[this.nz++] = value;
   }
 
   finish(offset: number, names?: { cols: string[]; rows: string[] }): LpModel {
     if (this.row !== this.numRows) throw new Error(`model builder wrote ${this.row} of ${this.numRows} rows`);
-    this.rowStarts[this.numRows] = this.nz;
+    const shared = this.matrixOf;
+    if (!shared) this.rowStarts[this.numRows] = this.nz;
     return {
       numCols: this.numCols,
       numRows: this.numRows,
@@ -64,8 +72,8 @@ export class CsrWriter {
       rowLower: this.rowLower,
       rowUpper: this.rowUpper,
       rowStarts: this.rowStarts,
-      colIndex: this.colIndex.subarray(0, this.nz),
-      values: this.values.subarray(0, this.nz),
+      colIndex: shared ? shared.colIndex : this.colIndex.subarray(0, this.nz),
+      values: shared ? shared.values : this.values.subarray(0, this.nz),
       offset,
       ...(names ? { colNames: names.cols, rowNames: names.rows } : {}),
     };

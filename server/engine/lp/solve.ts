@@ -8,12 +8,15 @@ import { lpFailure, modelSize, type LpBackend, type LpBasis, type LpModel, type 
 
 /**
  * Models up to this size (non-zeros + columns) go to GLPK, larger ones to HiGHS.
- * Measured by `npm run bench` ("backendCrossover") on the 2-core machine with
- * cold solves of pure-arbitrage windows: GLPK is quicker on small models, where
- * HiGHS's fixed set-up cost dominates; HiGHS is quicker from about 48 hourly steps
- * on and far quicker on long ones (year: HiGHS 0.25 s, GLPK 7.8 s).
+ * Measured on the 2-core machine (`npm run bench`, section backendCrossover; CPU
+ * ms per solve of pure-arbitrage windows after warm-up, min of 3 rounds):
+ *   steps (size)   6 (41)  12 (83)  24 (167)  48 (335)  96 (671)  168 (1175)
+ *   GLPK            0.09    0.20     0.35      0.97      2.0       5.3
+ *   HiGHS           0.20    0.23     0.28      0.40      0.71      1.2
+ * HiGHS's fixed cost per run dominates only the smallest models; the year-long
+ * LP takes HiGHS about 0.3 s and GLPK several seconds.
  */
-export const GLPK_MAX_SIZE = 600;
+export const GLPK_MAX_SIZE = 120;
 
 export interface SolveOptions {
   /** 'auto' (default) picks by model size, see GLPK_MAX_SIZE. */

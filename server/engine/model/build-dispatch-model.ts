@@ -23,6 +23,8 @@ export interface DispatchModel {
 export interface BuildOptions {
   /** Give columns and rows readable names (slower; for LP text and debugging). */
   readonly names?: boolean;
+  /** A model of an earlier window: when its matrix is the same, it is shared instead of rebuilt. */
+  readonly previous?: DispatchModel;
 }
 
 /** SoC window in kWh. */
@@ -63,7 +65,8 @@ export function buildDispatchModel(problem: DispatchProblem, options: BuildOptio
   const dischargeLoss = dt / battery.efficiencyDischarge;
   const degradation = (battery.degradationCostPerMwh * dt) / 1000;
   const nz = n * 4 + (layout.hasGrid ? n * 4 : 0) + (layout.peakCol >= 0 ? n * 2 : 0) + (layout.capDays.length ? n : 0) + 3;
-  const w = new CsrWriter(layout.numCols, layout.numRows, nz);
+  const shared = options.previous?.layout.matrixKey === layout.matrixKey ? options.previous.lp : undefined;
+  const w = new CsrWriter(layout.numCols, layout.numRows, nz, shared);
   let offset = 0;
   const [lastMin, lastMax] = terminalBounds(problem, eMin, eMax);
   const terminalValue = problem.terminal.kind === 'steady-value' ? problem.terminal.valuePerMwh / 1000 : 0;

@@ -32,6 +32,8 @@ export interface DispatchLayout {
   readonly cyclicRow: number;
   readonly numCols: number;
   readonly numRows: number;
+  /** Everything the constraint matrix depends on: equal keys mean equal matrices. */
+  readonly matrixKey: string;
 }
 
 /** True when every step has one price for import and export and nothing limits or charges the grid. */
@@ -40,6 +42,14 @@ export function gridFoldable(problem: DispatchProblem): boolean {
   if (site.importLimitKw !== null || site.exportLimitKw !== null || site.demandChargePerKw !== null) return false;
   for (let t = 0; t < priceImport.length; t++) if (priceImport[t] !== priceExport[t]) return false;
   return true;
+}
+
+/** The matrix depends on the shape, the battery's coefficients, the step and where local days change. */
+function matrixKey(problem: DispatchProblem, shape: string): string {
+  const b = problem.battery;
+  let dayBreaks = '';
+  if (b.maxCyclesPerDay !== null) for (let t = 1; t < problem.dayIndex.length; t++) if (problem.dayIndex[t] !== problem.dayIndex[t - 1]) dayBreaks += `${t},`;
+  return `${shape}|${problem.stepHours}|${b.efficiencyCharge}|${b.efficiencyDischarge}|${b.selfDischargePctPerHour}|${dayBreaks}`;
 }
 
 function distinctDays(dayIndex: readonly number[]): number[] {
@@ -81,5 +91,6 @@ export function dispatchLayout(problem: DispatchProblem): DispatchLayout {
     cyclicRow,
     numCols,
     numRows,
+    matrixKey: matrixKey(problem, `${steps}|${colsPerStep}|${rowsPerStep}|${initialEnergyCol}|${peakCol}|${capDays.length}|${cyclicRow}`),
   };
 }

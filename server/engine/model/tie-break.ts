@@ -16,14 +16,14 @@
  * stored-energy values come from stage 1: any optimal dual is complementary to
  * every optimal primal, so they remain valid for the stage-2 schedule.
  */
-import type { LpModel, LpResult } from '../lp/lp-model';
+import type { LpBasis, LpModel, LpResult } from '../lp/lp-model';
 import { reducedCosts } from '../lp/lp-model';
 import { CsrWriter } from '../lp/csr-writer';
 import type { DispatchModel } from './build-dispatch-model';
 
 const REDUCED_COST_TOL = 1e-9;
 /** HiGHS basis status codes (highs.constants.basisStatus). */
-const highsBasisStatus = { basic: 1 } as const;
+const highsBasisStatus = { lower: 0, basic: 1 } as const;
 const MID_WEIGHT = 1e-4;
 
 function atBound(value: number, lower: number, upper: number): boolean {
@@ -31,46 +31,36 @@ function atBound(value: number, lower: number, upper: number): boolean {
 }
 
 /**
- * Columns whose move would change the schedule. Grid import/export at zero are
- * left out: at equal import and export prices they tie with each other (import
- * and export more at once), which netting removes after the solve; at a grid
- * limit they stay in.
+ * Whether column j suggests another optimal schedule: a zero reduced cost and,
+ * with a HiGHS basis, nonbasic (dual degeneracy, exact); without one (GLPK,
+ * small models only) at a bound, which also fires on primal degeneracy and then
+ * costs only a needless small second solve.
  */
-function decisionColumns(model: DispatchModel, x: Float64Array): number[] {
-  const { layout, lp } = model;
-  const cols: number[] = [];
-  for (let t = 0; t < layout.steps; t++) {
-    const base = t * layout.colsPerStep;
-    cols.push(base + layout.charge, base + layout.discharge);
-    for (const o of [layout.gridImport, layout.gridExport]) {
-      if (o >= 0 && x[base + o]! > 1e-7 * (1 + lp.colUpper[base + o]!)) cols.push(base + o);
-    }
-  }
-  if (layout.initialEnergyCol >= 0) cols.push(layout.initialEnergyCol);
-  if (layout.peakCol >= 0) cols.push(layout.peakCol);
-  return cols;
+function flat(j: number, d: Float64Array, stage1: LpResult, lp: LpModel): boolean {
+  if (Math.abs(d[j]!) > REDUCED_COST_TOL) return false;
+  const status = stage1.basis?.colStatus;
+  return status ? status[j] !== highsBasisStatus.basic : atBound(stage1.x[j]!, lp.colLower[j]!, lp.colUpper[j]!);
 }
 
 /**
- * Whether stage 1 may have picked one of several optimal schedules: a decision
- * column that is nonbasic with a zero reduced cost (dual degeneracy). With a HiGHS
- * basis the test is exact. GLPK (small models only) returns no basis, so there a
- * column at a bound with a zero reduced cost counts too; that also fires on primal
- * degeneracy (a basic column sitting at its bound), which costs only a needless
- * small second solve.
+ * Whether stage 1 may have picked one of several optimal schedules. Only columns
+ * whose move changes the schedule count: charge and discharge, the peak, a free
+ * start, and grid import/export away from zero (at zero, equal import and export
+ * prices tie them with each other, which netting after the solve removes).
  */
 export function mayHaveTies(model: DispatchModel, stage1: LpResult): boolean {
-  const { lp } = model;
+  const { lp, layout } = model;
   const d = reducedCosts(lp, stage1.rowDual);
-  const basic = highsBasisStatus.basic;
-  const columns = decisionColumns(model, stage1.x);
-  if (stage1.basis) {
-    const status = stage1.basis.colStatus;
-    return columns.some((j) => status[j] !== basic && Math.abs(d[j]!) <= REDUCED_COST_TOL);
+  for (let t = 0; t < layout.steps; t++) {
+    const base = t * layout.colsPerStep;
+    if (flat(base + layout.charge, d, stage1, lp) || flat(base + layout.discharge, d, stage1, lp)) return true;
+    for (const o of [layout.gridImport, layout.gridExport]) {
+      if (o >= 0 && stage1.x[base + o]! > 1e-7 * (1 + lp.colUpper[base + o]!) && flat(base + o, d, stage1, lp)) return true;
+    }
   }
-  const flat = columns.some((j) => Math.abs(d[j]!) <= REDUCED_COST_TOL && atBound(stage1.x[j]!, lp.colLower[j]!, lp.colUpper[j]!));
+  if (layout.peakCol >= 0 && flat(layout.peakCol, d, stage1, lp)) return true;
   // A free start (steady cycle) with a flat value of energy leaves the level itself open.
-  return flat || (model.layout.initialEnergyCol >= 0 && Math.abs(d[model.layout.initialEnergyCol]!) <= REDUCED_COST_TOL);
+  return layout.initialEnergyCol >= 0 && Math.abs(d[layout.initialEnergyCol]!) <= REDUCED_COST_TOL;
 }
 
 function fixedBounds(lower: number, upper: number, sign: number): [number, number] {
@@ -109,4 +99,28 @@ export function buildTieBreakModel(model: DispatchModel, stage1: LpResult, stepH
     w.add(u, 1);
   }
   return w.finish(0);
+}
+
+/**
+ * A starting basis for the stage-2 model from stage 1's (HiGHS): the stage-1
+ * schedule is feasible for stage 2, so stage 2 starts from it instead of from
+ * scratch (on the year-long LP a cold stage 2 cost as much as stage 1). Each
+ * |e − mid| column is basic, with the row of the side it measures active.
+ */
+export function tieBreakWarmBasis(model: DispatchModel, stage1: LpResult, midEnergyKwh: number): LpBasis | undefined {
+  const basis = stage1.basis;
+  if (!basis) return undefined;
+  const { lp, layout } = model;
+  const n = layout.steps;
+  const colStatus = new Int32Array(lp.numCols + n);
+  colStatus.set(basis.colStatus);
+  colStatus.fill(highsBasisStatus.basic, lp.numCols);
+  const rowStatus = new Int32Array(lp.numRows + 2 * n);
+  rowStatus.set(basis.rowStatus);
+  for (let t = 0; t < n; t++) {
+    const above = stage1.x[t * layout.colsPerStep + layout.energy]! >= midEnergyKwh;
+    rowStatus[lp.numRows + 2 * t] = above ? highsBasisStatus.lower : highsBasisStatus.basic;
+    rowStatus[lp.numRows + 2 * t + 1] = above ? highsBasisStatus.basic : highsBasisStatus.lower;
+  }
+  return { colStatus, rowStatus };
 }
