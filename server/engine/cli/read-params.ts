@@ -60,7 +60,7 @@ export function readBattery(path: string, warn: (message: string) => void): Batt
   const extra = unknownKeys(obj, BATTERY_KEYS);
   if (extra.length > 0) warn(`ignoring unknown key(s) in ${path}: ${extra.join(', ')}`);
   const entries = BATTERY_KEYS.map((key) => [key, numberKey(obj, key, NULLABLE_BATTERY.has(key), path)]);
-  return Object.fromEntries(entries) as unknown as BatteryParams;
+  return Object.fromEntries(entries);
 }
 
 export const DEFAULT_SITE: SiteParams = { timezone: 'UTC', importLimitKw: null, exportLimitKw: null, demandChargePerKw: null };

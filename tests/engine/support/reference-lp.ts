@@ -85,7 +85,7 @@ export function solveWithJsLpSolver(lp: ReferenceLp): ReferenceOutcome {
     } else {
       constraints[`box_${name}`] = { ...(lo > 0 ? { min: lo } : {}), ...(Number.isFinite(hi) ? { max: hi } : {}) };
     }
-    variables[name]![lo === hi ? `fix_${name}` : `box_${name}`] = 1;
+    variables[name][lo === hi ? `fix_${name}` : `box_${name}`] = 1;
   }
   for (const row of lp.rows) {
     constraints[row.name] = row.lo === row.hi ? { equal: row.lo } : { ...(Number.isFinite(row.lo) ? { min: row.lo } : {}), ...(Number.isFinite(row.hi) ? { max: row.hi } : {}) };
