@@ -30,14 +30,28 @@ function startWorker(): Worker {
 const idle: Worker[] = [];
 let maxIdle = 1;
 
+/** An idle thread that dies (e.g. its code failed to load) leaves the pool instead of swallowing the next task. */
+function dropWhenDead(this: Worker) {
+  const i = idle.indexOf(this);
+  if (i >= 0) idle.splice(i, 1);
+}
+
+function park(worker: Worker): void {
+  worker.unref();
+  worker.on('error', dropWhenDead).on('exit', dropWhenDead);
+  idle.push(worker);
+}
+
+function takeIdle(): Worker | undefined {
+  const worker = idle.pop();
+  worker?.off('error', dropWhenDead).off('exit', dropWhenDead);
+  return worker;
+}
+
 /** Starts `count` threads ahead of the first task (a worker process calls this at start). */
 export function prewarmThreads(count: number): void {
   maxIdle = Math.max(maxIdle, count);
-  while (idle.length < count) {
-    const worker = startWorker();
-    worker.unref();
-    idle.push(worker);
-  }
+  while (idle.length < count) park(startWorker());
 }
 
 /** Ends every idle thread (shutdown). Busy ones end with their task. */
@@ -60,7 +74,7 @@ export function runInThread<O>(request: ThreadRequest, options: ThreadOptions = 
       reject(new ThreadTaskError('The task was cancelled before it started.'));
       return;
     }
-    const worker = idle.pop() ?? startWorker();
+    const worker = takeIdle() ?? startWorker();
     worker.ref();
     let settled = false;
     const settle = (reuse: boolean, fn: () => void) => {
@@ -71,8 +85,7 @@ export function runInThread<O>(request: ThreadRequest, options: ThreadOptions = 
       worker.off('error', onError);
       worker.off('exit', onExit);
       if (reuse && idle.length < maxIdle) {
-        worker.unref();
-        idle.push(worker);
+        park(worker);
       } else {
         void worker.terminate();
       }

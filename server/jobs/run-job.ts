@@ -60,7 +60,9 @@ export async function runClaimedJob(handler: JobHandler, job: PgBoss.JobWithMeta
     } else {
       await markJobRetrying(db, job.id, attempt, message);
     }
-    logger.error(`Job ${job.id} (${handler.kind}) attempt ${attempt} failed`, error);
+    // A cancel at shutdown is routine: the job goes back to the queue for another worker.
+    if (options.signal.aborted) logger.info(`Job ${job.id} (${handler.kind}) attempt ${attempt} handed back at shutdown.`);
+    else logger.error(`Job ${job.id} (${handler.kind}) attempt ${attempt} failed`, error);
     throw error; // pg-boss retries it, or moves it to the dead-letter queue
   } finally {
     clearInterval(heartbeat);

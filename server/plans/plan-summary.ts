@@ -6,7 +6,7 @@
 import type { PlanSummary } from '@shared/schemas/plan';
 import type { DispatchSolution } from '../engine/types';
 import type { AlignedInputs } from '../engine/inputs/align-inputs';
-import { gridFlows, scheduleCost } from '../engine/dispatch/schedule-cost';
+import { scheduleCost } from '../engine/dispatch/schedule-cost';
 
 export function summarisePlan(a: AlignedInputs, from: number, steps: number, sol: DispatchSolution): PlanSummary {
   const slice = (xs: readonly number[], offset = 0) => xs.slice(offset, offset + steps);
@@ -25,10 +25,10 @@ export function summarisePlan(a: AlignedInputs, from: number, steps: number, sol
   // The same site and prices without the battery: the grid carries load minus generation.
   const without = { dischargeKw: [] as number[], gridImportKw: [] as number[], gridExportKw: [] as number[] };
   for (let t = 0; t < steps; t++) {
-    const [m, x] = gridFlows(a.loadKw[from + t]!, a.generationKw[from + t]!, 0, 0);
+    const net = a.loadKw[from + t]! - a.generationKw[from + t]!;
     without.dischargeKw.push(0);
-    without.gridImportKw.push(m);
-    without.gridExportKw.push(x);
+    without.gridImportKw.push(Math.max(0, net));
+    without.gridExportKw.push(Math.max(0, -net));
   }
   const baseline = scheduleCost(costInputs, without);
   const sum = (xs: readonly number[]) => xs.reduce((acc, v) => acc + v, 0);
