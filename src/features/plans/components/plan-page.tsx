@@ -9,7 +9,7 @@ import { Link, useParams } from 'react-router-dom';
 import type { Plan } from '@shared/schemas/plan';
 import { describeTerminalRule } from '@shared/schemas/terminal-rule';
 import { ErrorState, LoadingState } from '@/components/query-state';
-import { JobProgressBar } from '@/components/job-progress';
+import { JobProgressBar, isJobActive } from '@/components/job-progress';
 import { formatLocalTime, formatNumber } from '@/lib/format';
 import { usePlan } from '../api/get-plan';
 import { Cautions } from './cautions';
@@ -90,7 +90,8 @@ export function PlanPage({ signOff }: { signOff?: (planId: string) => ReactNode 
         </>
       )}
       <Cautions warnings={inputs?.warnings ?? []} />
-      {signOff?.(plan.id)}
+      {/* What may be done depends on the results (only a computed plan can be submitted): read it once the job settled. */}
+      {!isJobActive(plan.job) && signOff?.(plan.id)}
     </article>
   );
 }

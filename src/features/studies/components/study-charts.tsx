@@ -28,22 +28,25 @@ function ByHorizon({ runs, title, label, value, extra }: { runs: StudyRun[]; tit
   return (
     <figure className="rounded bg-white p-2 shadow-sm">
       <figcaption className="px-2 text-sm font-medium text-ink-800">{title}</figcaption>
-      <XYChart height={240} theme={theme} xScale={{ type: 'log', domain: [horizons[0] ?? 1, horizons.at(-1) ?? 2] }} yScale={{ type: 'linear', nice: true, zero: true }} margin={margin}
-        accessibilityLabel={`${title}; the numbers are in the table of runs`}>
-        <Grid columns={false} numTicks={4} />
-        <Axis orientation="bottom" tickValues={horizons} tickFormat={(h: number) => `${h} h`} label="horizon" />
-        <Axis orientation="left" numTicks={4} label={label} />
-        {extra && (
-          <LineSeries dataKey={extra.text} data={horizons.map((h) => ({ h }))} xAccessor={(d) => d.h} yAccessor={() => extra.y} stroke="#e0961f" strokeDasharray="4 3" />
-        )}
-        {rules.map((rule, i) => {
-          const data = runs.filter((r) => r.terminal === rule && value(r) !== null).sort((a, b) => a.horizonHours - b.horizonHours);
-          return [
-            <LineSeries key={`${rule}-line`} dataKey={rule} data={data} xAccessor={(r) => r.horizonHours} yAccessor={value} stroke={palette[i % palette.length]} strokeWidth={2} />,
-            <GlyphSeries key={`${rule}-dots`} dataKey={`${rule} runs`} data={data} xAccessor={(r) => r.horizonHours} yAccessor={value} colorAccessor={() => palette[i % palette.length]} size={7} />,
-          ];
-        })}
-      </XYChart>
+      {/* XYChart takes its width from its parent, which needs the height or the chart collapses onto what follows. */}
+      <div style={{ height: 240 }}>
+        <XYChart height={240} theme={theme} xScale={{ type: 'log', domain: [horizons[0] ?? 1, horizons.at(-1) ?? 2] }} yScale={{ type: 'linear', nice: true, zero: true }} margin={margin}
+          accessibilityLabel={`${title}; the numbers are in the table of runs`}>
+          <Grid columns={false} numTicks={4} />
+          <Axis orientation="bottom" tickValues={horizons} tickFormat={(h: number) => `${h} h`} label="horizon" />
+          <Axis orientation="left" numTicks={4} label={label} />
+          {extra && (
+            <LineSeries dataKey={extra.text} data={horizons.map((h) => ({ h }))} xAccessor={(d) => d.h} yAccessor={() => extra.y} stroke="#e0961f" strokeDasharray="4 3" />
+          )}
+          {rules.map((rule, i) => {
+            const data = runs.filter((r) => r.terminal === rule && value(r) !== null).sort((a, b) => a.horizonHours - b.horizonHours);
+            return [
+              <LineSeries key={`${rule}-line`} dataKey={rule} data={data} xAccessor={(r) => r.horizonHours} yAccessor={value} stroke={palette[i % palette.length]} strokeWidth={2} />,
+              <GlyphSeries key={`${rule}-dots`} dataKey={`${rule} runs`} data={data} xAccessor={(r) => r.horizonHours} yAccessor={value} colorAccessor={() => palette[i % palette.length]} size={7} />,
+            ];
+          })}
+        </XYChart>
+      </div>
       <ul className="flex flex-wrap gap-4 px-2 text-xs text-ink-700">
         {rules.map((rule, i) => (
           <li key={rule} className="flex items-center gap-1">

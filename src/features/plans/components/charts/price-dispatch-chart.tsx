@@ -21,26 +21,31 @@ export function PriceDispatchChart({ split, timeZone, currency }: { split: Split
   return (
     <figure className="space-y-1 rounded bg-white p-2 shadow-sm">
       <figcaption className="px-2 text-sm font-medium text-ink-800">Price and dispatch</figcaption>
-      <XYChart height={180} theme={chartTheme} xScale={{ type: 'time' }} yScale={{ type: 'linear', nice: true, zero: false }} margin={chartMargin}
-        accessibilityLabel={`Price in ${currency}/MWh per step; the numbers are in the schedule table`}>
-        <Grid columns={false} numTicks={4} />
-        <Axis orientation="left" numTicks={4} label={`${currency}/MWh`} />
-        <LineSeries dataKey="price" data={split.delivery} xAccessor={x} yAccessor={(p) => p.step.priceImport} stroke={colours.ink} />
-        {split.lookahead.length > 0 && (
-          <LineSeries dataKey="price (lookahead)" data={split.lookahead} xAccessor={x} yAccessor={(p) => p.step.priceImport} stroke={colours.inkSoft} {...lookaheadLine} />
-        )}
-        <Tooltip<StepPoint> snapTooltipToDatumX showVerticalCrosshair renderTooltip={({ tooltipData }) => (tooltipData?.nearestDatum ? tooltip(tooltipData.nearestDatum.datum) : null)} />
-      </XYChart>
-      <XYChart height={170} theme={chartTheme} xScale={{ type: 'band', paddingInner: 0.15 }} yScale={{ type: 'linear', nice: true }} margin={chartMargin}
-        accessibilityLabel="Charge (above zero) and discharge (below zero) in kW per step">
-        <Grid columns={false} numTicks={4} />
-        <Axis orientation="bottom" tickValues={tickValues} tickFormat={(v: number) => timeTick(timeZone)(v)} />
-        <Axis orientation="left" numTicks={4} label="kW" />
-        <BarSeries dataKey="charge" data={part(true)} xAccessor={(p) => p.t} yAccessor={(p) => p.step.chargeKw} colorAccessor={() => colours.seaglass} />
-        <BarSeries dataKey="discharge" data={part(true)} xAccessor={(p) => p.t} yAccessor={(p) => -p.step.dischargeKw} colorAccessor={() => colours.inkSoft} />
-        <BarSeries dataKey="charge (lookahead)" data={part(false)} xAccessor={(p) => p.t} yAccessor={(p) => p.step.chargeKw} colorAccessor={() => colours.seaglassSoft} />
-        <BarSeries dataKey="discharge (lookahead)" data={part(false)} xAccessor={(p) => p.t} yAccessor={(p) => -p.step.dischargeKw} colorAccessor={() => colours.inkFaint} />
-      </XYChart>
+      {/* XYChart takes its width from its parent, which needs the height or the chart collapses onto what follows. */}
+      <div style={{ height: 180 }}>
+        <XYChart height={180} theme={chartTheme} xScale={{ type: 'time' }} yScale={{ type: 'linear', nice: true, zero: false }} margin={chartMargin}
+          accessibilityLabel={`Price in ${currency}/MWh per step; the numbers are in the schedule table`}>
+          <Grid columns={false} numTicks={4} />
+          <Axis orientation="left" numTicks={4} label={`${currency}/MWh`} />
+          <LineSeries dataKey="price" data={split.delivery} xAccessor={x} yAccessor={(p) => p.step.priceImport} stroke={colours.ink} />
+          {split.lookahead.length > 0 && (
+            <LineSeries dataKey="price (lookahead)" data={split.lookahead} xAccessor={x} yAccessor={(p) => p.step.priceImport} stroke={colours.inkSoft} {...lookaheadLine} />
+          )}
+          <Tooltip<StepPoint> snapTooltipToDatumX showVerticalCrosshair renderTooltip={({ tooltipData }) => (tooltipData?.nearestDatum ? tooltip(tooltipData.nearestDatum.datum) : null)} />
+        </XYChart>
+      </div>
+      <div style={{ height: 170 }}>
+        <XYChart height={170} theme={chartTheme} xScale={{ type: 'band', paddingInner: 0.15 }} yScale={{ type: 'linear', nice: true }} margin={chartMargin}
+          accessibilityLabel="Charge (above zero) and discharge (below zero) in kW per step">
+          <Grid columns={false} numTicks={4} />
+          <Axis orientation="bottom" tickValues={tickValues} tickFormat={(v: number) => timeTick(timeZone)(v)} />
+          <Axis orientation="left" numTicks={4} label="kW" />
+          <BarSeries dataKey="charge" data={part(true)} xAccessor={(p) => p.t} yAccessor={(p) => p.step.chargeKw} colorAccessor={() => colours.seaglass} />
+          <BarSeries dataKey="discharge" data={part(true)} xAccessor={(p) => p.t} yAccessor={(p) => -p.step.dischargeKw} colorAccessor={() => colours.inkSoft} />
+          <BarSeries dataKey="charge (lookahead)" data={part(false)} xAccessor={(p) => p.t} yAccessor={(p) => p.step.chargeKw} colorAccessor={() => colours.seaglassSoft} />
+          <BarSeries dataKey="discharge (lookahead)" data={part(false)} xAccessor={(p) => p.t} yAccessor={(p) => -p.step.dischargeKw} colorAccessor={() => colours.inkFaint} />
+        </XYChart>
+      </div>
     </figure>
   );
 }

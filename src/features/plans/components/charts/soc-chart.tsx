@@ -23,39 +23,42 @@ export function SocChart({ split, timeZone, energyKwh, bandSocPct }: Props) {
   return (
     <figure className="rounded bg-white p-2 shadow-sm">
       <figcaption className="px-2 text-sm font-medium text-ink-800">State of charge against the steady cycle</figcaption>
-      <XYChart height={260} theme={chartTheme} xScale={{ type: 'time' }} yScale={{ type: 'linear', domain: [0, 100] }} margin={chartMargin}
-        accessibilityLabel="SoC in % with the steady cycle and its band; the numbers are in the schedule table">
-        <Grid columns={false} numTicks={5} />
-        <Axis orientation="bottom" numTicks={6} tickFormat={timeTick(timeZone)} />
-        <Axis orientation="left" numTicks={5} label="SoC %" />
-        <AreaSeries dataKey="band" data={withSteady} xAccessor={x} yAccessor={(p) => pct(p.step.steadySocKwh)! + bandSocPct}
-          y0Accessor={(p) => pct(p.step.steadySocKwh)! - bandSocPct} fill={colours.seaglassBand} fillOpacity={0.9} renderLine={false} />
-        <LineSeries dataKey="steady cycle" data={withSteady} xAccessor={x} yAccessor={(p) => pct(p.step.steadySocKwh)} stroke={colours.seaglass} strokeWidth={1.5} />
-        <LineSeries dataKey="SoC" data={split.delivery} xAccessor={x} yAccessor={(p) => p.step.socPct} stroke={colours.ink} strokeWidth={2} />
-        {split.lookahead.length > 0 && (
-          <LineSeries dataKey="SoC (lookahead)" data={split.lookahead} xAccessor={x} yAccessor={(p) => p.step.socPct} stroke={colours.inkSoft} strokeWidth={2} {...lookaheadLine} />
-        )}
-        {split.entry.length > 0 && (
-          <GlyphSeries dataKey="entry arc" data={split.entry} xAccessor={x} yAccessor={(p) => p.step.socPct} colorAccessor={() => colours.inkSoft} size={6} />
-        )}
-        {split.leaving.length > 0 && (
-          <GlyphSeries dataKey="leaving arc" data={split.leaving} xAccessor={x} yAccessor={(p) => p.step.socPct} colorAccessor={() => colours.amber} size={7} />
-        )}
-        <Tooltip<StepPoint>
-          snapTooltipToDatumX
-          showVerticalCrosshair
-          renderTooltip={({ tooltipData }) => {
-            const p = tooltipData?.nearestDatum?.datum;
-            return p ? (
-              <span className="text-xs">
-                {formatLocalTime(p.t, timeZone)} {p.step.delivery ? '' : '(lookahead)'}
-                <br />
-                SoC {formatNumber(p.step.socPct, 1)} % · steady {formatNumber(pct(p.step.steadySocKwh), 1)} % · {p.step.arc.replace('near', 'near steady')}
-              </span>
-            ) : null;
-          }}
-        />
-      </XYChart>
+      {/* XYChart takes its width from its parent, which needs the height or the chart collapses onto what follows. */}
+      <div style={{ height: 260 }}>
+        <XYChart height={260} theme={chartTheme} xScale={{ type: 'time' }} yScale={{ type: 'linear', domain: [0, 100] }} margin={chartMargin}
+          accessibilityLabel="SoC in % with the steady cycle and its band; the numbers are in the schedule table">
+          <Grid columns={false} numTicks={5} />
+          <Axis orientation="bottom" numTicks={6} tickFormat={timeTick(timeZone)} />
+          <Axis orientation="left" numTicks={5} label="SoC %" />
+          <AreaSeries dataKey="band" data={withSteady} xAccessor={x} yAccessor={(p) => pct(p.step.steadySocKwh)! + bandSocPct}
+            y0Accessor={(p) => pct(p.step.steadySocKwh)! - bandSocPct} fill={colours.seaglassBand} fillOpacity={0.9} renderLine={false} />
+          <LineSeries dataKey="steady cycle" data={withSteady} xAccessor={x} yAccessor={(p) => pct(p.step.steadySocKwh)} stroke={colours.seaglass} strokeWidth={1.5} />
+          <LineSeries dataKey="SoC" data={split.delivery} xAccessor={x} yAccessor={(p) => p.step.socPct} stroke={colours.ink} strokeWidth={2} />
+          {split.lookahead.length > 0 && (
+            <LineSeries dataKey="SoC (lookahead)" data={split.lookahead} xAccessor={x} yAccessor={(p) => p.step.socPct} stroke={colours.inkSoft} strokeWidth={2} {...lookaheadLine} />
+          )}
+          {split.entry.length > 0 && (
+            <GlyphSeries dataKey="entry arc" data={split.entry} xAccessor={x} yAccessor={(p) => p.step.socPct} colorAccessor={() => colours.inkSoft} size={6} />
+          )}
+          {split.leaving.length > 0 && (
+            <GlyphSeries dataKey="leaving arc" data={split.leaving} xAccessor={x} yAccessor={(p) => p.step.socPct} colorAccessor={() => colours.amber} size={7} />
+          )}
+          <Tooltip<StepPoint>
+            snapTooltipToDatumX
+            showVerticalCrosshair
+            renderTooltip={({ tooltipData }) => {
+              const p = tooltipData?.nearestDatum?.datum;
+              return p ? (
+                <span className="text-xs">
+                  {formatLocalTime(p.t, timeZone)} {p.step.delivery ? '' : '(lookahead)'}
+                  <br />
+                  SoC {formatNumber(p.step.socPct, 1)} % · steady {formatNumber(pct(p.step.steadySocKwh), 1)} % · {p.step.arc.replace('near', 'near steady')}
+                </span>
+              ) : null;
+            }}
+          />
+        </XYChart>
+      </div>
       <ChartLegend
         items={[
           { colour: colours.ink, label: 'SoC, delivery window' },

@@ -11,17 +11,21 @@ export function ValueChart({ split, timeZone, currency }: { split: SplitSteps; t
   return (
     <figure className="rounded bg-white p-2 shadow-sm">
       <figcaption className="px-2 text-sm font-medium text-ink-800">Stored-energy value against its steady value</figcaption>
-      <XYChart height={220} theme={chartTheme} xScale={{ type: 'time' }} yScale={{ type: 'linear', nice: true, zero: false }} margin={chartMargin}
-        accessibilityLabel={`Value of one more MWh stored, ${currency}/MWh, and the steady cycle's value`}>
-        <Grid columns={false} numTicks={4} />
-        <Axis orientation="bottom" numTicks={6} tickFormat={timeTick(timeZone)} />
-        <Axis orientation="left" numTicks={4} label={`${currency}/MWh`} />
-        <LineSeries dataKey="steady value" data={steady} xAccessor={x} yAccessor={(p) => p.step.steadyValue} stroke={colours.seaglass} />
-        <LineSeries dataKey="stored-energy value" data={split.delivery} xAccessor={x} yAccessor={(p) => p.step.storedEnergyValue} stroke={colours.ink} strokeWidth={2} />
-        {split.lookahead.length > 0 && (
-          <LineSeries dataKey="value (lookahead)" data={split.lookahead} xAccessor={x} yAccessor={(p) => p.step.storedEnergyValue} stroke={colours.inkSoft} {...lookaheadLine} />
-        )}
-      </XYChart>
+      {/* XYChart takes its width from its parent, which needs the height or the chart collapses onto what follows. */}
+      <div style={{ height: 220 }}>
+        <XYChart height={220} theme={chartTheme} xScale={{ type: 'time' }} yScale={{ type: 'linear', nice: true, zero: false }} margin={chartMargin}
+          accessibilityLabel={`Value of one more MWh stored, ${currency}/MWh, and the steady cycle's value`}>
+          <Grid columns={false} numTicks={4} />
+          {/* Half width: fewer time labels, or they run together. */}
+          <Axis orientation="bottom" numTicks={3} tickFormat={timeTick(timeZone)} />
+          <Axis orientation="left" numTicks={4} label={`${currency}/MWh`} />
+          <LineSeries dataKey="steady value" data={steady} xAccessor={x} yAccessor={(p) => p.step.steadyValue} stroke={colours.seaglass} />
+          <LineSeries dataKey="stored-energy value" data={split.delivery} xAccessor={x} yAccessor={(p) => p.step.storedEnergyValue} stroke={colours.ink} strokeWidth={2} />
+          {split.lookahead.length > 0 && (
+            <LineSeries dataKey="value (lookahead)" data={split.lookahead} xAccessor={x} yAccessor={(p) => p.step.storedEnergyValue} stroke={colours.inkSoft} {...lookaheadLine} />
+          )}
+        </XYChart>
+      </div>
       <ChartLegend
         items={[
           { colour: colours.ink, label: 'stored-energy value' },
