@@ -52,3 +52,15 @@ export async function screenshot(page: Page, name: string) {
   await page.screenshot({ path: path.join(screenshotDir, `${name}.png`) });
   if (grow) await page.setViewportSize(viewport);
 }
+
+/** Runs a journey; when it fails, saves a shot of every page still open (`FAILED-<name>-<n>`) before failing. */
+export async function withFailureShots(name: string, pages: () => Page[], journey: () => Promise<void>): Promise<void> {
+  try {
+    await journey();
+  } catch (error) {
+    for (const [n, page] of pages().entries()) {
+      if (!page.isClosed()) await screenshot(page, `FAILED-${name}-${n + 1}`).catch(() => undefined);
+    }
+    throw error;
+  }
+}
