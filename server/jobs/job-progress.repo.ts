@@ -86,12 +86,12 @@ export async function markJobRetrying(db: DbOrTx, jobId: string, attempt: number
   return rows.length === 1;
 }
 
-/** Running jobs whose worker has not sent a heartbeat for `staleSeconds`. */
+/** Running (or retrying) jobs whose worker has not sent a heartbeat for `staleSeconds`. */
 export async function findStaleJobs(db: DbOrTx, staleSeconds: number): Promise<JobProgressRow[]> {
   return db
     .select()
     .from(jobProgress)
-    .where(and(eq(jobProgress.state, 'running'), lt(jobProgress.heartbeatAt, sql`now() - make_interval(secs => ${staleSeconds})`)));
+    .where(and(inArray(jobProgress.state, ['running', 'retrying']), lt(jobProgress.heartbeatAt, sql`now() - make_interval(secs => ${staleSeconds})`)));
 }
 
 export async function getJobProgress(db: DbOrTx, jobId: string): Promise<JobProgressRow | undefined> {

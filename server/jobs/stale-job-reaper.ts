@@ -21,6 +21,11 @@ export async function reapStaleJobs(boss: PgBoss, config: JobsConfig): Promise<n
     if (!job || !['active', 'created', 'retry'].includes(job.state)) continue;
     const sameAttempt = job.retryCount + 1 === row.attempt;
     if (job.state === 'active' && !sameAttempt) continue; // a newer attempt is running
+    if (row.state === 'retrying') {
+      // The attempt gave up but its hand-back to pg-boss was lost (process stopped right then): hand it back now.
+      if (job.state === 'active') await boss.fail(row.queue, row.jobId, { message: row.error ?? lostWorker });
+      continue;
+    }
     if (!(await markJobRetrying(db, row.jobId, row.attempt, lostWorker))) continue; // another reaper won
     if (job.state === 'active') await boss.fail(row.queue, row.jobId, { message: lostWorker });
     reaped += 1;
