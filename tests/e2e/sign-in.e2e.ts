@@ -1,19 +1,19 @@
 /**
  * The demo accounts sign in through the browser, each sees only the navigation its role
- * may use (DESIGN section 5), and signs out again. Keyboard only for one of them.
+ * may use (DESIGN section 5), and signs out again; the form is driven with the keyboard.
  */
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser, Page } from 'playwright-core';
 import { launchBrowser, newLocalContext, screenshot } from './support/browser';
+import { appUrl, signIn, type DemoRole } from './support/session';
 
 const everyone = ['Overview', 'Sites', 'Profiles', 'Plans', 'Studies'];
-const demo = [
-  { email: 'viewer@slackwater.example', nav: everyone },
-  { email: 'planner@slackwater.example', nav: everyone },
-  { email: 'approver@slackwater.example', nav: [...everyone, 'Sign-off'] },
-  { email: 'admin@slackwater.example', nav: [...everyone, 'Sign-off', 'Users', 'Audit', 'Mail outbox'] },
-] as const;
-const password = 'slackwater-demo';
+const demo: readonly { role: DemoRole; nav: readonly string[] }[] = [
+  { role: 'viewer', nav: everyone },
+  { role: 'planner', nav: everyone },
+  { role: 'approver', nav: [...everyone, 'Sign-off'] },
+  { role: 'admin', nav: [...everyone, 'Sign-off', 'Users', 'Audit', 'Mail outbox'] },
+];
 
 async function navLabels(page: Page) {
   const nav = page.getByRole('navigation', { name: 'Main' });
@@ -33,7 +33,7 @@ describe('signing in with the demo accounts', () => {
   it('sends an anonymous visitor to the sign-in page, which shows the error for a wrong password', async () => {
     const { context, offsite } = await newLocalContext(browser);
     const page = await context.newPage();
-    await page.goto(`${inject('baseUrl')}/users`);
+    await page.goto(appUrl('/users'));
     await page.waitForURL(/\/sign-in\?next=%2Fusers$/);
     await page.getByRole('heading', { name: 'Sign in' }).waitFor();
     await page.evaluate(() => document.fonts.ready);
@@ -50,37 +50,28 @@ describe('signing in with the demo accounts', () => {
   });
 
   for (const account of demo) {
-    it(`${account.email} signs in, sees ${account.nav.length} navigation links, and signs out`, async () => {
+    it(`the demo ${account.role} signs in with the keyboard, sees ${account.nav.length} navigation links, and signs out`, async () => {
       const { context, offsite } = await newLocalContext(browser);
       const page = await context.newPage();
-      await page.goto(`${inject('baseUrl')}/sign-in`);
-      await page.getByLabel('E-mail address').fill(account.email);
-      await page.getByLabel('Password').fill(password);
-      await page.getByRole('button', { name: 'Sign in' }).click();
+      await signIn(page, account.role);
       expect(await navLabels(page)).toEqual([...account.nav]);
-      const role = account.email.split('@')[0] ?? '';
-      await screenshot(page, `home-${role}`);
+      await screenshot(page, `home-${account.role}`);
 
       await page.getByRole('button', { name: /Account menu/ }).click();
-      await expect(page.getByText(`Signed in as ${account.email}`).isVisible()).resolves.toBe(true);
+      await expect(page.getByText(`Signed in as ${account.role}@slackwater.example`).isVisible()).resolves.toBe(true);
       await page.getByRole('button', { name: 'Sign out' }).click();
       await page.waitForURL(/\/sign-in$/);
-      await page.goto(`${inject('baseUrl')}/`);
+      await page.goto(appUrl('/'));
       await page.waitForURL(/\/sign-in$/);
       expect(offsite).toEqual([]);
       await context.close();
     });
   }
 
-  it('works with the keyboard alone, and the admin pages open for the admin', async () => {
+  it('opens the admin pages for the admin, after sign-in on the page first asked for', async () => {
     const { context } = await newLocalContext(browser);
     const page = await context.newPage();
-    await page.goto(`${inject('baseUrl')}/sign-in?next=%2Fusers`);
-    await page.getByLabel('E-mail address').focus();
-    await page.keyboard.type('admin@slackwater.example');
-    await page.keyboard.press('Tab');
-    await page.keyboard.type(password);
-    await page.keyboard.press('Enter');
+    await signIn(page, 'admin', '/users');
     await page.waitForURL(/\/users$/);
     await page.getByRole('heading', { name: 'Users' }).waitFor();
     await page.getByRole('cell', { name: 'planner@slackwater.example', exact: true }).waitFor();
@@ -99,10 +90,7 @@ describe('signing in with the demo accounts', () => {
     const invitee = `invitee-${Date.now()}@slackwater.example`;
     const { context: adminContext } = await newLocalContext(browser);
     const admin = await adminContext.newPage();
-    await admin.goto(`${inject('baseUrl')}/sign-in?next=%2Fusers`);
-    await admin.getByLabel('E-mail address').fill('admin@slackwater.example');
-    await admin.getByLabel('Password').fill(password);
-    await admin.getByRole('button', { name: 'Sign in' }).click();
+    await signIn(admin, 'admin', '/users');
     await admin.getByRole('heading', { name: 'Invite a user' }).waitFor();
     const form = admin.getByRole('form', { name: 'Invite a user' });
     await form.getByLabel('E-mail address').fill(invitee);
@@ -150,10 +138,7 @@ describe('signing in with the demo accounts', () => {
   it('shows a viewer who types an admin address the page is not for them', async () => {
     const { context } = await newLocalContext(browser);
     const page = await context.newPage();
-    await page.goto(`${inject('baseUrl')}/sign-in?next=%2Faudit`);
-    await page.getByLabel('E-mail address').fill('viewer@slackwater.example');
-    await page.getByLabel('Password').fill(password);
-    await page.getByRole('button', { name: 'Sign in' }).click();
+    await signIn(page, 'viewer', '/audit');
     await page.getByRole('heading', { name: 'Not available for your role' }).waitFor();
     await context.close();
   });

@@ -1,10 +1,20 @@
 import type { ReactNode } from 'react';
+import { Link } from 'react-router-dom';
 import { Logo } from '@/components/logo';
 import { TideIllustration } from './tide-illustration';
 
 /** The full-width submit button of the pages seen before signing in. */
 export const wideButton =
   'w-full rounded bg-seaglass-700 px-4 py-2.5 text-base font-semibold text-white hover:bg-seaglass-600 disabled:cursor-not-allowed disabled:opacity-50';
+
+/** A link between the pages seen before signing in. */
+export function FrameLink({ to, children }: { to: string; children: ReactNode }) {
+  return (
+    <Link to={to} className="font-medium text-seaglass-700 underline underline-offset-2 hover:text-seaglass-600">
+      {children}
+    </Link>
+  );
+}
 
 /** The frame of the pages seen before signing in: the brand on ink navy, the form on light. */
 export function AuthFrame({ title, intro, children }: { title: string; intro?: ReactNode; children: ReactNode }) {

@@ -3,27 +3,23 @@ import { buttonClass } from '@/components/form-field';
 import { Notice, TextField } from '@/components/text-field';
 import { useChangePassword } from '../api/change-password';
 import { fieldError, formError } from './field-errors';
-import { NewPasswordFields, newPasswordErrors, type NewPassword } from './new-password-fields';
+import { NewPasswordFields, useNewPasswordForm } from './new-password-fields';
 
 /** Change one's own password; every other session of the account ends. */
 export function ChangePasswordPage() {
   const change = useChangePassword();
   const [current, setCurrent] = useState('');
-  const [value, setValue] = useState<NewPassword>({ password: '', confirm: '' });
-  const [tried, setTried] = useState(false);
-  const local = tried ? newPasswordErrors(value) : {};
+  const form = useNewPasswordForm();
 
   const submit = (event: FormEvent) => {
     event.preventDefault();
-    setTried(true);
-    if (Object.keys(newPasswordErrors(value)).length > 0) return;
+    if (!form.check()) return;
     change.mutate(
-      { currentPassword: current, newPassword: value.password },
+      { currentPassword: current, newPassword: form.value.password },
       {
         onSuccess: () => {
           setCurrent('');
-          setValue({ password: '', confirm: '' });
-          setTried(false);
+          form.reset();
         },
       },
     );
@@ -51,9 +47,9 @@ export function ChangePasswordPage() {
         />
         <NewPasswordFields
           idPrefix="change"
-          value={value}
-          onChange={setValue}
-          errors={{ password: local.password ?? fieldError(change.error, 'newPassword'), confirm: local.confirm }}
+          value={form.value}
+          onChange={form.setValue}
+          errors={{ password: form.errors.password ?? fieldError(change.error, 'newPassword'), confirm: form.errors.confirm }}
         />
         {message && <Notice tone="error">{message}</Notice>}
         <button type="submit" disabled={change.isPending} className={buttonClass.primary}>

@@ -1,8 +1,7 @@
 import { useState, type FormEvent } from 'react';
-import { Link } from 'react-router-dom';
 import { Notice, TextField } from '@/components/text-field';
 import { useRequestPasswordReset } from '../api/request-password-reset';
-import { AuthFrame, wideButton } from './auth-frame';
+import { AuthFrame, FrameLink, wideButton } from './auth-frame';
 import { fieldError, formError } from './field-errors';
 
 export function ForgotPasswordPage() {
@@ -38,9 +37,7 @@ export function ForgotPasswordPage() {
         </form>
       )}
       <p className="mt-6 text-sm">
-        <Link to="/sign-in" className="font-medium text-seaglass-700 underline underline-offset-2 hover:text-seaglass-600">
-          Back to sign-in
-        </Link>
+        <FrameLink to="/sign-in">Back to sign-in</FrameLink>
       </p>
     </AuthFrame>
   );

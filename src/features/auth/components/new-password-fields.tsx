@@ -1,3 +1,4 @@
+import { useState } from 'react';
 import { newPasswordSchema, passwordRules } from '@shared/schemas/auth';
 import { TextField } from '@/components/text-field';
 
@@ -12,6 +13,28 @@ export function newPasswordErrors(value: NewPassword): { password?: string; conf
   return {
     ...(shape.success ? {} : { password: shape.error.issues[0]?.message }),
     ...(value.confirm !== value.password ? { confirm: 'The two passwords differ.' } : {}),
+  };
+}
+
+const empty: NewPassword = { password: '', confirm: '' };
+
+/** The new password's state; errors show once the user has tried to send the form. */
+export function useNewPasswordForm() {
+  const [value, setValue] = useState<NewPassword>(empty);
+  const [tried, setTried] = useState(false);
+  return {
+    value,
+    setValue,
+    errors: tried ? newPasswordErrors(value) : {},
+    /** Marks the form as tried; true when it may be sent. */
+    check: () => {
+      setTried(true);
+      return Object.keys(newPasswordErrors(value)).length === 0;
+    },
+    reset: () => {
+      setValue(empty);
+      setTried(false);
+    },
   };
 }
 

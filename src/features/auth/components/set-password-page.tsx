@@ -1,10 +1,10 @@
 import { useState, type FormEvent } from 'react';
-import { Link, useNavigate } from 'react-router-dom';
+import { useNavigate } from 'react-router-dom';
 import { Notice } from '@/components/text-field';
 import { usePasswordLink, useRedeemPasswordLink } from '../api/password-links';
-import { AuthFrame, wideButton } from './auth-frame';
+import { AuthFrame, FrameLink, wideButton } from './auth-frame';
 import { fieldError, formError } from './field-errors';
-import { NewPasswordFields, newPasswordErrors, type NewPassword } from './new-password-fields';
+import { NewPasswordFields, useNewPasswordForm } from './new-password-fields';
 
 /**
  * The token arrives in the URL fragment (`#token=…`): it is read once and the address bar
@@ -21,16 +21,12 @@ export function SetPasswordPage() {
   const link = usePasswordLink(token);
   const redeem = useRedeemPasswordLink();
   const navigate = useNavigate();
-  const [value, setValue] = useState<NewPassword>({ password: '', confirm: '' });
-  const [tried, setTried] = useState(false);
-
-  const local = tried ? newPasswordErrors(value) : {};
+  const form = useNewPasswordForm();
   const submit = (event: FormEvent) => {
     event.preventDefault();
-    setTried(true);
-    if (!token || Object.keys(newPasswordErrors(value)).length > 0) return;
+    if (!form.check() || !token) return;
     redeem.mutate(
-      { token, password: value.password },
+      { token, password: form.value.password },
       {
         onSuccess: () =>
           void navigate('/sign-in', { replace: true, state: { notice: 'Your password is set. Sign in with it now.' } }),
@@ -44,10 +40,8 @@ export function SetPasswordPage() {
       <AuthFrame title="This link does not work">
         <Notice tone="error">{reason}</Notice>
         <p className="mt-6 text-sm text-ink-700">
-          <Link to="/forgot-password" className="font-medium text-seaglass-700 underline underline-offset-2">
-            Ask for a new link
-          </Link>{' '}
-          or, if you were invited, ask your administrator to send the invitation again.
+          <FrameLink to="/forgot-password">Ask for a new link</FrameLink> or, if you were invited, ask your administrator to send
+          the invitation again.
         </p>
       </AuthFrame>
     );
@@ -75,9 +69,9 @@ export function SetPasswordPage() {
       <form onSubmit={submit} noValidate className="space-y-5">
         <NewPasswordFields
           idPrefix="set"
-          value={value}
-          onChange={setValue}
-          errors={{ password: local.password ?? fieldError(redeem.error, 'password'), confirm: local.confirm }}
+          value={form.value}
+          onChange={form.setValue}
+          errors={{ password: form.errors.password ?? fieldError(redeem.error, 'password'), confirm: form.errors.confirm }}
         />
         {message && <Notice tone="error">{message}</Notice>}
         <button type="submit" disabled={redeem.isPending} className={wideButton}>

@@ -1,9 +1,9 @@
 import { useState, type FormEvent } from 'react';
-import { Link, Navigate, useLocation, useNavigate, useSearchParams } from 'react-router-dom';
+import { Navigate, useLocation, useNavigate, useSearchParams } from 'react-router-dom';
 import { Notice, TextField } from '@/components/text-field';
 import { useMe } from '../api/get-me';
 import { useSignIn } from '../api/sign-in';
-import { AuthFrame, wideButton } from './auth-frame';
+import { AuthFrame, FrameLink, wideButton } from './auth-frame';
 import { fieldError, formError, safeNextPath } from './field-errors';
 
 export function SignInPage() {
@@ -61,12 +61,7 @@ export function SignInPage() {
         </button>
       </form>
       <p className="mt-6 text-sm text-ink-700">
-        <Link
-          to="/forgot-password"
-          className="font-medium text-seaglass-700 underline underline-offset-2 hover:text-seaglass-600"
-        >
-          Forgot your password?
-        </Link>
+        <FrameLink to="/forgot-password">Forgot your password?</FrameLink>
       </p>
     </AuthFrame>
   );

@@ -76,6 +76,26 @@ function buildColumns(report: ReportOutcome) {
   ]);
 }
 
+function FilterSelect(props: {
+  label: string;
+  value: string;
+  onValue: (v: string) => void;
+  options: readonly (readonly [string, string])[];
+}) {
+  return (
+    <label className="flex flex-col gap-1 text-sm font-medium text-ink-800">
+      {props.label}
+      <select value={props.value} onChange={(e) => props.onValue(e.target.value)} className={inputClass}>
+        {props.options.map(([value, text]) => (
+          <option key={value} value={value}>
+            {text}
+          </option>
+        ))}
+      </select>
+    </label>
+  );
+}
+
 export function UsersTable({ users, report }: { users: User[]; report: ReportOutcome }) {
   const [columns] = useState(() => buildColumns(report));
   const table = useTable({
@@ -102,36 +122,18 @@ export function UsersTable({ users, report }: { users: User[]; report: ReportOut
             className={`${inputClass} w-64`}
           />
         </label>
-        <label className="flex flex-col gap-1 text-sm font-medium text-ink-800">
-          Role
-          <select
-            value={(roleColumn?.getFilterValue() as string | undefined) ?? ''}
-            onChange={(e) => roleColumn?.setFilterValue(e.target.value || undefined)}
-            className={inputClass}
-          >
-            <option value="">All roles</option>
-            {roles.map((r) => (
-              <option key={r} value={r}>
-                {roleLabels[r]}
-              </option>
-            ))}
-          </select>
-        </label>
-        <label className="flex flex-col gap-1 text-sm font-medium text-ink-800">
-          Status
-          <select
-            value={(statusColumn?.getFilterValue() as string | undefined) ?? ''}
-            onChange={(e) => statusColumn?.setFilterValue(e.target.value || undefined)}
-            className={inputClass}
-          >
-            <option value="">All</option>
-            {userStatuses.map((s) => (
-              <option key={s} value={s}>
-                {s}
-              </option>
-            ))}
-          </select>
-        </label>
+        <FilterSelect
+          label="Role"
+          value={(roleColumn?.getFilterValue() as string | undefined) ?? ''}
+          onValue={(v) => roleColumn?.setFilterValue(v || undefined)}
+          options={[['', 'All roles'], ...roles.map((r) => [r, roleLabels[r]] as const)]}
+        />
+        <FilterSelect
+          label="Status"
+          value={(statusColumn?.getFilterValue() as string | undefined) ?? ''}
+          onValue={(v) => statusColumn?.setFilterValue(v || undefined)}
+          options={[['', 'All'], ...userStatuses.map((st) => [st, st] as const)]}
+        />
         <p className="ml-auto text-sm text-ink-500" aria-live="polite">
           {rows.length} of {users.length} users
         </p>
