@@ -25,6 +25,8 @@ import { solveReferencePath } from '../server/engine/reference/solve-reference-p
 import { runClosedLoop } from '../server/engine/study/run-closed-loop';
 import { runHorizonStudy } from '../server/engine/study/run-horizon-study';
 import type { BatteryParams } from '../server/engine/types';
+import { benchDp } from '../server/engine/dp/bench';
+import { spawnSync } from 'node:child_process';
 
 const glpk = await GLPK();
 const log = (message: string) => process.stderr.write(`bench: ${message}\n`);
@@ -202,11 +204,39 @@ async function sixHorizonStudy() {
   };
 }
 
+/**
+ * Issue 9: the exact dynamic program (CPU ms) against this file's plain GLPK
+ * window in the same run; the six-horizon study and the `cli study` command on it.
+ */
+async function dynamicProgram() {
+  const figures = benchDp({
+    problem: problemFor(inputs, 0, STEPS, e0, { kind: 'free' }),
+    glpkWindow: (s, n, start) => {
+      const [c, d] = plainGlpkWindow(s, n, start);
+      return start + etaC * c - d / etaD;
+    },
+  });
+  const horizonsHours = [6, 12, 24, 48, 96, 168];
+  const terminals = [{ kind: 'free' }, { kind: 'steady-value' }] as const;
+  const study = await timedAsync(() => runHorizonStudy(inputs, { horizonsHours, replanHours: 1, terminals: [...terminals], method: 'auto' }));
+  if (!study.value.ok) throw new Error(study.value.issue.message);
+  const cliStart = performance.now();
+  const cli = spawnSync('node_modules/.bin/tsx', ['server/engine/cli/main.ts', 'study', '--prices', 'sample-data/prices-2026-hourly.csv',
+    '--battery', 'sample-data/demo-battery.json', '--site', 'sample-data/demo-site.json', '--horizons', horizonsHours.join(','), '--replan', '1',
+    '--terminal', 'free,steady-value'], { encoding: 'utf8' });
+  return {
+    ...figures,
+    sixHorizonStudyOnDp: { seconds: round(study.seconds), cpuSeconds: round(study.cpuSeconds), workers: study.value.study.workers },
+    cliStudyOnSampleData: { seconds: round((performance.now() - cliStart) / 1000), exitCode: cli.status },
+  };
+}
+
 const SECTIONS: Section[] = [
   { name: 'backendCrossover', run: backendCrossover },
   { name: 'referencePath', run: referencePath },
   { name: 'closedLoop24h', run: closedLoop24h },
   { name: 'sixHorizonStudy', run: sixHorizonStudy },
+  { name: 'dynamicProgram', run: dynamicProgram },
 ];
 
 const only = process.argv.slice(2);

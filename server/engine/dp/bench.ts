@@ -18,8 +18,13 @@ export interface DpBenchOptions {
   readonly problem?: DispatchProblem;
   /** DP timings are the best of this many runs (default 5). */
   readonly repeats?: number;
-  /** Measure the GLPK baselines here (default true); or pass CPU milliseconds measured elsewhere in the same run. */
-  readonly glpk?: boolean | { readonly yearMs: number; readonly loopMs: Readonly<Record<number, number>> };
+  /** Measure the GLPK baselines (default true). */
+  readonly glpk?: boolean;
+  /**
+   * The plain GLPK solve of steps [start, start + steps) from energy e0, returning
+   * e_1 (kWh). Default: glpk.js on the project's model builder, no tie-break.
+   */
+  readonly glpkWindow?: (start: number, steps: number, e0: number) => number;
   /** Closed-loop horizons compared with a plain GLPK loop, hours (default [24, 168]). */
   readonly loopHorizonsHours?: readonly number[];
   /** Time the GLPK loop on every k-th window only and scale up, for horizons above 48 h (default 8). */
@@ -103,11 +108,13 @@ function windowOf(p: DispatchProblem, from: number, to: number, e0: number): Dis
   };
 }
 
-/** One plain glpk.js solve of a problem (the project's model builder, no tie-break); returns e_1. */
-function glpkSolve(p: DispatchProblem): number {
-  const model = buildDispatchModel(p);
-  const res = glpk.solve(toGlpkModel(model.lp), { msglev: glpk.GLP_MSG_OFF, presol: false });
-  return res.result.vars[`x${model.layout.energy}`] ?? Number.NaN;
+/** One plain glpk.js solve of a window (the project's model builder, no tie-break); returns e_1. */
+function glpkWindowOf(p: DispatchProblem): (start: number, steps: number, e0: number) => number {
+  return (start, steps, e0) => {
+    const model = buildDispatchModel(windowOf(p, start, start + steps, e0));
+    const res = glpk.solve(toGlpkModel(model.lp), { msglev: glpk.GLP_MSG_OFF, presol: false });
+    return res.result.vars[`x${model.layout.energy}`] ?? Number.NaN;
+  };
 }
 
 /**
@@ -115,13 +122,15 @@ function glpkSolve(p: DispatchProblem): number {
  * `every` > 1 only every k-th window is solved, from the states the DP's
  * closed loop visits, and the time is scaled to all windows.
  */
-function glpkLoopMs(p: DispatchProblem, horizon: number, every: number, dpSoc: readonly number[]): number {
+function glpkLoopMs(
+  p: DispatchProblem, solveWindow: (start: number, steps: number, e0: number) => number, horizon: number, every: number, dpSoc: readonly number[],
+): number {
   const n = p.priceImport.length;
   let solved = 0;
   const ms = cpuMs(() => {
     let e = p.initialEnergyKwh;
     for (let s = 0; s < n; s += every) {
-      const e1 = glpkSolve(windowOf(p, s, Math.min(n, s + horizon), every === 1 ? e : (dpSoc[s] ?? e)));
+      const e1 = solveWindow(s, Math.min(n, s + horizon) - s, every === 1 ? e : (dpSoc[s] ?? e));
       if (every === 1) e = e1;
       solved++;
     }
@@ -136,11 +145,10 @@ export function benchDp(options: DpBenchOptions = {}): DpBenchResult {
   const repeats = options.repeats ?? 5;
   const n = p.priceImport.length;
   const steps = (hours: number): number => Math.round(hours / p.stepHours);
-  const given = typeof options.glpk === 'object' ? options.glpk : null;
-  const measure = options.glpk !== false && given === null;
+  const measure = options.glpk !== false;
+  const solveWindow = options.glpkWindow ?? glpkWindowOf(p);
   const dpMs = bestOf(repeats * 3, () => solveDispatchDp(p));
-  let glpkYearMs: number | null = given?.yearMs ?? null;
-  if (measure) glpkYearMs = cpuMs(() => glpkSolve(p));
+  const glpkYearMs = measure ? cpuMs(() => solveWindow(0, n, p.initialEnergyKwh)) : null;
   const loop = createDpClosedLoop(p);
   const closedLoop = (options.loopHorizonsHours ?? [24, 168]).map((hours) => {
     const h = steps(hours);
@@ -152,10 +160,10 @@ export function benchDp(options: DpBenchOptions = {}): DpBenchResult {
     const dpColdMs = bestOf(Math.min(repeats, 2), () => loop.run({ horizonSteps: h, replanSteps: 1, warm: false }));
     const dpWarmWithPlansMs = bestOf(Math.min(repeats, 3), () => loop.run({ horizonSteps: h, replanSteps: 1, onPlan: () => undefined }));
     const every = hours > 48 ? (options.glpkLoopEvery ?? 8) : 1;
-    const glpkMs = given?.loopMs[hours] ?? (measure ? glpkLoopMs(p, h, every, warmRun.socKwh) : null);
+    const glpkMs = measure ? glpkLoopMs(p, solveWindow, h, every, warmRun.socKwh) : null;
     return {
       horizonHours: hours, dpWarmMs, dpColdMs, dpWarmWithPlansMs, warmEqualsCold, glpkLoopMs: glpkMs,
-      glpkLoopEvery: given ? 1 : every, dpShareOfGlpkPct: glpkMs === null ? null : (100 * dpWarmMs) / glpkMs,
+      glpkLoopEvery: every, dpShareOfGlpkPct: glpkMs === null ? null : (100 * dpWarmMs) / glpkMs,
     };
   });
   // steady-value needs λ̄ by time of day; the reference path's mean stored-energy value per
