@@ -72,3 +72,11 @@ export async function waitForPlan(page: Page, id: string, timeout = 90_000): Pro
   if (!plan?.results) throw new Error(`Plan ${id} has no results (job ${plan?.job?.state}).`);
   return plan;
 }
+
+/** Takes a computed plan through sign-off by API: the page's user submits, `approverPage`'s user approves. */
+export async function submitAndApprove(submitterPage: Page, approverPage: Page, id: string): Promise<void> {
+  const draft = await apiGet<{ version: number }>(submitterPage, `/api/plans/${id}/sign-off`);
+  await apiPostJson(submitterPage, `/api/plans/${id}/submit`, { version: draft.version });
+  const submitted = await apiGet<{ version: number }>(approverPage, `/api/plans/${id}/sign-off`);
+  await apiPostJson(approverPage, `/api/plans/${id}/approve`, { version: submitted.version, comment: 'Approved for the export journey.' });
+}
