@@ -5,7 +5,7 @@
  * on first use.
  */
 import nodemailer, { type Transporter } from 'nodemailer';
-import type { AppConfig } from '../config';
+import { loadConfig, type AppConfig } from '../config';
 import { AppError } from '../http/app-error';
 import { startFakeSmtp, type FakeSmtp } from './fake-smtp-server';
 
@@ -69,13 +69,8 @@ const oneLine = (s: string) => s.replace(/[\r\n\t\u2028\u2029]+/g, ' ').trim();
  * whether that fails the request.
  */
 export async function sendMail(mail: MailInput): Promise<void> {
-  const s = settings ?? {
-    SMTP_HOST: '127.0.0.1',
-    SMTP_PORT: 0,
-    SMTP_SECURE: 'false',
-    MAIL_FROM: 'Slackwater <no-reply@slackwater.example>',
-    FAKE_SMTP: 'true',
-  };
+  // A process that never called configureMail (a job worker, a script) reads the environment itself.
+  const s = (settings ??= loadConfig());
   transporter ??= buildTransport(s);
   const transport = await transporter.catch((error: unknown) => {
     transporter = null;
