@@ -104,27 +104,25 @@ function runWindows(ctx: DpContext, o: DpClosedLoopOptions): DpClosedLoopResult 
   const warm = o.warm ?? true;
   const solver = new WindowSolver(ctx, Math.min(h, n));
   const realized = new PlanSeries(n);
-  const scratch = o.onPlan ? new PlanSeries(Math.min(h, n)) : null;
-  const soc = scratch ? new Float64Array(Math.min(h, n) + 1) : null;
+  const soc = o.onPlan ? new Float64Array(Math.min(h, n) + 1) : null;
   let e = p.initialEnergyKwh;
   let windows = 0;
   for (let s = 0; s < n; s += r) {
     const end = Math.min(s + h, n);
     const applyTo = Math.min(s + r, n);
     const rule = o.terminalForWindow ? o.terminalForWindow(s, end) : p.terminal;
-    const failure = solver.solveWindow(s, end, e, rule, scratch ? end : applyTo, warm);
+    const failure = solver.solveWindow(s, end, e, rule, o.onPlan ? end : applyTo, warm);
     windows++;
     if (failure !== null) {
       return failed(emptyDpSolution('infeasible', `the window starting at step ${s} has no feasible plan: ${failure}`), windows, solver.stats);
     }
-    if (scratch && soc && o.onPlan) {
-      scratch.copyFrom(solver, s, end, s, true);
+    if (soc && o.onPlan) {
+      const view = solver.planViews(s, end);
       soc[0] = e;
-      soc.set(scratch.y.subarray(0, end - s), 1);
+      soc.set(view.y, 1);
       o.onPlan({
         startStep: s, endStep: end, terminal: rule, socKwh: soc.subarray(0, end - s + 1),
-        chargeKw: scratch.c.subarray(0, end - s), dischargeKw: scratch.d.subarray(0, end - s),
-        storedEnergyValue: scratch.value.subarray(0, end - s),
+        chargeKw: view.c, dischargeKw: view.d, storedEnergyValue: view.value,
       });
     }
     realized.copyFrom(solver, s, applyTo, 0);

@@ -12,6 +12,10 @@ import type { ForwardStepResult } from './forward-step';
  * muLo/muHi carry the upstream part (steps ≤ t); intersecting it with
  * −∂V_{t+1} gives every value some optimal LP dual takes, and we report its
  * midpoint (its finite end when one end is open).
+ *
+ * c, d, y and value are written twice (at r and r + size), so any window of up
+ * to `size` steps is one contiguous run of them: open-loop plans are handed
+ * out as views, without copying.
  */
 export class PlanRing {
   readonly tTag: Int32Array;
@@ -37,14 +41,14 @@ export class PlanRing {
     this.eIn = new Float64Array(size);
     this.muInLo = new Float64Array(size);
     this.muInHi = new Float64Array(size);
-    this.y = new Float64Array(size);
-    this.c = new Float64Array(size);
-    this.d = new Float64Array(size);
+    this.y = new Float64Array(2 * size);
+    this.c = new Float64Array(2 * size);
+    this.d = new Float64Array(2 * size);
     this.m = new Float64Array(size);
     this.x = new Float64Array(size);
     this.muLo = new Float64Array(size);
     this.muHi = new Float64Array(size);
-    this.value = new Float64Array(size);
+    this.value = new Float64Array(2 * size);
     this.rangeLo = new Float64Array(size);
     this.rangeHi = new Float64Array(size);
   }
@@ -55,9 +59,13 @@ export class PlanRing {
     this.eIn[r] = e;
     this.muInLo[r] = muLo;
     this.muInHi[r] = muHi;
+    const r2 = r + this.tTag.length;
     this.y[r] = fs.y;
+    this.y[r2] = fs.y;
     this.c[r] = fs.c;
+    this.c[r2] = fs.c;
     this.d[r] = fs.d;
+    this.d[r2] = fs.d;
     const q = netKw + fs.c - fs.d;
     this.m[r] = q > 0 ? q : 0;
     this.x[r] = q < 0 ? -q : 0;
@@ -80,5 +88,6 @@ export class PlanRing {
     else if (iHi < Infinity) mu = iHi;
     else mu = 0;
     this.value[r] = mu * 1000;
+    this.value[r2] = mu * 1000;
   }
 }

@@ -25,28 +25,22 @@ export class PlanSeries {
     this.rangeHi = new Float64Array(length);
   }
 
-  /**
-   * Copies the solver's decisions for steps [from, to) to positions from − shift
-   * onwards; with `planOnly`, just SoC, charge, discharge and value (what a
-   * window's open-loop plan reports).
-   */
-  copyFrom(solver: WindowSolver, from: number, to: number, shift: number, planOnly = false): void {
+  /** Copies the solver's decisions for steps [from, to) to positions from − shift onwards. */
+  copyFrom(solver: WindowSolver, from: number, to: number, shift: number): void {
     const plan = solver.plan;
     const { c, d, y, value } = this;
     let r = solver.ringIndex(from);
-    const size = plan.y.length;
+    const size = plan.tTag.length;
     for (let t = from; t < to; t++) {
       const i = t - shift;
       c[i] = plan.c[r] ?? 0;
       d[i] = plan.d[r] ?? 0;
       y[i] = plan.y[r] ?? 0;
       value[i] = plan.value[r] ?? 0;
-      if (!planOnly) {
-        this.m[i] = plan.m[r] ?? 0;
-        this.x[i] = plan.x[r] ?? 0;
-        this.rangeLo[i] = plan.rangeLo[r] ?? 0;
-        this.rangeHi[i] = plan.rangeHi[r] ?? 0;
-      }
+      this.m[i] = plan.m[r] ?? 0;
+      this.x[i] = plan.x[r] ?? 0;
+      this.rangeLo[i] = plan.rangeLo[r] ?? 0;
+      this.rangeHi[i] = plan.rangeHi[r] ?? 0;
       r = r + 1 === size ? 0 : r + 1;
     }
   }

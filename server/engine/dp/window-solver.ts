@@ -37,6 +37,11 @@ export class WindowSolver {
   /** Steps [chainFrom, chainTo] whose stored V_t = Bellman_t(stored V_{t+1}) (the last window's range). */
   private chainFrom = Infinity;
   private chainTo = -Infinity;
+  /** V_t for t ≤ keptBelow were left as they were by the last backward pass. */
+  private keptBelow = -Infinity;
+  /** Steps [passFrom, passTo) of the last forward pass: their plan entries chain (inputs = previous outputs). */
+  private passFrom = Infinity;
+  private passTo = -Infinity;
   private readonly fs = newForwardStepResult();
 
   constructor(private readonly ctx: DpContext, maxWindowSteps: number) {
@@ -53,6 +58,14 @@ export class WindowSolver {
   /** Index of step t in the plan ring. */
   ringIndex(t: number): number {
     return t % this.size;
+  }
+
+  /** Views of the last forward pass's plan for steps [start, end) (valid until the next solve). */
+  planViews(start: number, end: number): { y: Float64Array; c: Float64Array; d: Float64Array; value: Float64Array } {
+    const r = start % this.size;
+    const e = r + end - start;
+    const p = this.plan;
+    return { y: p.y.subarray(r, e), c: p.c.subarray(r, e), d: p.d.subarray(r, e), value: p.value.subarray(r, e) };
   }
 
   /** Physical store slot of V_t (valid for t of the last solved window). */
@@ -85,6 +98,7 @@ export class WindowSolver {
     const { ctx, store, map, tOf, size } = this;
     // Stopping at t is only sound when every V below t down to start belongs to one consistent chain.
     const canStop = warm && start >= this.chainFrom;
+    this.keptBelow = -Infinity;
     for (let t = end; t >= start; t--) {
       const r = t % size;
       const out = this.spare;
@@ -95,6 +109,7 @@ export class WindowSolver {
       this.stats.backwardSteps++;
       if (canStop && t <= this.chainTo && tOf[r] === t && store.sameShape(out, map[r] ?? 0)) {
         this.stats.backwardStepsReused += t - start;
+        this.keptBelow = t;
         return null;
       }
       this.spare = map[r] ?? 0;
@@ -117,6 +132,10 @@ export class WindowSolver {
     let muHi = Infinity;
     let reused = 0;
     let r = start % size;
+    const prevFrom = this.passFrom;
+    const prevTo = this.passTo;
+    this.passFrom = Infinity;
+    this.passTo = -Infinity;
     for (let t = start; t < to; t++) {
       const rNext = r + 1 === size ? 0 : r + 1;
       const w = map[rNext] ?? 0;
@@ -130,6 +149,14 @@ export class WindowSolver {
       if (warm && tTag[r] === t && vidUsed[r] === v && sameBits(eIn[r] ?? NaN, e)
         && sameBits(muInLo[r] ?? NaN, muLo) && sameBits(muInHi[r] ?? NaN, muHi)) {
         reused++;
+        // The last pass chained its entries, and every V_{t'+1} with t'+1 ≤ keptBelow is
+        // the one it used: all of them match too, so jump to the last such step.
+        const last = Math.min(this.keptBelow - 1, prevTo - 1, to - 1);
+        if (t >= prevFrom && last > t) {
+          reused += last - t;
+          r = (r + last - t) % size;
+          t = last;
+        }
       } else {
         if (!forwardStep(store, w, ctx.stages, t, a * e, ctx.tol, fs)) return false;
         plan.record(r, t, v, e, muLo, muHi, fs, net[t] ?? 0);
@@ -137,8 +164,10 @@ export class WindowSolver {
       e = y[r] ?? 0;
       muLo = outLo[r] ?? 0;
       muHi = outHi[r] ?? 0;
-      r = rNext;
+      r = r + 1 === size ? 0 : r + 1;
     }
+    this.passFrom = start;
+    this.passTo = to;
     this.stats.forwardStepsReused += reused;
     this.stats.forwardSteps += to - start - reused;
     return true;
