@@ -4,6 +4,8 @@ import { describe, expect, it } from 'vitest';
 import { problemFor } from '../../server/engine/inputs/problem-for';
 import { solvePlan } from '../../server/engine/plan/solve-plan';
 import { runHorizonStudy } from '../../server/engine/study/run-horizon-study';
+import { runClosedLoopParallel } from '../../server/engine/study/parallel-closed-loop';
+import { runJob } from '../../server/engine/study/study-job';
 import { brokenLimits } from './support/limit-check';
 import { periodicInputs } from './support/periodic-inputs';
 
@@ -50,5 +52,22 @@ describe('horizon study', () => {
     expect(threads.study.workers).toBe(2);
     expect(threads.study.runs.map((r) => r.cost)).toEqual(here.study.runs.map((r) => r.cost));
     expect(here.study.recommendation.horizonHours).not.toBeNull();
+  });
+});
+
+describe('closed loop on two cores', () => {
+  it('gives the same run when a later stretch starts from a guessed state and meets the exact one', async () => {
+    // [S] Turnpike property (Grüne & Guglielmi 2018; Faulwasser & Grüne 2020, REFERENCES): receding-horizon
+    // trajectories from different states meet the same regime, so a stretch started from a guess joins the
+    // exact run; [D] from the meeting step on each window sees the same state and prices, so the rest matches.
+    const inputs20 = periodicInputs(20);
+    const job = { horizonHours: 24, horizonSteps: 24, terminal: { kind: 'free' as const } };
+    const context = { inputs: inputs20, from: 0, to: 480, replanSteps: 1, initialEnergyKwh: 4000, bandFraction: 0.05, method: 'lp' as const };
+    const sequential = runJob(context, job);
+    const parallel = await runClosedLoopParallel(context, job, 2);
+    expect(parallel.parallel?.stretches).toBe(2);
+    expect(parallel.parallel?.metAt[0]).not.toBeNull();
+    expect(parallel.cost).toBeCloseTo(sequential.cost, 9);
+    parallel.socKwh.forEach((e, t) => expect(e).toBeCloseTo(sequential.socKwh[t]!, 6));
   });
 });

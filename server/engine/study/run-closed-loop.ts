@@ -34,6 +34,17 @@ export interface ClosedLoopRequest {
   readonly referenceSoc?: readonly number[];
   readonly bandFraction?: number;
   readonly method?: 'auto' | 'lp' | 'dp';
+  /** Stop applying steps here (exclusive; default `to`); windows still look ahead up to `to`. */
+  readonly stopAt?: number;
+}
+
+/** Turnpike figures of each open-loop plan, by the grid step where its window starts. */
+export interface PlanLog {
+  readonly start: number[];
+  readonly share: number[];
+  readonly leaving: number[];
+  /** 1 when a full-length plan's leaving arc reaches into the steps it commits. */
+  readonly intoCommitted: number[];
 }
 
 export interface ClosedLoopRun {
@@ -55,6 +66,8 @@ export interface ClosedLoopRun {
   /** Full-length plans whose leaving arc reaches into the steps they commit. */
   readonly leavingIntoCommitted: number;
   readonly method: 'lp' | 'dp' | 'mixed';
+  /** Per-plan figures of the LP loop (when a reference SoC was given). */
+  readonly plans?: PlanLog;
 }
 
 export function failedRun(status: ClosedLoopRun['status'], message: string, seconds: number): ClosedLoopRun {
@@ -80,8 +93,10 @@ export function runClosedLoop(inputs: AlignedInputs, req: ClosedLoopRequest): Cl
   let basis: LpBasis | undefined;
   let model: DispatchModel | undefined;
   let solves = 0, shareSum = 0, leavingSum = 0, leavingIntoCommitted = 0, peak = 0, dpSolves = 0;
+  const plans: PlanLog = { start: [], share: [], leaving: [], intoCommitted: [] };
+  const stopAt = req.stopAt ?? req.to;
   try {
-    for (let s = req.from; s < req.to; s += req.replanSteps) {
+    for (let s = req.from; s < stopAt; s += req.replanSteps) {
       const end = Math.min(req.to, s + req.horizonSteps);
       const day = inputs.clock.localDay[s]!;
       let dischargedToday = 0;
@@ -108,7 +123,7 @@ export function runClosedLoop(inputs: AlignedInputs, req: ClosedLoopRequest): Cl
       if (plan.status !== 'optimal') {
         return failedRun(plan.status, `window from ${new Date(inputs.timesMs[s]!).toISOString()}: ${plan.message ?? plan.status}`, elapsed());
       }
-      const steps = Math.min(req.replanSteps, end - s);
+      const steps = Math.min(req.replanSteps, end - s, stopAt - s);
       for (let k = 0; k < steps; k++) {
         applied.chargeKw.push(plan.chargeKw[k]!);
         applied.dischargeKw.push(plan.dischargeKw[k]!);
@@ -122,7 +137,12 @@ export function runClosedLoop(inputs: AlignedInputs, req: ClosedLoopRequest): Cl
         shareSum += fig.nearSteadyShare;
         leavingSum += fig.leavingArcSteps;
         const fullLength = end - s === req.horizonSteps;
-        if (fullLength && fig.leavingArcSteps > 0 && end - s - fig.leavingArcSteps < req.replanSteps) leavingIntoCommitted++;
+        const into = fullLength && fig.leavingArcSteps > 0 && end - s - fig.leavingArcSteps < req.replanSteps ? 1 : 0;
+        leavingIntoCommitted += into;
+        plans.start.push(s);
+        plans.share.push(fig.nearSteadyShare);
+        plans.leaving.push(fig.leavingArcSteps);
+        plans.intoCommitted.push(into);
       }
     }
   } finally {
@@ -142,6 +162,7 @@ export function runClosedLoop(inputs: AlignedInputs, req: ClosedLoopRequest): Cl
     meanLeavingArcSteps: req.referenceSoc ? leavingSum / solves : NaN,
     leavingIntoCommitted,
     method: dpSolves === 0 ? 'lp' : dpSolves === solves ? 'dp' : 'mixed',
+    ...(req.referenceSoc ? { plans } : {}),
   };
 }
 

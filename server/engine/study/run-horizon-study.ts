@@ -12,7 +12,8 @@ import { solveReferencePath, steadyFor } from '../reference/solve-reference-path
 import { terminalLabel, type TerminalChoice } from '../terminal/terminal-choice';
 import { DEFAULT_BAND_FRACTION } from '../turnpike/turnpike-figures';
 import { DEFAULT_GAP_TARGET_PCT, recommendHorizon, type Recommendation } from './recommend-horizon';
-import { runStudyJob, type StudyJob, type StudyJobContext, type StudyJobResult } from './study-job';
+import { runClosedLoopParallel } from './parallel-closed-loop';
+import { runStudyJob, withoutSeries, type StudyJob, type StudyJobContext, type StudyJobResult } from './study-job';
 import { defaultWorkerCount, runJobsOnWorkers } from './worker-pool';
 
 export interface StudyRequest {
@@ -106,12 +107,15 @@ export async function runHorizonStudy(inputs: AlignedInputs, request: StudyReque
   const workers = request.workers ?? (onDp ? 1 : defaultWorkerCount());
   const results =
     workers > 1 && jobs.length > 1
-      ? await runJobsOnWorkers(context, jobs, workers, (_, done) => request.onProgress?.(done, jobs.length))
-      : jobs.map((job, i) => {
-          const result = runStudyJob(context, job);
-          request.onProgress?.(i + 1, jobs.length);
-          return result;
-        });
+      ? await runJobsOnWorkers<StudyJobResult>(context, jobs, workers, (_, done) => request.onProgress?.(done, jobs.length))
+      : workers > 1 && !onDp
+        ? // A single run: split it over the cores instead (speculative stretches, same result).
+          [withoutSeries(await runClosedLoopParallel(context, jobs[0]!, workers).finally(() => request.onProgress?.(1, 1)))]
+        : jobs.map((job, i) => {
+            const result = runStudyJob(context, job);
+            request.onProgress?.(i + 1, jobs.length);
+            return result;
+          });
   const runs: StudyRun[] = results.map((result, i) => ({
     ...result,
     horizonHours: jobs[i]!.horizonHours,
@@ -126,7 +130,7 @@ export async function runHorizonStudy(inputs: AlignedInputs, request: StudyReque
       runs,
       recommendation: recommendHorizon(runs, request.gapTargetPct ?? DEFAULT_GAP_TARGET_PCT),
       seconds: (performance.now() - started) / 1000,
-      workers: workers > 1 && jobs.length > 1 ? Math.min(workers, jobs.length) : 1,
+      workers: workers <= 1 ? 1 : jobs.length > 1 ? Math.min(workers, jobs.length) : onDp ? 1 : workers,
     },
   };
 }

@@ -9,7 +9,7 @@ import { createRequire } from 'node:module';
 import { dirname, join } from 'node:path';
 import { pathToFileURL } from 'node:url';
 import { Worker } from 'node:worker_threads';
-import type { StudyJob, StudyJobContext, StudyJobResult } from './study-job';
+import type { StudyJob, StudyJobContext } from './study-job';
 
 function spawnWorker(): Worker {
   const compiled = !import.meta.url.endsWith('.ts');
@@ -30,14 +30,14 @@ export function defaultWorkerCount(): number {
  * Runs `jobs` over `workers` threads; results come back in job order. Jobs go out
  * longest first (by horizon) so the threads finish close together.
  */
-export async function runJobsOnWorkers(
+export async function runJobsOnWorkers<R>(
   context: StudyJobContext,
   jobs: readonly StudyJob[],
   workers: number,
-  onResult?: (result: StudyJobResult, done: number) => void,
-): Promise<StudyJobResult[]> {
+  onResult?: (result: R, done: number) => void,
+): Promise<R[]> {
   const order = jobs.map((job, index) => ({ job, index })).sort((a, b) => b.job.horizonSteps - a.job.horizonSteps);
-  const results = new Array<StudyJobResult>(jobs.length);
+  const results = new Array<R>(jobs.length);
   let next = 0;
   let done = 0;
   const threads = Array.from({ length: Math.min(workers, jobs.length) }, spawnWorker);
@@ -51,7 +51,7 @@ export async function runJobsOnWorkers(
               if (!item) return resolve();
               thread.postMessage({ index: item.index, job: item.job });
             };
-            thread.on('message', (message: { index: number; result: StudyJobResult }) => {
+            thread.on('message', (message: { index: number; result: R }) => {
               results[message.index] = message.result;
               onResult?.(message.result, ++done);
               sendNext();
