@@ -9,6 +9,7 @@ import type { Site } from '@shared/schemas/site';
 import type { Battery } from '@shared/schemas/battery';
 import type { ProfileSummary } from '@shared/schemas/profile';
 import { api } from '@/lib/api-client';
+import { formatLocalTime } from '@/lib/format';
 import { FormField, describedBy, inputClass } from './form-field';
 
 export interface RunSource {
@@ -34,11 +35,14 @@ interface Props {
   errors: Record<string, string>;
 }
 
-const profileLabel = (p: ProfileSummary) => `${p.name} (${p.start.slice(0, 10)} – ${p.end.slice(0, 10)}, ${p.stepMinutes} min)`;
+/** Name, period in the site's local dates (UTC dates would show 2025-12-31 for a profile starting on 1 January at 00:00 +01:00), step. */
+const profileLabel = (p: ProfileSummary, timeZone: string) =>
+  `${p.name} (${formatLocalTime(Date.parse(p.start), timeZone).slice(0, 10)} – ${formatLocalTime(Date.parse(p.end), timeZone).slice(0, 10)}, ${p.stepMinutes} min)`;
 
 export function RunSourceFields({ value, onChange, errors }: Props) {
   const { sites, batteries, profiles } = useRunSourceLists(value.siteId);
   const byKind = (kind: ProfileSummary['kind']) => (profiles.data ?? []).filter((p) => p.kind === kind);
+  const timeZone = sites.data?.find((s) => s.id === value.siteId)?.timezone ?? 'UTC';
   const select = (id: keyof RunSource, label: string, options: { id: string; label: string }[], optional: boolean, hint?: string) => (
     <FormField id={id} label={label} error={errors[id]} hint={hint}>
       <select
@@ -66,9 +70,9 @@ export function RunSourceFields({ value, onChange, errors }: Props) {
     <div className="grid gap-4 sm:grid-cols-2">
       {select('siteId', 'Site', (sites.data ?? []).map((s) => ({ id: s.id, label: `${s.name} (${s.timezone})` })), false)}
       {select('batteryId', 'Battery', (batteries.data ?? []).map((b) => ({ id: b.id, label: `${b.name} (${b.powerDischargeKw} kW / ${b.energyKwh} kWh)` })), false)}
-      {select('priceProfileId', 'Price profile', byKind('price').map((p) => ({ id: p.id, label: profileLabel(p) })), false)}
-      {select('loadProfileId', 'Load profile', byKind('load').map((p) => ({ id: p.id, label: profileLabel(p) })), true, 'Leave empty for pure arbitrage.')}
-      {select('generationProfileId', 'Generation profile', byKind('generation').map((p) => ({ id: p.id, label: profileLabel(p) })), true)}
+      {select('priceProfileId', 'Price profile', byKind('price').map((p) => ({ id: p.id, label: profileLabel(p, timeZone) })), false)}
+      {select('loadProfileId', 'Load profile', byKind('load').map((p) => ({ id: p.id, label: profileLabel(p, timeZone) })), true, 'Leave empty for pure arbitrage.')}
+      {select('generationProfileId', 'Generation profile', byKind('generation').map((p) => ({ id: p.id, label: profileLabel(p, timeZone) })), true)}
     </div>
   );
 }

@@ -42,7 +42,18 @@ export function ComparisonTable({ plans }: { plans: Plan[] }) {
                 <td className="px-2 py-1">{r ? formatSteps(r.turnpike.leavingArcSteps, step) : '–'}</td>
                 <td className="px-2 py-1">{r && r.turnpike.commitWindowSteps !== null ? formatSteps(r.turnpike.commitWindowSteps, step) : '–'}</td>
                 <td className="px-2 py-1">{gap === null ? '–' : `${formatNumber(gap, 1)} %`}</td>
-                <td className="px-2 py-1">{r ? r.turnpike.flags.length : '–'}</td>
+                <td className="px-2 py-1">
+                  {/* Flagged plans stand out in amber (DESIGN section 7); the flags' words are on the plan page. */}
+                  {r && r.turnpike.flags.length > 0 ? (
+                    <span className="rounded bg-amber-100 px-1.5 py-0.5 font-semibold text-amber-600" title={r.turnpike.flags.join('\n')}>
+                      {r.turnpike.flags.length} {r.turnpike.flags.length === 1 ? 'flag' : 'flags'}
+                    </span>
+                  ) : r ? (
+                    'none'
+                  ) : (
+                    '–'
+                  )}
+                </td>
               </tr>
             );
           })}

@@ -29,7 +29,7 @@ export function StudyRunsTable({ results, currency }: { results: StudyResults; c
                 <td className="px-2 py-1">{r.gapPct === null ? '–' : `${formatNumber(r.gapPct, 3)} %`}</td>
                 <td className="px-2 py-1">{formatNumber(r.equivalentCycles, 1)}</td>
                 <td className="px-2 py-1">{formatPercent(r.nearSteadyShare)}</td>
-                <td className="px-2 py-1">{formatNumber(r.meanLeavingArcSteps, 1)} steps</td>
+                <td className="px-2 py-1">{formatNumber(r.meanLeavingArcSteps, 1)} {formatNumber(r.meanLeavingArcSteps, 1) === '1' ? 'step' : 'steps'}</td>
                 <td className="px-2 py-1">{r.leavingIntoCommitted}</td>
                 <td className="px-2 py-1">{r.solves}</td>
                 <td className="px-2 py-1">{formatDuration(r.seconds)}</td>
