@@ -48,6 +48,10 @@ export function apiPost(page: Page, pathname: string, data: unknown): Promise<AP
   return page.request.post(appUrl(pathname), { data, headers: { Origin: inject('baseUrl') } });
 }
 
+export async function apiPatchJson<T>(page: Page, pathname: string, data: unknown): Promise<T> {
+  return json<T>(await page.request.patch(appUrl(pathname), { data, headers: { Origin: inject('baseUrl') } }), `PATCH ${pathname}`);
+}
+
 export async function apiPostJson<T>(page: Page, pathname: string, data: unknown): Promise<T> {
   return json<T>(await apiPost(page, pathname, data), `POST ${pathname}`);
 }
