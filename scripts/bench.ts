@@ -8,9 +8,9 @@
  * (e.g. the dynamic-programming figures) by appending { name, run }.
  *
  * Timing: wall clock (performance.now) and process CPU time are both reported,
- * because the 2-core machine is often shared. Every solver first runs a few
- * hundred small windows untimed (JIT and WebAssembly tier-up), for baselines and
- * engine alike.
+ * because the 2-core machine is often shared. Every solver first runs several
+ * hundred to 1 500 small windows untimed (JIT and WebAssembly tier-up), for baselines and
+ * engine alike; warmUpSeconds reports what that took.
  */
 import GLPK from 'glpk.js/node';
 import solver from 'javascript-lp-solver';
@@ -131,10 +131,11 @@ function plainLoop(window: (s: number, n: number, start: number) => readonly [nu
   return cost;
 }
 
+/** Brings every solver to its steady speed first: WebAssembly tier-up takes HiGHS ~1 500 small solves. */
 function warmUp(): void {
-  plainLoop(plainGlpkWindow, 24, 300);
-  plainLoop(plainJsLpWindow, 24, 100);
-  runClosedLoop(inputs, { from: 0, to: 300, horizonSteps: 24, replanSteps: 1, terminal: { kind: 'free' }, initialEnergyKwh: e0, method: 'lp' });
+  plainLoop(plainGlpkWindow, 24, 1500);
+  plainLoop(plainJsLpWindow, 24, 300);
+  runClosedLoop(inputs, { from: 0, to: 1500, horizonSteps: 24, replanSteps: 1, terminal: { kind: 'free' }, initialEnergyKwh: e0, method: 'lp' });
   highs.solve(writeLpText(buildDispatchModel(problemFor(inputs, 0, 500, e0, { kind: 'free' })).lp), { output_flag: false });
 }
 

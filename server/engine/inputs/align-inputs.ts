@@ -5,7 +5,7 @@
  * average powers are per-interval values). The local clock of every step comes
  * with it, for local days and clock slots.
  */
-import type { BatteryParams, SiteParams } from '../types';
+import type { BatteryParams, DispatchProblem, SiteParams } from '../types';
 import type { InputIssue } from '../model/validate-battery';
 import { validateBattery, validateSite } from '../model/validate-battery';
 import { localClock, type LocalClock } from '../time/zone-offsets';
@@ -29,16 +29,10 @@ export interface DispatchInputs {
   readonly generation?: ProfileSeries;
 }
 
-export interface AlignedInputs {
-  readonly battery: BatteryParams;
-  readonly site: SiteParams;
+/** The profiles on one grid: the series of a DispatchProblem for the whole period, plus its local clock. */
+export interface AlignedInputs
+  extends Pick<DispatchProblem, 'battery' | 'site' | 'stepHours' | 'timesMs' | 'priceImport' | 'priceExport' | 'loadKw' | 'generationKw'> {
   readonly stepMinutes: number;
-  readonly stepHours: number;
-  readonly timesMs: readonly number[];
-  readonly priceImport: readonly number[];
-  readonly priceExport: readonly number[];
-  readonly loadKw: readonly number[];
-  readonly generationKw: readonly number[];
   readonly clock: LocalClock;
   /** Plain-words notes about the alignment (e.g. the period was shortened). */
   readonly notes: readonly string[];

@@ -4,6 +4,7 @@
 // feasible and bounded by construction (grid limits cover the site's own net
 // load; export above import only with both grid limits set).
 import type { DispatchProblem, TerminalRule } from '../../../server/engine/types';
+import { battery } from './problem-builder';
 
 /** xorshift32: tiny, seeded, so a failing case can be replayed from its seed. */
 export function seeded(seed: number): () => number {
@@ -68,19 +69,13 @@ export function randomDispatchProblem(variant: ModelVariant, seed: number): Disp
     priceExport,
     loadKw,
     generationKw,
-    battery: {
-      powerChargeKw,
-      powerDischargeKw,
-      energyKwh,
-      socMinPct,
-      socMaxPct,
-      socInitialPct: (100 * e0) / energyKwh,
-      efficiencyCharge: span(0.85, 1),
-      efficiencyDischarge: span(0.85, 1),
+    battery: battery({
+      ...{ powerChargeKw, powerDischargeKw, energyKwh, socMinPct, socMaxPct, socInitialPct: (100 * e0) / energyKwh },
+      ...{ efficiencyCharge: span(0.85, 1), efficiencyDischarge: span(0.85, 1) },
       selfDischargePctPerHour: variant === 'self-discharge and degradation cost' ? span(0, 3) : 0,
       degradationCostPerMwh: variant === 'self-discharge and degradation cost' || negative ? span(0, 25) : 0,
       maxCyclesPerDay: variant === 'daily throughput cap' ? span(0.1, 1) : null,
-    },
+    }),
     site: {
       timezone: 'UTC',
       importLimitKw: site ? Math.max(0, peakNet) + span(0, 1) * powerChargeKw : null,
