@@ -5,9 +5,9 @@
  * runs a horizon study (watching its progress bar) and adopts its recommendation as the
  * site's default horizon, which the plan form then proposes.
  */
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser, Locator, Page } from 'playwright-core';
-import { launchBrowser, newLocalContext, screenshot, withFailureShots } from './support/browser';
+import { describe, expect, it } from 'vitest';
+import type { Locator, Page } from 'playwright-core';
+import { newLocalContext, screenshot, withFailureShots, useBrowser } from './support/browser';
 import { DEMO_BATTERY, DEMO_SITE, demoSources } from './support/plans';
 import { apiGet, apiPatchJson, signIn } from './support/session';
 
@@ -52,7 +52,9 @@ async function comparisonRows(page: Page): Promise<ComparisonRow[]> {
   const table = page.getByRole('table', { name: 'Plans of this delivery window by horizon and terminal rule' });
   const headers = await table.getByRole('columnheader').allInnerTexts();
   const col = (name: string) => headers.indexOf(name);
-  const rows = await table.locator('tbody tr').evaluateAll((trs) => trs.map((tr) => [...(tr as HTMLTableRowElement).cells].map((td) => td.innerText.trim())));
+  const rows = await table
+    .locator('tbody tr')
+    .evaluateAll((trs) => trs.map((tr) => [...(tr as HTMLTableRowElement).cells].map((td) => td.innerText.trim())));
   return rows.map((cells) => ({
     horizon: cells[col('Horizon')] ?? '',
     rule: cells[col('Terminal rule')] ?? '',
@@ -63,110 +65,127 @@ async function comparisonRows(page: Page): Promise<ComparisonRow[]> {
 }
 
 describe('comparing plans by horizon', () => {
-  let browser: Browser;
-  beforeAll(async () => {
-    browser = await launchBrowser();
-  });
-  afterAll(async () => {
-    await browser?.close();
-  });
+  const browser = useBrowser();
 
   it('plans one window with three horizons and two terminal rules, flags the short free plan, and adopts a study’s horizon', async () => {
-    const { context, offsite } = await newLocalContext(browser);
+    const { context, offsite } = await newLocalContext(browser());
     const page = await context.newPage();
-    await withFailureShots('compare', () => [page], async () => {
-      await signIn(page, 'planner');
-      const { siteId } = await demoSources(page);
-      // A default no study offers (its horizons are 6 … 168 h), so adopting the recommendation always changes it.
-      await apiPatchJson(page, `/api/sites/${siteId}`, { defaultHorizonHours: 47 });
+    await withFailureShots(
+      'compare',
+      () => [page],
+      async () => {
+        await signIn(page, 'planner');
+        const { siteId } = await demoSources(page);
+        // A default no study offers (its horizons are 6 … 168 h), so adopting the recommendation always changes it.
+        await apiPatchJson(page, `/api/sites/${siteId}`, { defaultHorizonHours: 47 });
 
-      // The first plan through the form: 24 h, free.
-      const day = deliveryDay();
-      await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Plans' }).click();
-      await page.getByRole('link', { name: 'New plan' }).click();
-      await page.getByRole('heading', { name: 'New plan' }).waitFor();
-      await chooseSources(page, YEAR_PRICES);
-      await page.getByLabel('From').fill(day.from);
-      await page.getByLabel('To', { exact: true }).fill(day.to);
-      await page.getByLabel('Horizon', { exact: true }).fill('24');
-      await page.getByLabel('Terminal rule').selectOption('free');
-      await page.getByLabel('Initial SoC').fill('50');
-      await screenshot(page, 'compare-1-plan-form');
-      await page.getByLabel('Initial SoC').press('Enter');
-      await page.waitForURL(/\/plans\/[0-9a-f-]{36}$/);
-      await page.getByRole('heading', { name: 'Schedule' }).waitFor({ timeout: 90_000 });
+        // The first plan through the form: 24 h, free.
+        const day = deliveryDay();
+        await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Plans' }).click();
+        await page.getByRole('link', { name: 'New plan' }).click();
+        await page.getByRole('heading', { name: 'New plan' }).waitFor();
+        await chooseSources(page, YEAR_PRICES);
+        await page.getByLabel('From').fill(day.from);
+        await page.getByLabel('To', { exact: true }).fill(day.to);
+        await page.getByLabel('Horizon', { exact: true }).fill('24');
+        await page.getByLabel('Terminal rule').selectOption('free');
+        await page.getByLabel('Initial SoC').fill('50');
+        await screenshot(page, 'compare-1-plan-form');
+        await page.getByLabel('Initial SoC').press('Enter');
+        await page.waitForURL(/\/plans\/[0-9a-f-]{36}$/);
+        await page.getByRole('heading', { name: 'Schedule' }).waitFor({ timeout: 90_000 });
 
-      // The comparison page proposes 24, 36 and 48 h with free and steady-value: the five missing plans are queued.
-      await page.getByRole('link', { name: 'Compare horizons for this delivery window' }).click();
-      await page.getByRole('heading', { name: 'Compare horizons' }).waitFor();
-      const horizons = page.getByRole('group', { name: 'Horizons (h)' });
-      for (const h of ['24', '36', '48']) expect(await horizons.getByRole('checkbox', { name: h, exact: true }).isChecked()).toBe(true);
-      const rules = page.getByRole('group', { name: 'Terminal rules' });
-      for (const r of ['free', 'steady-value']) expect(await rules.getByRole('checkbox', { name: r, exact: true }).isChecked()).toBe(true);
-      await page.getByRole('button', { name: 'Add these plans' }).click();
-      await page.getByRole('status').filter({ hasText: '5 plans queued.' }).waitFor({ timeout: 60_000 });
+        // The comparison page proposes 24, 36 and 48 h with free and steady-value: the five missing plans are queued.
+        await page.getByRole('link', { name: 'Compare horizons for this delivery window' }).click();
+        await page.getByRole('heading', { name: 'Compare horizons' }).waitFor();
+        const horizons = page.getByRole('group', { name: 'Horizons (h)' });
+        for (const h of ['24', '36', '48'])
+          expect(await horizons.getByRole('checkbox', { name: h, exact: true }).isChecked()).toBe(true);
+        const rules = page.getByRole('group', { name: 'Terminal rules' });
+        for (const r of ['free', 'steady-value'])
+          expect(await rules.getByRole('checkbox', { name: r, exact: true }).isChecked()).toBe(true);
+        await page.getByRole('button', { name: 'Add these plans' }).click();
+        await page.getByRole('status').filter({ hasText: '5 plans queued.' }).waitFor({ timeout: 60_000 });
 
-      // All six computed (method shown instead of the job state), then read.
-      const combos = ['24 h/free', '24 h/steady-value', '36 h/free', '36 h/steady-value', '48 h/free', '48 h/steady-value'];
-      let rows: ComparisonRow[] = [];
-      await expect
-        .poll(
-          async () => {
-            rows = await comparisonRows(page);
-            return combos.every((c) => rows.some((r) => `${r.horizon}/${r.rule}` === c && /^(dp|lp)$/.test(r.method)));
-          },
-          { timeout: 120_000, interval: 1000, message: 'all six plans computed' },
-        )
-        .toBe(true);
-      expect(await page.getByRole('progressbar').count()).toBe(0);
-      await page.getByRole('figure', { name: /SoC over the delivery window/ }).locator('svg path').first().waitFor({ timeout: 30_000 });
-      await screenshot(page, 'compare-2-comparison');
+        // All six computed (method shown instead of the job state), then read.
+        const combos = ['24 h/free', '24 h/steady-value', '36 h/free', '36 h/steady-value', '48 h/free', '48 h/steady-value'];
+        let rows: ComparisonRow[] = [];
+        await expect
+          .poll(
+            async () => {
+              rows = await comparisonRows(page);
+              return combos.every((c) => rows.some((r) => `${r.horizon}/${r.rule}` === c && /^(dp|lp)$/.test(r.method)));
+            },
+            { timeout: 120_000, interval: 1000, message: 'all six plans computed' },
+          )
+          .toBe(true);
+        expect(await page.getByRole('progressbar').count()).toBe(0);
+        await page
+          .getByRole('figure', { name: /SoC over the delivery window/ })
+          .locator('svg path')
+          .first()
+          .waitFor({ timeout: 30_000 });
+        await screenshot(page, 'compare-2-comparison');
 
-      // The short free plan carries more flags than any other; its leaving arc reaches into the window.
-      const short = rows.find((r) => r.horizon === '24 h' && r.rule === 'free');
-      const others = rows.filter((r) => r !== short && combos.includes(`${r.horizon}/${r.rule}`));
-      expect(short?.flags).toBeGreaterThan(Math.max(...others.map((r) => r.flags)));
-      expect(short?.leaving).not.toMatch(/^(–|0 min|0 h)$/);
-      const shortRow = page.getByRole('row').filter({ has: page.getByRole('cell', { name: 'free', exact: true }) }).filter({ has: page.getByRole('link', { name: '24 h', exact: true }) });
-      await shortRow.getByRole('link', { name: '24 h', exact: true }).first().click();
-      const flags = page.getByRole('list', { name: 'Flags' });
-      await flags.getByText(/The leaving arc reaches into the delivery window/).waitFor({ timeout: 60_000 });
-      expect(await flags.innerText()).toMatch(/use the steady-value terminal rule/);
-      await screenshot(page, 'compare-3-short-plan-flag');
+        // The short free plan carries more flags than any other; its leaving arc reaches into the window.
+        const short = rows.find((r) => r.horizon === '24 h' && r.rule === 'free');
+        const others = rows.filter((r) => r !== short && combos.includes(`${r.horizon}/${r.rule}`));
+        expect(short?.flags).toBeGreaterThan(Math.max(...others.map((r) => r.flags)));
+        expect(short?.leaving).not.toMatch(/^(–|0 min|0 h)$/);
+        const shortRow = page
+          .getByRole('row')
+          .filter({ has: page.getByRole('cell', { name: 'free', exact: true }) })
+          .filter({ has: page.getByRole('link', { name: '24 h', exact: true }) });
+        await shortRow.getByRole('link', { name: '24 h', exact: true }).first().click();
+        const flags = page.getByRole('list', { name: 'Flags' });
+        await flags.getByText(/The leaving arc reaches into the delivery window/).waitFor({ timeout: 60_000 });
+        expect(await flags.innerText()).toMatch(/use the steady-value terminal rule/);
+        await screenshot(page, 'compare-3-short-plan-flag');
 
-      // A horizon study over the whole price year (empty period), watched while it runs.
-      await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Studies' }).click();
-      await page.getByRole('link', { name: 'New study' }).click();
-      await chooseSources(page, YEAR_PRICES);
-      expect(await page.getByLabel('Horizons').inputValue()).toMatch(/^6, 12, 24/);
-      await page.getByLabel('Initial SoC').fill('50');
-      await page.getByLabel('Initial SoC').press('Enter');
-      await page.waitForURL(/\/studies\/[0-9a-f-]{36}$/);
-      const progress = page.getByRole('progressbar', { name: 'Running the study' });
-      await progress.waitFor({ timeout: 30_000 });
-      const seen = Number(await progress.getAttribute('aria-valuenow'));
-      expect(seen).toBeGreaterThanOrEqual(0);
-      expect(seen).toBeLessThan(100);
-      await screenshot(page, 'compare-4-study-running');
-      const recommendation = page.getByRole('heading', { name: /^Recommended: \d+ h with the (free|steady-value|cyclic) terminal rule$/ });
-      await recommendation.waitFor({ timeout: 120_000 });
-      expect(await progress.count()).toBe(0);
-      const hours = Number(/(\d+) h/.exec(await recommendation.innerText())?.[1]);
-      await page.getByRole('figure', { name: 'Gap to the reference path against horizon' }).locator('svg path').filter({ visible: true }).first().waitFor({ timeout: 30_000 });
-      await screenshot(page, 'compare-5-study-done');
+        // A horizon study over the whole price year (empty period), watched while it runs.
+        await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Studies' }).click();
+        await page.getByRole('link', { name: 'New study' }).click();
+        await chooseSources(page, YEAR_PRICES);
+        expect(await page.getByLabel('Horizons').inputValue()).toMatch(/^6, 12, 24/);
+        await page.getByLabel('Initial SoC').fill('50');
+        await page.getByLabel('Initial SoC').press('Enter');
+        await page.waitForURL(/\/studies\/[0-9a-f-]{36}$/);
+        const progress = page.getByRole('progressbar', { name: 'Running the study' });
+        await progress.waitFor({ timeout: 30_000 });
+        const seen = Number(await progress.getAttribute('aria-valuenow'));
+        expect(seen).toBeGreaterThanOrEqual(0);
+        expect(seen).toBeLessThan(100);
+        await screenshot(page, 'compare-4-study-running');
+        const recommendation = page.getByRole('heading', {
+          name: /^Recommended: \d+ h with the (free|steady-value|cyclic) terminal rule$/,
+        });
+        await recommendation.waitFor({ timeout: 120_000 });
+        expect(await progress.count()).toBe(0);
+        const hours = Number(/(\d+) h/.exec(await recommendation.innerText())?.[1]);
+        await page
+          .getByRole('figure', { name: 'Gap to the reference path against horizon' })
+          .locator('svg path')
+          .filter({ visible: true })
+          .first()
+          .waitFor({ timeout: 30_000 });
+        await screenshot(page, 'compare-5-study-done');
 
-      // Adopt it: the site's default changes and the plan form proposes it.
-      await page.getByRole('button', { name: `Make ${hours} h the default for new plans at ${DEMO_SITE}` }).click();
-      await page.getByRole('status').filter({ hasText: `Saved: new plans at this site start with ${hours} h.` }).waitFor();
-      expect((await apiGet<{ defaultHorizonHours: number }>(page, `/api/sites/${siteId}`)).defaultHorizonHours).toBe(hours);
-      await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Plans' }).click();
-      await page.getByRole('link', { name: 'New plan' }).click();
-      await chooseSources(page);
-      await page.getByText(`Empty: the site's default, ${hours} h.`).waitFor();
-      await screenshot(page, 'compare-6-default-adopted');
+        // Adopt it: the site's default changes and the plan form proposes it.
+        await page.getByRole('button', { name: `Make ${hours} h the default for new plans at ${DEMO_SITE}` }).click();
+        await page
+          .getByRole('status')
+          .filter({ hasText: `Saved: new plans at this site start with ${hours} h.` })
+          .waitFor();
+        expect((await apiGet<{ defaultHorizonHours: number }>(page, `/api/sites/${siteId}`)).defaultHorizonHours).toBe(hours);
+        await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Plans' }).click();
+        await page.getByRole('link', { name: 'New plan' }).click();
+        await chooseSources(page);
+        await page.getByText(`Empty: the site's default, ${hours} h.`).waitFor();
+        await screenshot(page, 'compare-6-default-adopted');
 
-      expect(offsite).toEqual([]);
-    });
+        expect(offsite).toEqual([]);
+      },
+    );
     await context.close();
   });
 });

@@ -6,9 +6,9 @@
  */
 import { readFileSync } from 'node:fs';
 import path from 'node:path';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser, Page } from 'playwright-core';
-import { launchBrowser, newLocalContext, screenshot } from './support/browser';
+import { describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { newLocalContext, screenshot, useBrowser } from './support/browser';
 import { apiGet, signIn } from './support/session';
 
 const sampleDir = path.resolve(import.meta.dirname, '..', '..', 'sample-data');
@@ -20,15 +20,25 @@ interface ExpectedIssues {
   issues: { line: number; messageIncludes: string }[];
 }
 /** [S] sample-data/broken/expected-issues.json: the lines and phrases the parser must report, kept beside the broken files. */
-const expected = (JSON.parse(readFileSync(path.join(sampleDir, 'broken', 'expected-issues.json'), 'utf8')) as ExpectedIssues[]).find(
-  (e) => e.file === 'non-finite-values.csv',
-);
+const expected = (
+  JSON.parse(readFileSync(path.join(sampleDir, 'broken', 'expected-issues.json'), 'utf8')) as ExpectedIssues[]
+).find((e) => e.file === 'non-finite-values.csv');
 
 /** [D] read from the file itself (not hard-coded): data rows, first and last label, extremes. */
 function describeCsv(file: string) {
-  const rows = readFileSync(file, 'utf8').trim().split(/\r?\n/).slice(1).map((line) => line.split(','));
+  const rows = readFileSync(file, 'utf8')
+    .trim()
+    .split(/\r?\n/)
+    .slice(1)
+    .map((line) => line.split(','));
   const values = rows.map((r) => Number(r[1]));
-  return { rows: rows.length, first: rows[0]?.[0] ?? '', last: rows.at(-1)?.[0] ?? '', min: Math.min(...values), max: Math.max(...values) };
+  return {
+    rows: rows.length,
+    first: rows[0]?.[0] ?? '',
+    last: rows.at(-1)?.[0] ?? '',
+    min: Math.min(...values),
+    max: Math.max(...values),
+  };
 }
 
 /** The (line, problem) pairs of an issues table, as shown. */
@@ -50,16 +60,10 @@ async function openUploadForm(page: Page) {
 }
 
 describe('uploading a price CSV', () => {
-  let browser: Browser;
-  beforeAll(async () => {
-    browser = await launchBrowser();
-  });
-  afterAll(async () => {
-    await browser?.close();
-  });
+  const browser = useBrowser();
 
   it('previews, stores and charts a good file, and stores nothing from a broken one while listing its lines', async () => {
-    const { context, offsite } = await newLocalContext(browser);
+    const { context, offsite } = await newLocalContext(browser());
     const page = await context.newPage();
     await signIn(page, 'planner');
 
@@ -84,7 +88,13 @@ describe('uploading a price CSV', () => {
     await preview.getByText('First lines of the file').waitFor();
     const csv = describeCsv(goodFile);
     const facts = await preview.locator('dl > div').allInnerTexts();
-    const fact = (term: string) => facts.find((f) => f.toLowerCase().startsWith(term.toLowerCase()))?.split('\n').slice(1).join(' ').trim();
+    const fact = (term: string) =>
+      facts
+        .find((f) => f.toLowerCase().startsWith(term.toLowerCase()))
+        ?.split('\n')
+        .slice(1)
+        .join(' ')
+        .trim();
     expect(fact('Intervals')).toBe(csv.rows.toLocaleString('en-US'));
     expect(fact('Resolution')).toBe('15 min');
     expect(fact('Delimiter')).toMatch(/comma/);
@@ -108,9 +118,14 @@ describe('uploading a price CSV', () => {
     await page.getByRole('heading', { name, level: 1 }).waitFor();
     const chart = page.getByRole('figure', { name: new RegExp(`^${name.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')} in EUR/MWh`) });
     await chart.locator('svg path').first().waitFor({ timeout: 30_000 });
-    const line = await chart.locator('svg path[d]').evaluateAll((paths) => Math.max(...paths.map((p) => (p.getAttribute('d') ?? '').length)));
+    const line = await chart
+      .locator('svg path[d]')
+      .evaluateAll((paths) => Math.max(...paths.map((p) => (p.getAttribute('d') ?? '').length)));
     expect(line).toBeGreaterThan(500); // a drawn series, not an empty axis
-    await page.getByRole('cell', { name: csv.first.slice(0, 10) + ' 00:00 +02:00' }).first().waitFor();
+    await page
+      .getByRole('cell', { name: csv.first.slice(0, 10) + ' 00:00 +02:00' })
+      .first()
+      .waitFor();
     await screenshot(page, 'upload-3-profile-charted');
 
     // A broken file: the preview lists its lines; sending it anyway, the server lists them too and keeps nothing.

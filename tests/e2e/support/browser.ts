@@ -1,4 +1,5 @@
 /** Debian's Chromium through playwright-core, with a guard that no request leaves localhost. */
+import { afterAll, beforeAll } from 'vitest';
 import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
 import { mkdirSync } from 'node:fs';
 import path from 'node:path';
@@ -23,13 +24,33 @@ export async function launchBrowser(): Promise<Browser> {
   });
 }
 
+/** One browser for the journeys of a `describe` block: launched before them, closed after. */
+export function useBrowser(): () => Browser {
+  let browser: Browser | undefined;
+  beforeAll(async () => {
+    browser = await launchBrowser();
+  });
+  afterAll(async () => {
+    await browser?.close();
+  });
+  return () => {
+    if (!browser) throw new Error('The browser is not launched yet: call the getter inside a test.');
+    return browser;
+  };
+}
+
 /** A context that records (and blocks) every request to a host other than localhost. */
 export async function newLocalContext(browser: Browser, options: Parameters<Browser['newContext']>[0] = {}) {
-  const context: BrowserContext = await browser.newContext({ viewport: { width: 1360, height: 900 }, acceptDownloads: true, ...options });
+  const context: BrowserContext = await browser.newContext({
+    viewport: { width: 1360, height: 900 },
+    acceptDownloads: true,
+    ...options,
+  });
   const offsite: string[] = [];
   await context.route('**/*', (route) => {
     const url = new URL(route.request().url());
-    const local = ['localhost', '127.0.0.1', '[::1]'].includes(url.hostname) || url.protocol === 'data:' || url.protocol === 'blob:';
+    const local =
+      ['localhost', '127.0.0.1', '[::1]'].includes(url.hostname) || url.protocol === 'data:' || url.protocol === 'blob:';
     if (local) return route.continue();
     offsite.push(url.toString());
     return route.abort();
@@ -48,7 +69,9 @@ export async function screenshot(page: Page, name: string) {
   const height = await page.evaluate(() => document.documentElement.scrollHeight);
   const grow = viewport !== null && height > viewport.height;
   if (grow) await page.setViewportSize({ width: viewport.width, height });
-  await page.evaluate(() => document.fonts.ready.then(() => new Promise((done) => requestAnimationFrame(() => requestAnimationFrame(done)))));
+  await page.evaluate(() =>
+    document.fonts.ready.then(() => new Promise((done) => requestAnimationFrame(() => requestAnimationFrame(done)))),
+  );
   await page.screenshot({ path: path.join(screenshotDir, `${name}.png`) });
   if (grow) await page.setViewportSize(viewport);
 }

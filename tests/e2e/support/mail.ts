@@ -28,7 +28,9 @@ async function adminApi(): Promise<APIRequestContext> {
 export async function lastMailId(to: string): Promise<number> {
   const api = await adminApi();
   try {
-    const { messages } = (await (await api.get('/api/mail/outbox', { params: { to, limit: 1 } })).json()) as { messages: MailSummary[] };
+    const { messages } = (await (await api.get('/api/mail/outbox', { params: { to, limit: 1 } })).json()) as {
+      messages: MailSummary[];
+    };
     return messages[0]?.id ?? 0;
   } finally {
     await api.dispose();

@@ -78,5 +78,8 @@ export async function submitAndApprove(submitterPage: Page, approverPage: Page, 
   const draft = await apiGet<{ version: number }>(submitterPage, `/api/plans/${id}/sign-off`);
   await apiPostJson(submitterPage, `/api/plans/${id}/submit`, { version: draft.version });
   const submitted = await apiGet<{ version: number }>(approverPage, `/api/plans/${id}/sign-off`);
-  await apiPostJson(approverPage, `/api/plans/${id}/approve`, { version: submitted.version, comment: 'Approved for the export journey.' });
+  await apiPostJson(approverPage, `/api/plans/${id}/approve`, {
+    version: submitted.version,
+    comment: 'Approved for the export journey.',
+  });
 }

@@ -49,7 +49,10 @@ export function apiPost(page: Page, pathname: string, data: unknown): Promise<AP
 }
 
 export async function apiPatchJson<T>(page: Page, pathname: string, data: unknown): Promise<T> {
-  return json<T>(await page.request.patch(appUrl(pathname), { data, headers: { Origin: inject('baseUrl') } }), `PATCH ${pathname}`);
+  return json<T>(
+    await page.request.patch(appUrl(pathname), { data, headers: { Origin: inject('baseUrl') } }),
+    `PATCH ${pathname}`,
+  );
 }
 
 export async function apiPostJson<T>(page: Page, pathname: string, data: unknown): Promise<T> {

@@ -66,7 +66,14 @@ export default async function setup(project: TestProject) {
   let log = '';
   child = spawn(path.join(root, 'node_modules', '.bin', 'tsx'), ['server/index.ts'], {
     cwd: root,
-    env: { ...process.env, NODE_ENV: 'production', PORT: String(port), DATABASE_URL: databaseUrl, APP_ORIGIN: baseUrl, LOG_LEVEL: 'error' },
+    env: {
+      ...process.env,
+      NODE_ENV: 'production',
+      PORT: String(port),
+      DATABASE_URL: databaseUrl,
+      APP_ORIGIN: baseUrl,
+      LOG_LEVEL: 'error',
+    },
     stdio: ['ignore', 'pipe', 'pipe'],
   });
   child.stdout?.on('data', (d) => (log += String(d)));
