@@ -162,8 +162,12 @@ function backendCrossover() {
 function referencePath() {
   const model = buildDispatchModel(problemFor(inputs, 0, STEPS, e0, { kind: 'free' })).lp;
   const text = timed(() => writeLpText(model));
-  const direct = timed(() => highs.solve(text.value, { output_flag: false }));
-  const engine = timed(() => solveReferencePath(inputs, { terminal: { kind: 'free' }, method: 'lp' }));
+  const [directRun, engineRun] = bestOfTwo<unknown>([
+    () => highs.solve(text.value, { output_flag: false }),
+    () => solveReferencePath(inputs, { terminal: { kind: 'free' }, method: 'lp' }),
+  ]);
+  const direct = directRun as Timed<ReturnType<typeof highs.solve>>;
+  const engine = engineRun as Timed<ReturnType<typeof solveReferencePath>>;
   if (!engine.value.ok) throw new Error(engine.value.issue.message);
   const solution = engine.value.path.solution;
   return {
@@ -174,17 +178,27 @@ function referencePath() {
   };
 }
 
+/** Best of two alternating rounds (wall and CPU each), so no method is always the one measured first. */
+function bestOfTwo<T>(runs: (() => T)[]): Timed<T>[] {
+  const results: Timed<T>[][] = runs.map(() => []);
+  for (let round = 0; round < 2; round++) runs.forEach((run, i) => results[i]!.push(timed(run)));
+  return results.map(([a, b]) => ({ value: a!.value, seconds: Math.min(a!.seconds, b!.seconds), cpuSeconds: Math.min(a!.cpuSeconds, b!.cpuSeconds) }));
+}
+
 async function closedLoop24h() {
-  const engine = timed(() => runClosedLoop(inputs, { from: 0, to: STEPS, horizonSteps: 24, replanSteps: 1, terminal: { kind: 'free' }, initialEnergyKwh: e0, method: 'lp' }));
+  const [engine, glpkLoop] = bestOfTwo<{ cost: number; solves?: number }>([
+    () => runClosedLoop(inputs, { from: 0, to: STEPS, horizonSteps: 24, replanSteps: 1, terminal: { kind: 'free' }, initialEnergyKwh: e0, method: 'lp' }),
+    () => ({ cost: plainLoop(plainGlpkWindow, 24) }),
+  ]) as [Timed<{ cost: number; solves?: number }>, Timed<{ cost: number }>];
+  const jsLpLoop = timed(() => plainLoop(plainJsLpWindow, 24));
   const context = { inputs, from: 0, to: STEPS, replanSteps: 1, initialEnergyKwh: e0, bandFraction: 0.05, method: 'lp' as const };
   const parallel = await timedAsync(() => runClosedLoopParallel(context, { horizonHours: 24, horizonSteps: 24, terminal: { kind: 'free' } }, 2));
-  const glpkLoop = timed(() => plainLoop(plainGlpkWindow, 24));
-  const jsLpLoop = timed(() => plainLoop(plainJsLpWindow, 24));
   return {
     solves: engine.value.solves,
+    method: 'engine and plain GLPK loop: best of two alternating rounds',
     engine: { seconds: round(engine.seconds), cpuSeconds: round(engine.cpuSeconds), cost: engine.value.cost },
-    engineTwoCores: { seconds: round(parallel.seconds), cost: parallel.value.cost, parallel: parallel.value.parallel },
-    plainGlpkLoop: { seconds: round(glpkLoop.seconds), cpuSeconds: round(glpkLoop.cpuSeconds), cost: glpkLoop.value },
+    engineTwoCores: { seconds: round(parallel.seconds), cpuSecondsMainThread: round(parallel.cpuSeconds), cost: parallel.value.cost, parallel: parallel.value.parallel },
+    plainGlpkLoop: { seconds: round(glpkLoop.seconds), cpuSeconds: round(glpkLoop.cpuSeconds), cost: glpkLoop.value.cost },
     plainJsLpSolverLoop: { seconds: round(jsLpLoop.seconds), cpuSeconds: round(jsLpLoop.cpuSeconds), cost: jsLpLoop.value },
     speedupVsGlpk: { wall: ratio(glpkLoop.seconds, engine.seconds), cpu: ratio(glpkLoop.cpuSeconds, engine.cpuSeconds), twoCoresWall: ratio(glpkLoop.seconds, parallel.seconds) },
     speedupVsJsLpSolver: { wall: ratio(jsLpLoop.seconds, engine.seconds), cpu: ratio(jsLpLoop.cpuSeconds, engine.cpuSeconds), twoCoresWall: ratio(jsLpLoop.seconds, parallel.seconds) },

@@ -13,11 +13,13 @@
 import type { BatteryParams, DispatchProblem } from '../types';
 import { CsrWriter } from '../lp/csr-writer';
 import type { LpModel } from '../lp/lp-model';
-import { dispatchLayout, type DispatchLayout } from './dispatch-layout';
+import { dispatchLayout, sameMatrix, type DispatchLayout } from './dispatch-layout';
 
 export interface DispatchModel {
   readonly lp: LpModel;
   readonly layout: DispatchLayout;
+  /** The problem it was built from (to tell whether a later window can share the matrix). */
+  readonly problem: DispatchProblem;
 }
 
 export interface BuildOptions {
@@ -65,7 +67,8 @@ export function buildDispatchModel(problem: DispatchProblem, options: BuildOptio
   const dischargeLoss = dt / battery.efficiencyDischarge;
   const degradation = (battery.degradationCostPerMwh * dt) / 1000;
   const nz = n * 4 + (layout.hasGrid ? n * 4 : 0) + (layout.peakCol >= 0 ? n * 2 : 0) + (layout.capDays.length ? n : 0) + 3;
-  const shared = options.previous?.layout.matrixKey === layout.matrixKey ? options.previous.lp : undefined;
+  const previous = options.previous;
+  const shared = previous && sameMatrix(previous.problem, previous.layout, problem, layout) ? previous.lp : undefined;
   const w = new CsrWriter(layout.numCols, layout.numRows, nz, shared);
   let offset = 0;
   const [lastMin, lastMax] = terminalBounds(problem, eMin, eMax);
@@ -128,5 +131,5 @@ export function buildDispatchModel(problem: DispatchProblem, options: BuildOptio
     w.add(layout.initialEnergyCol, -1);
   }
   const lp = w.finish(offset, options.names ? stepNames(layout) : undefined);
-  return { lp, layout };
+  return { lp, layout, problem };
 }

@@ -32,8 +32,6 @@ export interface DispatchLayout {
   readonly cyclicRow: number;
   readonly numCols: number;
   readonly numRows: number;
-  /** Everything the constraint matrix depends on: equal keys mean equal matrices. */
-  readonly matrixKey: string;
 }
 
 /** True when every step has one price for import and export and nothing limits or charges the grid. */
@@ -42,14 +40,6 @@ export function gridFoldable(problem: DispatchProblem): boolean {
   if (site.importLimitKw !== null || site.exportLimitKw !== null || site.demandChargePerKw !== null) return false;
   for (let t = 0; t < priceImport.length; t++) if (priceImport[t] !== priceExport[t]) return false;
   return true;
-}
-
-/** The matrix depends on the shape, the battery's coefficients, the step and where local days change. */
-function matrixKey(problem: DispatchProblem, shape: string): string {
-  const b = problem.battery;
-  let dayBreaks = '';
-  if (b.maxCyclesPerDay !== null) for (let t = 1; t < problem.dayIndex.length; t++) if (problem.dayIndex[t] !== problem.dayIndex[t - 1]) dayBreaks += `${t},`;
-  return `${shape}|${problem.stepHours}|${b.efficiencyCharge}|${b.efficiencyDischarge}|${b.selfDischargePctPerHour}|${dayBreaks}`;
 }
 
 function distinctDays(dayIndex: readonly number[]): number[] {
@@ -91,6 +81,27 @@ export function dispatchLayout(problem: DispatchProblem): DispatchLayout {
     cyclicRow,
     numCols,
     numRows,
-    matrixKey: matrixKey(problem, `${steps}|${colsPerStep}|${rowsPerStep}|${initialEnergyCol}|${peakCol}|${capDays.length}|${cyclicRow}`),
   };
+}
+
+const SHAPE_FIELDS = ['steps', 'colsPerStep', 'rowsPerStep', 'initialEnergyCol', 'peakCol', 'cyclicRow', 'numCols', 'numRows'] as const;
+
+/**
+ * Whether two problems with these layouts have the same constraint matrix: the
+ * same shape, battery coefficients and step, and (with a throughput cap) local
+ * days changing at the same steps. Compared field by field because it runs once
+ * per receding-horizon window.
+ */
+export function sameMatrix(a: DispatchProblem, la: DispatchLayout, b: DispatchProblem, lb: DispatchLayout): boolean {
+  for (const field of SHAPE_FIELDS) if (la[field] !== lb[field]) return false;
+  const [ba, bb] = [a.battery, b.battery];
+  if (a.stepHours !== b.stepHours) return false;
+  if (ba !== bb && (ba.efficiencyCharge !== bb.efficiencyCharge || ba.efficiencyDischarge !== bb.efficiencyDischarge || ba.selfDischargePctPerHour !== bb.selfDischargePctPerHour)) {
+    return false;
+  }
+  if (la.capDays.length === 0) return true;
+  for (let t = 1; t < la.steps; t++) {
+    if ((a.dayIndex[t] !== a.dayIndex[t - 1]) !== (b.dayIndex[t] !== b.dayIndex[t - 1])) return false;
+  }
+  return true;
 }
