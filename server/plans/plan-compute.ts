@@ -20,6 +20,20 @@ export interface PlanComputeInput {
 
 export type ComputeOutcome<R> = { ok: true; results: R } | { ok: false; message: string };
 
+/** The snapshot's battery and site with the profile values, on one grid (the engine's alignment). */
+export function alignSnapshot(
+  snapshot: { battery: PlanInputs['battery']; site: PlanInputs['site'] },
+  series: { price: ProfileSeries; load: ProfileSeries | null; generation: ProfileSeries | null },
+) {
+  return alignInputs({
+    battery: snapshot.battery,
+    site: snapshot.site,
+    prices: series.price,
+    ...(series.load ? { load: series.load } : {}),
+    ...(series.generation ? { generation: series.generation } : {}),
+  });
+}
+
 type Report = (shareDone: number, message: string | null) => void;
 
 const finiteOrNull = (v: number | undefined) => (v !== undefined && Number.isFinite(v) ? v : null);
@@ -27,13 +41,7 @@ const finiteOrNull = (v: number | undefined) => (v !== undefined && Number.isFin
 export async function computePlan(input: PlanComputeInput, report: Report): Promise<ComputeOutcome<PlanResults>> {
   const started = performance.now();
   const { inputs } = input;
-  const aligned = alignInputs({
-    battery: inputs.battery,
-    site: inputs.site,
-    prices: input.price,
-    ...(input.load ? { load: input.load } : {}),
-    ...(input.generation ? { generation: input.generation } : {}),
-  });
+  const aligned = alignSnapshot(inputs, input);
   if (!aligned.ok) return { ok: false, message: aligned.issue.message };
   const terminal = parseTerminal(inputs.terminalRule);
   if (!terminal.ok) return { ok: false, message: terminal.message };
@@ -112,9 +120,13 @@ export async function computePlan(input: PlanComputeInput, report: Report): Prom
       summary: summarisePlan(a, plan.from, deliverySteps, sol),
       turnpike: { ...turnpike, summary: turnpikeSentence(turnpike, a.stepMinutes, inputs.terminalRule) },
       steadyCycle: { costPerDay: plan.steady.costPerDay, equivalentCyclesPerDay: plan.steady.equivalentCyclesPerDay },
-      decisionHorizonHours: null,
-      valueCurves: [],
-      notes: [...a.notes, ...plan.steady.notes],
+      decisionHorizonHours: plan.dpInsights?.decisionHorizonHours ?? null,
+      valueCurves: plan.dpInsights ? plan.dpInsights.valueCurves.map((c) => ({ time: c.time, points: [...c.points] })) : [],
+      notes: [
+        ...a.notes,
+        ...plan.steady.notes,
+        ...(plan.dpInsights?.limitedByData ? ['The decision horizon reaches the end of the lookahead: prices beyond it might still change the delivery decisions.'] : []),
+      ],
       solveSeconds: (performance.now() - started) / 1000,
     },
   };

@@ -5,10 +5,10 @@
  */
 import type { PlanResults } from '@shared/schemas/plan';
 import { getDb } from '../db/client';
-import { insertAuditEvent } from '../audit/audit.repo';
 import { queues } from '../jobs/boss';
 import { finishJob } from '../jobs/job-progress.repo';
 import { runInThread } from '../jobs/run-in-thread';
+import { storeResultsOnce } from '../jobs/store-results';
 import { JobFailure, type JobHandler } from '../jobs/job-types';
 import type { ComputeOutcome, PlanComputeInput } from './plan-compute';
 import { loadSnapshotProfiles } from './profile-series';
@@ -34,18 +34,10 @@ export const planJobHandler: JobHandler = {
         { signal: ctx.signal, onProgress: (share, message) => ctx.report(0.05 + 0.9 * share, message) },
       );
       if (!outcome.ok) throw new JobFailure(`The plan could not be computed: ${outcome.message}`);
-      await ctx.flush();
-      await db.transaction(async (tx) => {
-        const stored = await storePlanResults(tx, plan.id, data.inputVersion, outcome.results);
-        await finishJob(tx, data.jobId, ctx.attempt, { state: 'completed', message: stored ? 'Plan computed.' : 'The plan was already computed.' });
-        if (stored) {
-          await insertAuditEvent(tx, {
-            action: 'plan.computed',
-            entityType: 'plan',
-            entityId: plan.id,
-            details: { jobId: data.jobId, attempt: ctx.attempt, inputVersion: data.inputVersion, method: outcome.results.method },
-          });
-        }
+      await storeResultsOnce(ctx, data, {
+        label: 'The plan',
+        method: outcome.results.method,
+        store: (tx) => storePlanResults(tx, plan.id, data.inputVersion, outcome.results),
       });
       return;
     }

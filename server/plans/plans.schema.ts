@@ -6,6 +6,23 @@ import { profiles } from '../profiles/profiles.schema';
 import { jobProgress } from '../jobs/jobs.schema';
 import type { PlanInputs, PlanResults } from '@shared/schemas/plan';
 
+/** Where a plan or study comes from: site, battery and profiles, none deletable while used. */
+export function runSourceColumns() {
+  return {
+    siteId: uuid('site_id')
+      .notNull()
+      .references(() => sites.id, { onDelete: 'restrict' }),
+    batteryId: uuid('battery_id')
+      .notNull()
+      .references(() => batteries.id, { onDelete: 'restrict' }),
+    priceProfileId: uuid('price_profile_id')
+      .notNull()
+      .references(() => profiles.id, { onDelete: 'restrict' }),
+    loadProfileId: uuid('load_profile_id').references(() => profiles.id, { onDelete: 'restrict' }),
+    generationProfileId: uuid('generation_profile_id').references(() => profiles.id, { onDelete: 'restrict' }),
+  };
+}
+
 /**
  * Dispatch plans (DESIGN sections 2 and 4). `inputs` is the snapshot taken at
  * creation (battery and site parameters copied, profiles named by id and
@@ -18,17 +35,7 @@ export const plans = pgTable(
   'plans',
   {
     id: uuid('id').primaryKey().defaultRandom(),
-    siteId: uuid('site_id')
-      .notNull()
-      .references(() => sites.id, { onDelete: 'restrict' }),
-    batteryId: uuid('battery_id')
-      .notNull()
-      .references(() => batteries.id, { onDelete: 'restrict' }),
-    priceProfileId: uuid('price_profile_id')
-      .notNull()
-      .references(() => profiles.id, { onDelete: 'restrict' }),
-    loadProfileId: uuid('load_profile_id').references(() => profiles.id, { onDelete: 'restrict' }),
-    generationProfileId: uuid('generation_profile_id').references(() => profiles.id, { onDelete: 'restrict' }),
+    ...runSourceColumns(),
     deliveryStart: timestamp('delivery_start', { withTimezone: true }).notNull(),
     deliveryEnd: timestamp('delivery_end', { withTimezone: true }).notNull(),
     horizonHours: doublePrecision('horizon_hours').notNull(),

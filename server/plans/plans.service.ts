@@ -1,18 +1,15 @@
 /** Plans: creation (snapshot, validation, job) and reading. */
-import { randomUUID } from 'node:crypto';
 import type { PlanCreate, PlanCreated, PlanDefaults, PlanInputs, PlanListQuery, Plan } from '@shared/schemas/plan';
 import { terminalTargetPct } from '@shared/schemas/terminal-rule';
 import { getDb } from '../db/client';
 import { notFound } from '../http/app-error';
-import { insertAuditEvent } from '../audit/audit.repo';
 import { findBattery } from '../batteries/batteries.repo';
 import { findSite } from '../sites/sites.repo';
-import { inJobTransaction } from '../jobs/job-transaction';
-import { enqueueJob, newJobId } from '../jobs/enqueue';
+import { createWithJob } from '../jobs/create-with-job';
 import { toJobProgress } from '../jobs/job-serializer';
 import { getJobProgress } from '../jobs/job-progress.repo';
 import type { Actor } from '../sites/request-context';
-import { checkWholeSteps, gridStepMinutes, resolveRunInputs } from './run-inputs';
+import { checkWholeSteps, gridStepMinutes, resolveRunInputs, runColumns } from './run-inputs';
 import { checkTerminalTarget, resolveInitialSoc } from './initial-soc';
 import { findPlan, insertPlan, listPlans } from './plans.repo';
 import { toPlan } from './plan-serializer';
@@ -48,44 +45,32 @@ export async function createPlan(body: PlanCreate, actor: Actor, databaseUrl: st
     bandPct: DEFAULT_BAND_PCT,
   };
 
-  const planId = randomUUID();
-  const jobId = newJobId();
-  await inJobTransaction(async (t) => {
-    await enqueueJob(t, databaseUrl, { jobId, kind: 'plan', entityId: planId, inputVersion: 1 });
-    await insertPlan(t.tx, {
-      id: planId,
-      siteId: run.site.id,
-      batteryId: run.battery.id,
-      priceProfileId: run.profiles.price.id,
-      loadProfileId: run.profiles.load?.id ?? null,
-      generationProfileId: run.profiles.generation?.id ?? null,
-      deliveryStart: body.deliveryStart,
-      deliveryEnd: body.deliveryEnd,
-      horizonHours: body.horizonHours,
-      terminalRule: body.terminalRule,
-      initialSocPct: soc.pct,
-      inputs,
-      createdBy: actor.id,
-      jobId,
-    });
-    await insertAuditEvent(t.tx, {
-      actorId: actor.id,
-      actorEmail: actor.email,
-      ip: actor.ip,
-      action: 'plan.created',
-      entityType: 'plan',
-      entityId: planId,
-      details: {
-        batteryId: run.battery.id,
-        deliveryStart: inputs.deliveryStart,
-        deliveryEnd: inputs.deliveryEnd,
+  const { entityId: planId, jobId } = await createWithJob({
+    kind: 'plan',
+    actor,
+    databaseUrl,
+    insert: (tx, ids) =>
+      insertPlan(tx, {
+        id: ids.entityId,
+        jobId: ids.jobId,
+        ...runColumns(run),
+        deliveryStart: body.deliveryStart,
+        deliveryEnd: body.deliveryEnd,
         horizonHours: body.horizonHours,
         terminalRule: body.terminalRule,
         initialSocPct: soc.pct,
-        initialSocSource: soc.source,
-        jobId,
-      },
-    });
+        inputs,
+        createdBy: actor.id,
+      }),
+    auditDetails: {
+      batteryId: run.battery.id,
+      deliveryStart: inputs.deliveryStart,
+      deliveryEnd: inputs.deliveryEnd,
+      horizonHours: body.horizonHours,
+      terminalRule: body.terminalRule,
+      initialSocPct: soc.pct,
+      initialSocSource: soc.source,
+    },
   });
   const plan = await getPlan(planId);
   const job = await getJobProgress(db, jobId);

@@ -146,3 +146,14 @@ export function checkWholeSteps(entries: readonly { hours: number; path: string;
   }
   if (issues.length > 0) throw unprocessable('A duration does not fit the profiles’ time step.', issues);
 }
+
+/** The columns plans and studies share: where the run comes from. */
+export function runColumns(run: RunInputs) {
+  return {
+    siteId: run.site.id,
+    batteryId: run.battery.id,
+    priceProfileId: run.profiles.price.id,
+    loadProfileId: run.profiles.load?.id ?? null,
+    generationProfileId: run.profiles.generation?.id ?? null,
+  };
+}

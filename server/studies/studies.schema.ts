@@ -1,9 +1,7 @@
 import { sql } from 'drizzle-orm';
 import { check, doublePrecision, index, integer, jsonb, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
-import { sites } from '../sites/sites.schema';
-import { batteries } from '../batteries/batteries.schema';
-import { profiles } from '../profiles/profiles.schema';
 import { jobProgress } from '../jobs/jobs.schema';
+import { runSourceColumns } from '../plans/plans.schema';
 import type { StudyInputs, StudyResults } from '@shared/schemas/study';
 
 /**
@@ -17,17 +15,7 @@ export const horizonStudies = pgTable(
   'horizon_studies',
   {
     id: uuid('id').primaryKey().defaultRandom(),
-    siteId: uuid('site_id')
-      .notNull()
-      .references(() => sites.id, { onDelete: 'restrict' }),
-    batteryId: uuid('battery_id')
-      .notNull()
-      .references(() => batteries.id, { onDelete: 'restrict' }),
-    priceProfileId: uuid('price_profile_id')
-      .notNull()
-      .references(() => profiles.id, { onDelete: 'restrict' }),
-    loadProfileId: uuid('load_profile_id').references(() => profiles.id, { onDelete: 'restrict' }),
-    generationProfileId: uuid('generation_profile_id').references(() => profiles.id, { onDelete: 'restrict' }),
+    ...runSourceColumns(),
     periodStart: timestamp('period_start', { withTimezone: true }).notNull(),
     periodEnd: timestamp('period_end', { withTimezone: true }).notNull(),
     horizonsHours: doublePrecision('horizons_hours').array().notNull(),

@@ -1,16 +1,13 @@
 /** Horizon studies: creation (snapshot, validation, job) and reading. */
-import { randomUUID } from 'node:crypto';
 import type { Study, StudyCreate, StudyCreated, StudyInputs, StudyListQuery } from '@shared/schemas/study';
 import { terminalTargetPct } from '@shared/schemas/terminal-rule';
 import { getDb } from '../db/client';
 import { notFound } from '../http/app-error';
-import { insertAuditEvent } from '../audit/audit.repo';
-import { inJobTransaction } from '../jobs/job-transaction';
-import { enqueueJob, newJobId } from '../jobs/enqueue';
+import { createWithJob } from '../jobs/create-with-job';
 import { toJobProgress } from '../jobs/job-serializer';
 import { getJobProgress } from '../jobs/job-progress.repo';
 import type { Actor } from '../sites/request-context';
-import { checkWholeSteps, gridStepMinutes, resolveRunInputs } from '../plans/run-inputs';
+import { checkWholeSteps, gridStepMinutes, resolveRunInputs, runColumns } from '../plans/run-inputs';
 import { checkTerminalTarget, resolveInitialSoc } from '../plans/initial-soc';
 import { DEFAULT_BAND_PCT } from '../plans/plans.service';
 import { findStudy, insertStudy, listStudies } from './studies.repo';
@@ -50,36 +47,25 @@ export async function createStudy(body: StudyCreate, actor: Actor, databaseUrl: 
     bandPct: DEFAULT_BAND_PCT,
   };
 
-  const studyId = randomUUID();
-  const jobId = newJobId();
-  await inJobTransaction(async (t) => {
-    await enqueueJob(t, databaseUrl, { jobId, kind: 'study', entityId: studyId, inputVersion: 1 });
-    await insertStudy(t.tx, {
-      id: studyId,
-      siteId: run.site.id,
-      batteryId: run.battery.id,
-      priceProfileId: run.profiles.price.id,
-      loadProfileId: run.profiles.load?.id ?? null,
-      generationProfileId: run.profiles.generation?.id ?? null,
-      periodStart: body.start,
-      periodEnd: body.end,
-      horizonsHours: inputs.horizonsHours,
-      replanHours: body.replanHours,
-      terminalRules: body.terminalRules,
-      initialSocPct: soc.pct,
-      inputs,
-      createdBy: actor.id,
-      jobId,
-    });
-    await insertAuditEvent(t.tx, {
-      actorId: actor.id,
-      actorEmail: actor.email,
-      ip: actor.ip,
-      action: 'study.created',
-      entityType: 'study',
-      entityId: studyId,
-      details: { batteryId: run.battery.id, start: inputs.start, end: inputs.end, horizonsHours: inputs.horizonsHours, replanHours: body.replanHours, terminalRules: body.terminalRules, jobId },
-    });
+  const { entityId: studyId, jobId } = await createWithJob({
+    kind: 'study',
+    actor,
+    databaseUrl,
+    insert: (tx, ids) =>
+      insertStudy(tx, {
+        id: ids.entityId,
+        jobId: ids.jobId,
+        ...runColumns(run),
+        periodStart: body.start,
+        periodEnd: body.end,
+        horizonsHours: inputs.horizonsHours,
+        replanHours: body.replanHours,
+        terminalRules: body.terminalRules,
+        initialSocPct: soc.pct,
+        inputs,
+        createdBy: actor.id,
+      }),
+    auditDetails: { batteryId: run.battery.id, start: inputs.start, end: inputs.end, horizonsHours: inputs.horizonsHours, replanHours: body.replanHours, terminalRules: body.terminalRules },
   });
   const study = await getStudy(studyId);
   const job = await getJobProgress(db, jobId);

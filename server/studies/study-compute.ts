@@ -4,11 +4,11 @@
  * path, with progress after each run. Pure: no database.
  */
 import type { StudyInputs, StudyResults } from '@shared/schemas/study';
-import { alignInputs, type ProfileSeries } from '../engine/inputs/align-inputs';
+import type { ProfileSeries } from '../engine/inputs/align-inputs';
 import { runHorizonStudy } from '../engine/study/run-horizon-study';
 import { DEFAULT_GAP_TARGET_PCT } from '../engine/study/recommend-horizon';
 import { parseTerminal, type TerminalChoice } from '../engine/terminal/terminal-choice';
-import type { ComputeOutcome } from '../plans/plan-compute';
+import { alignSnapshot, type ComputeOutcome } from '../plans/plan-compute';
 
 export interface StudyComputeInput {
   inputs: StudyInputs;
@@ -23,13 +23,7 @@ type Report = (shareDone: number, message: string | null) => void;
 
 export async function computeStudy(input: StudyComputeInput, report: Report): Promise<ComputeOutcome<StudyResults>> {
   const { inputs } = input;
-  const aligned = alignInputs({
-    battery: inputs.battery,
-    site: inputs.site,
-    prices: input.price,
-    ...(input.load ? { load: input.load } : {}),
-    ...(input.generation ? { generation: input.generation } : {}),
-  });
+  const aligned = alignSnapshot(inputs, input);
   if (!aligned.ok) return { ok: false, message: aligned.issue.message };
   const terminals: TerminalChoice[] = [];
   for (const text of inputs.terminalRules) {

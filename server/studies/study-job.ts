@@ -6,10 +6,10 @@
  */
 import type { StudyResults } from '@shared/schemas/study';
 import { getDb } from '../db/client';
-import { insertAuditEvent } from '../audit/audit.repo';
 import { queues } from '../jobs/boss';
 import { finishJob } from '../jobs/job-progress.repo';
 import { runInThread } from '../jobs/run-in-thread';
+import { storeResultsOnce } from '../jobs/store-results';
 import { loadJobsConfig } from '../jobs/jobs-config';
 import { JobFailure, type JobHandler } from '../jobs/job-types';
 import type { ComputeOutcome } from '../plans/plan-compute';
@@ -36,18 +36,10 @@ export const studyJobHandler: JobHandler = {
     const input: StudyComputeInput = { inputs: study.inputs, ...profiles, threads: loadJobsConfig().STUDY_THREADS };
     const outcome = await runInThread<ComputeOutcome<StudyResults>>({ task: 'study', input }, { signal: ctx.signal, onProgress: (s, m) => ctx.report(s, m) });
     if (!outcome.ok) throw new JobFailure(`The study could not be computed: ${outcome.message}`);
-    await ctx.flush();
-    await db.transaction(async (tx) => {
-      const stored = await storeStudyResults(tx, study.id, data.inputVersion, outcome.results);
-      await finishJob(tx, data.jobId, ctx.attempt, { state: 'completed', message: stored ? 'Study computed.' : 'The study was already computed.' });
-      if (stored) {
-        await insertAuditEvent(tx, {
-          action: 'study.computed',
-          entityType: 'study',
-          entityId: study.id,
-          details: { jobId: data.jobId, attempt: ctx.attempt, inputVersion: data.inputVersion, method: outcome.results.method },
-        });
-      }
+    await storeResultsOnce(ctx, data, {
+      label: 'The study',
+      method: outcome.results.method,
+      store: (tx) => storeStudyResults(tx, study.id, data.inputVersion, outcome.results),
     });
   },
 

@@ -76,3 +76,21 @@ export function RunSourceFields({ value, onChange, errors }: Props) {
     </div>
   );
 }
+
+/** A site filter for lists: "All sites" or one of them. */
+export function SiteFilter({ value, onChange }: { value: string; onChange: (siteId: string) => void }) {
+  const { sites } = useRunSourceLists('');
+  return (
+    <label className="text-sm">
+      Site
+      <select className={inputClass} value={value} onChange={(e) => onChange(e.target.value)}>
+        <option value="">All sites</option>
+        {(sites.data ?? []).map((s) => (
+          <option key={s.id} value={s.id}>
+            {s.name}
+          </option>
+        ))}
+      </select>
+    </label>
+  );
+}

@@ -112,6 +112,22 @@ describe('a plan computed by a background job', () => {
       expect(s.chargeKw).toBeLessThanOrEqual(1000 + 1e-6);
     }
     expect(plan.results!.turnpike.summary).toMatch(/^Stays near the steady cycle \d+ % of the time/);
+
+    // No demand charge, no cycle cap: the engine takes the exact fast path and adds what only it knows.
+    expect(plan.method).toBe('dp');
+    const dh = plan.results!.decisionHorizonHours!;
+    expect(dh).toBeGreaterThan(0);
+    expect(dh).toBeLessThanOrEqual(36);
+    const curves = plan.results!.valueCurves;
+    expect(curves[0]!.time).toBe(iso(start + 24 * HOUR_MS));
+    // [D] The cost-to-go V(e) is convex in the stored energy, so the value of one more MWh, −V′(e),
+    // never rises as the SoC rises: every curve is non-increasing in SoC.
+    for (const curve of curves) {
+      for (let i = 1; i < curve.points.length; i++) {
+        expect(curve.points[i]!.socPct).toBeGreaterThanOrEqual(curve.points[i - 1]!.socPct - 1e-9);
+        expect(curve.points[i]!.value).toBeLessThanOrEqual(curve.points[i - 1]!.value + 1e-6);
+      }
+    }
   });
 
   it('stores the results once with one audit event, and records who created the plan', async () => {

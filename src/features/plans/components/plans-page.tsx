@@ -3,7 +3,7 @@ import { Link, useSearchParams } from 'react-router-dom';
 import { planStatuses, type PlanStatusName } from '@shared/schemas/plan';
 import { inputClass } from '@/components/form-field';
 import { EmptyState, ErrorState, LoadingState } from '@/components/query-state';
-import { useRunSourceLists } from '@/components/run-source-fields';
+import { SiteFilter } from '@/components/run-source-fields';
 import { useCan } from '@/lib/authorization';
 import { usePlans, type PlanFilters } from '../api/get-plans';
 import { PlansTable } from './plans-table';
@@ -20,7 +20,6 @@ export function PlansPage() {
     limit: 100,
   };
   const plans = usePlans(filters);
-  const { sites } = useRunSourceLists('');
   const setFilter = (key: string, value: string) => {
     const next = new URLSearchParams(params);
     if (value) next.set(key, value);
@@ -38,13 +37,7 @@ export function PlansPage() {
         )}
       </div>
       <div className="grid gap-3 sm:grid-cols-3" role="search">
-        <label className="text-sm">
-          Site
-          <select className={inputClass} value={filters.siteId ?? ''} onChange={(e) => setFilter('siteId', e.target.value)}>
-            <option value="">All sites</option>
-            {(sites.data ?? []).map((s) => <option key={s.id} value={s.id}>{s.name}</option>)}
-          </select>
-        </label>
+        <SiteFilter value={filters.siteId ?? ''} onChange={(id) => setFilter('siteId', id)} />
         <label className="text-sm">
           Status
           <select className={inputClass} value={filters.status ?? ''} onChange={(e) => setFilter('status', e.target.value)}>

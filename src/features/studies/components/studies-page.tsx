@@ -3,7 +3,7 @@ import { Link, useSearchParams } from 'react-router-dom';
 import type { JobState } from '@shared/schemas/job';
 import { inputClass } from '@/components/form-field';
 import { EmptyState, ErrorState, LoadingState } from '@/components/query-state';
-import { useRunSourceLists } from '@/components/run-source-fields';
+import { SiteFilter } from '@/components/run-source-fields';
 import { useCan } from '@/lib/authorization';
 import { formatPercent } from '@/lib/format';
 import { useStudies } from '../api/get-studies';
@@ -16,7 +16,6 @@ export function StudiesPage() {
   const siteId = params.get('siteId') ?? undefined;
   const status = (params.get('status') as JobState | 'active' | null) ?? undefined;
   const studies = useStudies({ siteId, status });
-  const { sites } = useRunSourceLists('');
   const setFilter = (key: string, value: string) => {
     const next = new URLSearchParams(params);
     if (value) next.set(key, value);
@@ -30,13 +29,7 @@ export function StudiesPage() {
         {canRun && <Link to="/studies/new" className="rounded bg-seaglass-700 px-4 py-2 text-sm font-semibold text-white hover:bg-seaglass-600">New study</Link>}
       </div>
       <div className="grid gap-3 sm:grid-cols-2" role="search">
-        <label className="text-sm">
-          Site
-          <select className={inputClass} value={siteId ?? ''} onChange={(e) => setFilter('siteId', e.target.value)}>
-            <option value="">All sites</option>
-            {(sites.data ?? []).map((s) => <option key={s.id} value={s.id}>{s.name}</option>)}
-          </select>
-        </label>
+        <SiteFilter value={siteId ?? ''} onChange={(id) => setFilter('siteId', id)} />
         <label className="text-sm">
           State
           <select className={inputClass} value={status ?? ''} onChange={(e) => setFilter('status', e.target.value)}>
