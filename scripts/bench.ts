@@ -197,7 +197,7 @@ async function closedLoop24h() {
     solves: engine.value.solves,
     method: 'engine and plain GLPK loop: best of two alternating rounds',
     engine: { seconds: round(engine.seconds), cpuSeconds: round(engine.cpuSeconds), cost: engine.value.cost },
-    engineTwoCores: { seconds: round(parallel.seconds), cpuSecondsMainThread: round(parallel.cpuSeconds), cost: parallel.value.cost, parallel: parallel.value.parallel },
+    engineTwoCores: { seconds: round(parallel.seconds), cpuSecondsAllThreads: round(parallel.cpuSeconds), cost: parallel.value.cost, parallel: parallel.value.parallel },
     plainGlpkLoop: { seconds: round(glpkLoop.seconds), cpuSeconds: round(glpkLoop.cpuSeconds), cost: glpkLoop.value.cost },
     plainJsLpSolverLoop: { seconds: round(jsLpLoop.seconds), cpuSeconds: round(jsLpLoop.cpuSeconds), cost: jsLpLoop.value },
     speedupVsGlpk: { wall: ratio(glpkLoop.seconds, engine.seconds), cpu: ratio(glpkLoop.cpuSeconds, engine.cpuSeconds), twoCoresWall: ratio(glpkLoop.seconds, parallel.seconds) },

@@ -89,10 +89,3 @@ export function reducedCosts(model: LpModel, rowDual: Float64Array): Float64Arra
   }
   return d;
 }
-
-/** Objective value colCost·x + offset. */
-export function objectiveOf(model: LpModel, x: ArrayLike<number>): number {
-  let z = model.offset;
-  for (let j = 0; j < model.numCols; j++) z += model.colCost[j]! * x[j]!;
-  return z;
-}
