@@ -2,8 +2,10 @@
 import type { PlanResults, PlanStep } from '@shared/schemas/plan';
 
 export interface StepPoint {
-  /** Start of the step, epoch ms. */
+  /** Start of the step, epoch ms (prices and power belong to the interval). */
   t: number;
+  /** End of the step, epoch ms (SoC and stored-energy value are at the end of the step). */
+  tEnd: number;
   step: PlanStep;
 }
 
@@ -17,7 +19,8 @@ export interface SplitSteps {
 }
 
 export function splitSteps(results: PlanResults): SplitSteps {
-  const all = results.steps.map((step) => ({ t: Date.parse(step.time), step }));
+  const stepMs = results.stepMinutes * 60_000;
+  const all = results.steps.map((step) => ({ t: Date.parse(step.time), tEnd: Date.parse(step.time) + stepMs, step }));
   const delivery = all.slice(0, results.deliverySteps);
   const lookahead = results.deliverySteps < all.length ? all.slice(Math.max(0, results.deliverySteps - 1)) : [];
   return {

@@ -5,7 +5,7 @@ import { chartMargin, chartTheme, colours, lookaheadLine } from './chart-theme';
 import { timeTick, type SplitSteps, type StepPoint } from './chart-data';
 import { ChartLegend } from './soc-chart';
 
-const x = (p: StepPoint) => new Date(p.t);
+const x = (p: StepPoint) => new Date(p.tEnd);
 const y = (p: StepPoint) => (p.step.distance === null ? null : p.step.distance * 100);
 
 export function DistanceChart({ split, timeZone, bandPct }: { split: SplitSteps; timeZone: string; bandPct: number }) {

@@ -3,6 +3,7 @@ import { Axis, BarSeries, Grid, LineSeries, Tooltip, XYChart } from '@visx/xycha
 import { formatLocalTime, formatNumber } from '@/lib/format';
 import { chartMargin, chartTheme, colours, lookaheadLine } from './chart-theme';
 import { timeTick, type SplitSteps, type StepPoint } from './chart-data';
+import { ChartLegend } from './soc-chart';
 
 const x = (p: StepPoint) => new Date(p.t);
 
@@ -46,6 +47,14 @@ export function PriceDispatchChart({ split, timeZone, currency }: { split: Split
           <BarSeries dataKey="discharge (lookahead)" data={part(false)} xAccessor={(p) => p.t} yAccessor={(p) => -p.step.dischargeKw} colorAccessor={() => colours.inkFaint} />
         </XYChart>
       </div>
+      <ChartLegend
+        items={[
+          { colour: colours.ink, label: 'price' },
+          { colour: colours.seaglass, label: 'charge (above zero)' },
+          { colour: colours.inkSoft, label: 'discharge (below zero)' },
+          { colour: colours.inkFaint, label: 'lookahead: dashed price, pale bars', dashed: true },
+        ]}
+      />
     </figure>
   );
 }

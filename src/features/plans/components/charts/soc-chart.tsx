@@ -7,7 +7,7 @@ import { formatLocalTime, formatNumber } from '@/lib/format';
 import { chartMargin, chartTheme, colours, lookaheadLine } from './chart-theme';
 import { timeTick, type SplitSteps, type StepPoint } from './chart-data';
 
-const x = (p: StepPoint) => new Date(p.t);
+const x = (p: StepPoint) => new Date(p.tEnd);
 
 interface Props {
   split: SplitSteps;
@@ -15,9 +15,11 @@ interface Props {
   energyKwh: number;
   /** Half-width of the band in % of nameplate energy. */
   bandSocPct: number;
+  /** The same in % of usable energy, as the figures say it. */
+  bandPct: number;
 }
 
-export function SocChart({ split, timeZone, energyKwh, bandSocPct }: Props) {
+export function SocChart({ split, timeZone, energyKwh, bandSocPct, bandPct }: Props) {
   const pct = (kwh: number | null) => (kwh === null ? null : (kwh / energyKwh) * 100);
   const withSteady = split.all.filter((p) => p.step.steadySocKwh !== null);
   return (
@@ -50,7 +52,7 @@ export function SocChart({ split, timeZone, energyKwh, bandSocPct }: Props) {
               const p = tooltipData?.nearestDatum?.datum;
               return p ? (
                 <span className="text-xs">
-                  {formatLocalTime(p.t, timeZone)} {p.step.delivery ? '' : '(lookahead)'}
+                  end of step {formatLocalTime(p.tEnd, timeZone)} {p.step.delivery ? '' : '(lookahead)'}
                   <br />
                   SoC {formatNumber(p.step.socPct, 1)} % · steady {formatNumber(pct(p.step.steadySocKwh), 1)} % · {p.step.arc.replace('near', 'near steady')}
                 </span>
@@ -63,7 +65,7 @@ export function SocChart({ split, timeZone, energyKwh, bandSocPct }: Props) {
         items={[
           { colour: colours.ink, label: 'SoC, delivery window' },
           { colour: colours.inkSoft, label: 'SoC, lookahead (dashed)', dashed: true },
-          { colour: colours.seaglass, label: `steady cycle, band ±${formatNumber(bandSocPct, 1)} % shaded` },
+          { colour: colours.seaglass, label: `steady cycle, band ±${bandPct} % of usable energy shaded` },
           { colour: colours.inkSoft, label: 'entry arc (dots)' },
           { colour: colours.amber, label: 'leaving arc (dots)' },
         ]}

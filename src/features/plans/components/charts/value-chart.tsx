@@ -4,7 +4,7 @@ import { chartMargin, chartTheme, colours, lookaheadLine } from './chart-theme';
 import { timeTick, type SplitSteps, type StepPoint } from './chart-data';
 import { ChartLegend } from './soc-chart';
 
-const x = (p: StepPoint) => new Date(p.t);
+const x = (p: StepPoint) => new Date(p.tEnd);
 
 export function ValueChart({ split, timeZone, currency }: { split: SplitSteps; timeZone: string; currency: string }) {
   const steady = split.all.filter((p) => p.step.steadyValue !== null);

@@ -16,7 +16,7 @@ export function ValueCurvesChart({ curves, timeZone, currency }: { curves: PlanR
       <figcaption className="px-2 text-sm font-medium text-ink-800">Value of stored energy against SoC</figcaption>
       {/* XYChart takes its width from its parent, which needs the height or the chart collapses onto what follows. */}
       <div style={{ height: 220 }}>
-        <XYChart height={220} theme={chartTheme} xScale={{ type: 'linear', domain: [0, 100] }} yScale={{ type: 'linear', nice: true, zero: false }} margin={chartMargin}
+        <XYChart height={220} theme={chartTheme} xScale={{ type: 'linear', domain: [0, 100] }} yScale={{ type: 'linear', nice: true, zero: false }} margin={{ ...chartMargin, bottom: 44 }}
           accessibilityLabel={`Stored-energy value in ${currency}/MWh against SoC in % at ${shown.length} times`}>
           <Grid columns={false} numTicks={4} />
           <Axis orientation="bottom" numTicks={5} label="SoC %" />
