@@ -27,7 +27,7 @@ export default function ComparisonChart({ plans, timeZone }: ComparisonChartProp
           <Axis orientation="left" numTicks={5} label="SoC %" />
           {plans.map((p, i) => (
             <LineSeries key={p.id} dataKey={label(p)} data={p.results!.steps.slice(0, p.results!.deliverySteps)}
-              xAccessor={(s: PlanStep) => new Date(s.time)} yAccessor={(s: PlanStep) => s.socPct} stroke={palette[i % palette.length]} strokeWidth={2}
+              xAccessor={(s: PlanStep) => new Date(Date.parse(s.time) + p.results!.stepMinutes * 60_000)} yAccessor={(s: PlanStep) => s.socPct} stroke={palette[i % palette.length]} strokeWidth={2}
               strokeDasharray={p.terminalRule === 'free' ? '6 3' : undefined} />
           ))}
           <Tooltip<PlanStep> showVerticalCrosshair renderTooltip={({ tooltipData }) => (
