@@ -17,7 +17,7 @@ export async function failDeadJob(db: Db, job: PgBoss.JobWithMetadata<JobData>):
   const progress = await getJobProgress(db, data.jobId);
   if (!handler || !progress || progress.state === 'completed' || progress.state === 'failed') return;
   const last = progress.error ? ` Last error: ${progress.error}` : '';
-  const message = `The job was given up after ${progress.attempt} attempts.${last}`;
+  const message = `The job was given up after ${progress.attempt} attempt${progress.attempt === 1 ? '' : 's'}.${last}`;
   logger.error(`Job ${data.jobId} (${data.kind}) moved to the dead-letter queue: ${message}`);
   await failJobFinally(handler, data, null, message);
 }
