@@ -36,6 +36,15 @@ export function alignSnapshot(
 
 type Report = (shareDone: number, message: string | null) => void;
 
+/** Value curves kept per plan: a week of hourly curves would swell every read of the plan. */
+const MAX_VALUE_CURVES = 25;
+
+function evenlySpaced<T>(items: readonly T[], max: number): T[] {
+  if (items.length <= max) return [...items];
+  const every = Math.ceil(items.length / max);
+  return items.filter((_, i) => i % every === 0);
+}
+
 const finiteOrNull = (v: number | undefined) => (v !== undefined && Number.isFinite(v) ? v : null);
 
 export async function computePlan(input: PlanComputeInput, report: Report): Promise<ComputeOutcome<PlanResults>> {
@@ -121,7 +130,7 @@ export async function computePlan(input: PlanComputeInput, report: Report): Prom
       turnpike: { ...turnpike, summary: turnpikeSentence(turnpike, a.stepMinutes, inputs.terminalRule) },
       steadyCycle: { costPerDay: plan.steady.costPerDay, equivalentCyclesPerDay: plan.steady.equivalentCyclesPerDay },
       decisionHorizonHours: plan.dpInsights?.decisionHorizonHours ?? null,
-      valueCurves: plan.dpInsights ? plan.dpInsights.valueCurves.map((c) => ({ time: c.time, points: [...c.points] })) : [],
+      valueCurves: evenlySpaced(plan.dpInsights?.valueCurves ?? [], MAX_VALUE_CURVES).map((c) => ({ time: c.time, points: [...c.points] })),
       notes: [
         ...a.notes,
         ...plan.steady.notes,
