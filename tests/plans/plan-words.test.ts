@@ -1,0 +1,43 @@
+/**
+ * The turnpike figures in plain words. The wording is the product's contract:
+ * issue 6 gives the example "stays near the steady cycle 86 % of the time; the
+ * last 5 h leave it: energy is sold off because nothing values it after the horizon".
+ */
+import { describe, expect, it } from 'vitest';
+import { durationWords, turnpikeSentence } from '../../server/plans/plan-words';
+
+const figures = {
+  bandPct: 5,
+  bandKwh: 80,
+  nearSteadyShare: 0.86,
+  entryArcSteps: 0,
+  leavingArcSteps: 20,
+  commitWindowSteps: null,
+  longerLookaheadHours: null,
+  value: { bandPerMwh: 3, nearSteadyShare: 0.8, entryArcSteps: 0, leavingArcSteps: 0, commitWindowSteps: null },
+  flags: [],
+};
+
+describe('the turnpike sentence', () => {
+  it('reads like the example of issue 6 for a free end with 15-minute steps', () => {
+    // [D] 20 steps of 15 minutes = 5 h.
+    expect(turnpikeSentence(figures, 15, 'free')).toBe(
+      'Stays near the steady cycle 86 % of the time (within 5 % of usable energy); the last 5 h leave it: energy is sold off because nothing values it after the horizon.',
+    );
+  });
+
+  it('names the entry arc, the reason of each terminal rule and the commit window', () => {
+    const text = turnpikeSentence({ ...figures, entryArcSteps: 3, commitWindowSteps: 96, longerLookaheadHours: 192 }, 15, 'target:80');
+    expect(text).toContain('the first 45 min approach it from the starting SoC');
+    expect(text).toContain('the plan steers to its end target of 80 % SoC');
+    expect(text).toContain('The first 24 h agree with a plan looking 192 h ahead: that part is safe to commit.');
+    expect(turnpikeSentence({ ...figures, leavingArcSteps: 0 }, 60, 'steady-value')).toContain('it does not leave the steady cycle before the end of the horizon');
+    expect(turnpikeSentence(figures, 60, 'cyclic')).toContain('the last 20 h leave it: the plan steers back to the SoC it started with');
+  });
+
+  it('says durations in minutes below an hour and in hours above', () => {
+    expect(durationWords(3, 15)).toBe('45 min');
+    expect(durationWords(6, 15)).toBe('1.5 h');
+    expect(durationWords(48, 60)).toBe('48 h');
+  });
+});
