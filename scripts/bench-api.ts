@@ -162,6 +162,8 @@ async function main() {
   planPath = `/api/plans/${plan.plan.id}`;
   while ((await client.ok('GET', planPath)).job.state !== 'completed') await new Promise((r) => setTimeout(r, 200));
 
+  // Let the worker's solve threads finish loading the engine before measuring "idle".
+  await new Promise((r) => setTimeout(r, 5000));
   const idle = percentiles(await hammer(client, planPath, () => true, 400));
   const horizons = [6, 12, 24, 48, 96, 168];
   const terminalRules = ['free', 'steady-value'];
