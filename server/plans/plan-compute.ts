@@ -4,10 +4,7 @@
  * store, or the engine's message when the model cannot be solved.
  */
 import type { PlanInputs, PlanResults, PlanStep } from '@shared/schemas/plan';
-import { alignInputs, type ProfileSeries } from '../engine/inputs/align-inputs';
-import { solvePlan } from '../engine/plan/solve-plan';
-import { parseTerminal, minuteOfDayAt } from '../engine/terminal/terminal-choice';
-import { steadySocAt, steadyValueAt } from '../engine/steady/solve-steady-cycle';
+import { alignInputs, parseTerminal, solvePlan, steadySocAt, steadyValueAt, type AlignedInputs, type ProfileSeries } from '../engine';
 import { summarisePlan } from './plan-summary';
 import { turnpikeSentence } from './plan-words';
 
@@ -35,6 +32,12 @@ export function alignSnapshot(
 }
 
 type Report = (shareDone: number, message: string | null) => void;
+
+/** Local clock minute at the boundary before step `index` (the grid's end counts as a boundary). */
+function minuteOfDayAt(a: AlignedInputs, index: number): number {
+  const minutes = a.clock.minuteOfDay;
+  return index < minutes.length ? minutes[index]! : (minutes[minutes.length - 1]! + a.stepMinutes) % 1440;
+}
 
 /** Value curves kept per plan: a week of hourly curves would swell every read of the plan. */
 const MAX_VALUE_CURVES = 25;

@@ -6,7 +6,7 @@
 import type { ProfileRef } from '@shared/schemas/plan';
 import type { DbOrTx } from '../db/client';
 import { findProfileSummary, findProfileValues } from '../profiles/profiles.repo';
-import type { ProfileSeries } from '../engine/inputs/align-inputs';
+import type { ProfileSeries } from '../engine';
 import { JobFailure } from '../jobs/job-types';
 
 export async function loadProfileSeries(db: DbOrTx, ref: ProfileRef): Promise<ProfileSeries> {

@@ -4,10 +4,7 @@
  * path, with progress after each run. Pure: no database.
  */
 import type { StudyInputs, StudyResults } from '@shared/schemas/study';
-import type { ProfileSeries } from '../engine/inputs/align-inputs';
-import { runHorizonStudy } from '../engine/study/run-horizon-study';
-import { DEFAULT_GAP_TARGET_PCT } from '../engine/study/recommend-horizon';
-import { parseTerminal, type TerminalChoice } from '../engine/terminal/terminal-choice';
+import { DEFAULT_GAP_TARGET_PCT, parseTerminal, runHorizonStudy, type ProfileSeries, type TerminalChoice } from '../engine';
 import { alignSnapshot, type ComputeOutcome } from '../plans/plan-compute';
 
 export interface StudyComputeInput {
