@@ -29,6 +29,16 @@ const sourceSoc: Record<string, string> = {
   request: 'your entry',
 };
 
+function windowLengthHours(startMs: number | null, endMs: number | null): number | null {
+  return startMs === null || endMs === null || endMs <= startMs ? null : (endMs - startMs) / 3_600_000;
+}
+
+function horizonHint(siteDefault: number | null, used: number | null): string {
+  if (siteDefault === null || used === null) return 'How far ahead the plan looks; at least the delivery window.';
+  const base = `Empty: the site's default, ${siteDefault} h.`;
+  return used > siteDefault ? `${base} This window is longer, so empty means ${formatNumber(used)} h, the window itself.` : base;
+}
+
 export function PlanForm({ initial }: { initial?: Partial<RunSource> }) {
   const navigate = useNavigate();
   const [source, setSource] = useState<RunSource>({ ...emptyRunSource, ...initial });
@@ -43,7 +53,11 @@ export function PlanForm({ initial }: { initial?: Partial<RunSource> }) {
   const timeZone = site?.timezone ?? 'UTC';
   const startMs = fromWallTimeInput(deliveryWindow.start, timeZone);
   const defaults = usePlanDefaults(source.batteryId || null, startMs === null ? null : new Date(startMs).toISOString());
-  const defaultHorizon = defaults.data?.defaultHorizonHours ?? site?.defaultHorizonHours ?? null;
+  const siteDefault = defaults.data?.defaultHorizonHours ?? site?.defaultHorizonHours ?? null;
+  // An empty horizon takes the site's default, stretched to cover the window when the window is longer
+  // (a study may recommend a horizon shorter than a day).
+  const windowHours = windowLengthHours(startMs, fromWallTimeInput(deliveryWindow.end, timeZone));
+  const defaultHorizon = siteDefault === null ? null : Math.max(siteDefault, windowHours ?? 0);
 
   const submit = (e: FormEvent) => {
     e.preventDefault();
@@ -93,7 +107,7 @@ export function PlanForm({ initial }: { initial?: Partial<RunSource> }) {
       </fieldset>
       <div className="grid gap-4 sm:grid-cols-3">
         <FormField id="horizonHours" label="Horizon" unit="h" error={errors.horizonHours}
-          hint={defaultHorizon !== null ? `Empty: the site's default, ${defaultHorizon} h.` : 'How far ahead the plan looks; at least the delivery window.'}>
+          hint={horizonHint(siteDefault, defaultHorizon)}>
           <input id="horizonHours" inputMode="decimal" className={inputClass} value={horizon} placeholder={defaultHorizon !== null ? String(defaultHorizon) : '48'}
             aria-invalid={!!errors.horizonHours} aria-describedby={describedBy('horizonHours', { error: errors.horizonHours })} onChange={(e) => setHorizon(e.target.value)} />
         </FormField>

@@ -11,10 +11,11 @@ export function useUpdateSite() {
     mutationFn: updateSite,
     onSuccess: (site) => {
       queryClient.setQueryData(['sites', 'detail', site.id], site);
-      // Battery warnings depend on the site's limits.
+      // Battery warnings depend on the site's limits; the plan form's proposed horizon on its default.
       return Promise.all([
         queryClient.invalidateQueries({ queryKey: ['sites', 'list'] }),
         queryClient.invalidateQueries({ queryKey: ['batteries'] }),
+        queryClient.invalidateQueries({ queryKey: ['plans', 'defaults'] }),
       ]);
     },
   });

@@ -9,6 +9,11 @@ export function useAdoptHorizon() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: adoptHorizon,
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: ['sites'] }),
+    // The plan form proposes the default through the plan defaults, cached per battery and window.
+    onSuccess: () =>
+      Promise.all([
+        queryClient.invalidateQueries({ queryKey: ['sites'] }),
+        queryClient.invalidateQueries({ queryKey: ['plans', 'defaults'] }),
+      ]),
   });
 }

@@ -13,8 +13,11 @@ export function RecommendationCard({ study }: { study: Study }) {
   const site = sites.data?.find((s) => s.id === study.siteId);
   if (!rec) return null;
   const hours = rec.horizonHours;
-  // The site's default is a whole number of hours (1–8784).
-  const adoptable = hours !== null && Number.isInteger(hours) && hours >= 1 && hours <= 8784;
+  // The site's default is a whole number of hours (1–8784): a fractional recommendation is rounded up,
+  // since a longer horizon only adds lookahead.
+  const adopted = hours === null ? null : Math.ceil(hours);
+  const adoptable = adopted !== null && adopted >= 1 && adopted <= 8784;
+  const rounded = adopted !== hours ? ` (${hours} h rounded up)` : '';
   const current = site?.defaultHorizonHours ?? null;
   return (
     <section aria-labelledby="recommendation-heading" className="space-y-2 rounded-lg border-l-4 border-seaglass-600 bg-seaglass-100 p-4">
@@ -27,14 +30,16 @@ export function RecommendationCard({ study }: { study: Study }) {
           <button
             type="button"
             className={buttonClass.primary}
-            disabled={adopt.isPending || current === hours}
-            onClick={() => adopt.mutate({ siteId: study.siteId, hours })}
+            disabled={adopt.isPending || current === adopted}
+            onClick={() => adopt.mutate({ siteId: study.siteId, hours: adopted })}
           >
-            {current === hours ? `${hours} h is the default at ${study.siteName}` : `Make ${hours} h the default for new plans at ${study.siteName}`}
+            {current === adopted
+              ? `${adopted} h is the default at ${study.siteName}`
+              : `Make ${adopted} h${rounded} the default for new plans at ${study.siteName}`}
           </button>
-          {current !== null && current !== hours && <span className="text-sm text-ink-700">Now: {current} h.</span>}
+          {current !== null && current !== adopted && <span className="text-sm text-ink-700">Now: {current} h.</span>}
           {adopt.isError && <span role="alert" className="text-sm text-brick-700">{adopt.error.message}</span>}
-          {adopt.isSuccess && <span role="status" className="text-sm text-seaglass-700">Saved: new plans at this site start with {hours} h.</span>}
+          {adopt.isSuccess && <span role="status" className="text-sm text-seaglass-700">Saved: new plans at this site start with {adopted} h.</span>}
         </div>
       )}
     </section>
