@@ -6,9 +6,11 @@ import { sites, type SiteRow } from './sites.schema';
 
 export type SiteValues = Omit<typeof sites.$inferInsert, 'id' | 'createdAt' | 'updatedAt'>;
 
+// Drizzle renders a column of the outer table unqualified, which inside the subquery would
+// name the inner table's id: qualify the outer table explicitly.
 const counts = {
-  batteryCount: sql<number>`(select count(*)::int from ${batteries} where ${batteries.siteId} = ${sites.id})`,
-  profileCount: sql<number>`(select count(*)::int from ${profiles} where ${profiles.siteId} = ${sites.id})`,
+  batteryCount: sql<number>`(select count(*)::int from ${batteries} where ${batteries.siteId} = "sites"."id")`,
+  profileCount: sql<number>`(select count(*)::int from ${profiles} where ${profiles.siteId} = "sites"."id")`,
 };
 
 export type SiteWithCounts = SiteRow & { batteryCount: number; profileCount: number };

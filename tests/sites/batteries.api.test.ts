@@ -124,3 +124,16 @@ describe('who may change batteries', () => {
     expect(await storedForSite(site.id)).toEqual(before);
   });
 });
+
+describe('battery counts on sites', () => {
+  it('counts the batteries of each site in the list and the detail', async () => {
+    const own = await createSite(planner, {});
+    await create({ name: 'Counted A', energyKwh: 2000 }, own.id);
+    await create({ name: 'Counted B', energyKwh: 2000 }, own.id);
+    const detail = await viewer.get(`/api/sites/${own.id}`);
+    expect(detail.body.batteryCount).toBe(2);
+    const list = await viewer.get('/api/sites');
+    const listed = (list.body as { id: string; batteryCount: number; profileCount: number }[]).find((s) => s.id === own.id);
+    expect(listed).toMatchObject({ batteryCount: 2, profileCount: 0 });
+  });
+});
