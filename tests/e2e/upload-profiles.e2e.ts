@@ -22,6 +22,9 @@ async function signIn(page: Page, email: string) {
 }
 
 async function chooseFile(page: Page, file: string, kind: string, unit: string) {
+  // The upload section starts folded once the site has profiles.
+  const upload = page.locator('details', { hasText: 'Upload a profile' });
+  if ((await upload.getAttribute('open')) === null) await upload.locator('summary').click();
   await page.getByLabel('Kind', { exact: true }).selectOption(kind);
   await page.getByLabel('Unit in the file').selectOption(unit);
   await page.getByLabel('CSV file').setInputFiles(path.join(samples, file));

@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { useState, type ReactNode } from 'react';
 import { Link, useParams } from 'react-router-dom';
 import { buttonClass } from '@/components/form-field';
 import { ErrorState, LoadingState } from '@/components/query-state';
@@ -12,6 +12,17 @@ import { BatteriesList } from '@/features/batteries/components/batteries-list';
 import { BatteryForm } from '@/features/batteries/components/battery-form';
 import { ProfileUpload } from '@/features/profiles/components/profile-upload';
 import { ProfilesList } from '@/features/profiles/components/profiles-list';
+
+/** Open when the site has no profile yet; decided once, so it does not fold after the first upload. */
+function UploadSection({ openAtFirst, children }: { openAtFirst: boolean; children: ReactNode }) {
+  const [open] = useState(openAtFirst);
+  return (
+    <details className="rounded bg-white p-4 shadow-sm" open={open}>
+      <summary className="cursor-pointer font-medium text-ink-800">Upload a profile</summary>
+      <div className="mt-3">{children}</div>
+    </details>
+  );
+}
 
 /** One site: its settings, its batteries, its profiles (upload and list). */
 export function SiteRoute() {
@@ -76,12 +87,9 @@ export function SiteRoute() {
       <section className="space-y-3" aria-labelledby="profiles-heading">
         <h2 id="profiles-heading" className="text-xl font-semibold">Profiles</h2>
         {canEdit && (
-          <details className="rounded bg-white p-4 shadow-sm" open={s.profileCount === 0}>
-            <summary className="cursor-pointer font-medium text-ink-800">Upload a profile</summary>
-            <div className="mt-3">
-              <ProfileUpload siteId={s.id} timezone={s.timezone} currency={s.currency} />
-            </div>
-          </details>
+          <UploadSection openAtFirst={s.profileCount === 0}>
+            <ProfileUpload siteId={s.id} timezone={s.timezone} currency={s.currency} />
+          </UploadSection>
         )}
         <ProfilesList siteId={s.id} timezone={s.timezone} currency={s.currency} />
       </section>
