@@ -111,6 +111,8 @@ describe('uploading a price CSV', () => {
     await stored.waitFor({ timeout: 60_000 });
     expect(await stored.innerText()).toContain(`${csv.rows.toLocaleString('en-US')} intervals`);
     expect(await countProfiles()).toBe(before + 1);
+    // The stored file leaves the form, so a second press cannot store it twice.
+    expect(await form.getByRole('button', { name: 'Upload profile' }).isDisabled()).toBe(true);
     await screenshot(page, 'upload-2-stored');
 
     // Open the stored profile: facts, chart and the numbers behind it.

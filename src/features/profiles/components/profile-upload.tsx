@@ -50,7 +50,17 @@ export function ProfileUpload({ siteId, timezone, currency }: ProfileUploadProps
   };
   const submit = (event: FormEvent) => {
     event.preventDefault();
-    if (file) upload.mutate({ siteId, file, kind, unit, name: name.trim(), intervalEnding, fillGaps });
+    if (!file) return;
+    // A stored file is cleared from the form, so a second press cannot store it twice.
+    upload.mutate(
+      { siteId, file, kind, unit, name: name.trim(), intervalEnding, fillGaps },
+      {
+        onSuccess: () => {
+          setFile(null);
+          setName('');
+        },
+      },
+    );
   };
   const serverError = upload.error instanceof ApiError ? upload.error : null;
   const hint = typeof serverError?.body.hint === 'string' ? serverError.body.hint : undefined;
