@@ -24,12 +24,13 @@ import { exportRouter } from './export/export.routes';
 import { plansRouter } from './plans/plans.routes';
 import { studiesRouter } from './studies/studies.routes';
 import { jobsRouter } from './jobs/jobs.routes';
+import { horizonPreviewRouter } from './horizon-preview/horizon-preview.routes';
 
 const clientDir = path.resolve(import.meta.dirname, '..', 'dist', 'client');
 
 /** Routers mounted under /api, in order. Each module adds its router here. */
 function apiRouters(): Router[] {
-  return [healthRouter, authRouter, usersRouter, auditRouter, mailRouter, sitesRouter, batteriesRouter, profilesRouter, signOffRouter, exportRouter, plansRouter, studiesRouter, jobsRouter];
+  return [healthRouter, authRouter, usersRouter, auditRouter, mailRouter, sitesRouter, batteriesRouter, profilesRouter, signOffRouter, exportRouter, plansRouter, horizonPreviewRouter, studiesRouter, jobsRouter];
 }
 
 export function createApp(config: AppConfig) {

@@ -64,6 +64,7 @@ export const accessTable = {
   'GET /api/plans/:id/export.csv': readers, // the export service restricts viewers to approved plans
   'POST /api/plans/:id/copy': editors, // a rejected plan becomes a new draft
   'GET /api/plans/:id/sign-off': readers, // who submitted, who signed off, the checksum, the history
+  'POST /api/plans/:id/horizon-preview': readers, // re-solves the plan with another horizon on the fast path; writes nothing
   'GET /api/sign-off/pending': approvers, // plans awaiting my sign-off (never my own submissions)
 
   // Horizon studies

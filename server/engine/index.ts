@@ -20,6 +20,7 @@ export { parseTerminal, terminalLabel, terminalRuleFor, type TerminalChoice } fr
 export { solveReferencePath, type ReferencePath, type PathRequest } from './reference/solve-reference-path';
 export { summarizePath, type PathSummary, type SeriesPoint } from './reference/path-summary';
 export { solvePlan, type Plan, type PlanRequest } from './plan/solve-plan';
+export { canSolveWithDp, type DpEligibility } from './dp';
 export type { PlanTurnpike } from './plan/plan-turnpike';
 export { settingWarnings } from './plan/plan-flags';
 export { arcFigures, commitWindowSteps, DEFAULT_BAND_FRACTION, type ArcFigures } from './turnpike/turnpike-figures';
