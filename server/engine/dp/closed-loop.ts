@@ -38,6 +38,13 @@ export interface DpWindowPlan {
   readonly chargeKw: Float64Array;
   readonly dischargeKw: Float64Array;
   readonly storedEnergyValue: Float64Array;
+  /**
+   * Steps (absolute) whose entries this window recomputed. Every other step of
+   * the window was in the previous window's plan of the same run, with the same
+   * entries, so figures over consecutive plans can be updated where they changed
+   * (first window: every step).
+   */
+  readonly recomputedSteps: Int32Array;
 }
 
 export interface DpClosedLoopResult {
@@ -123,6 +130,7 @@ function runWindows(ctx: DpContext, o: DpClosedLoopOptions): DpClosedLoopResult 
       o.onPlan({
         startStep: s, endStep: end, terminal: rule, socKwh: soc.subarray(0, end - s + 1),
         chargeKw: view.c, dischargeKw: view.d, storedEnergyValue: view.value,
+        recomputedSteps: solver.recomputed.subarray(0, solver.recomputedCount),
       });
     }
     realized.copyFrom(solver, s, applyTo, 0);

@@ -43,6 +43,9 @@ export class WindowSolver {
   private passFrom = Infinity;
   private passTo = -Infinity;
   private readonly fs = newForwardStepResult();
+  /** Steps whose plan entries the last forward pass recomputed (the rest it reused), in order. */
+  readonly recomputed: Int32Array;
+  recomputedCount = 0;
 
   constructor(private readonly ctx: DpContext, maxWindowSteps: number) {
     this.size = maxWindowSteps + 1;
@@ -53,6 +56,7 @@ export class WindowSolver {
     this.tOf = new Int32Array(this.size).fill(-1);
     this.vid = new Float64Array(this.size + 1);
     this.plan = new PlanRing(this.size);
+    this.recomputed = new Int32Array(this.size);
   }
 
   /** Index of step t in the plan ring. */
@@ -136,6 +140,7 @@ export class WindowSolver {
     const prevTo = this.passTo;
     this.passFrom = Infinity;
     this.passTo = -Infinity;
+    let recomputed = 0;
     for (let t = start; t < to; t++) {
       const rNext = r + 1 === size ? 0 : r + 1;
       const w = map[rNext] ?? 0;
@@ -160,12 +165,14 @@ export class WindowSolver {
       } else {
         if (!forwardStep(store, w, ctx.stages, t, a * e, ctx.tol, fs)) return false;
         plan.record(r, t, v, e, muLo, muHi, fs, net[t] ?? 0);
+        this.recomputed[recomputed++] = t;
       }
       e = y[r] ?? 0;
       muLo = outLo[r] ?? 0;
       muHi = outHi[r] ?? 0;
       r = r + 1 === size ? 0 : r + 1;
     }
+    this.recomputedCount = recomputed;
     this.passFrom = start;
     this.passTo = to;
     this.stats.forwardStepsReused += reused;

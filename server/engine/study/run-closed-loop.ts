@@ -20,6 +20,7 @@ import { checkDp, solveWithDp } from '../dispatch/dp-bridge';
 import type { SteadyCycle } from '../steady/solve-steady-cycle';
 import { terminalRuleFor, type TerminalChoice } from '../terminal/terminal-choice';
 import { arcFigures, DEFAULT_BAND_FRACTION } from '../turnpike/turnpike-figures';
+import { SlidingArcFigures } from '../turnpike/sliding-arc-figures';
 
 export interface ClosedLoopRequest {
   readonly from: number;
@@ -187,16 +188,16 @@ function runClosedLoopOnDp(
   inputs: AlignedInputs, req: ClosedLoopRequest, whole: DispatchProblem, usable: number, band: number, elapsed: () => number,
 ): ClosedLoopRun {
   let shareSum = 0, leavingSum = 0, leavingIntoCommitted = 0;
-  // Views into one copy instead of a slice per window (thousands of windows per run).
-  const reference = req.referenceSoc ? Float64Array.from(req.referenceSoc) : null;
+  // Consecutive plans differ in a few steps: update the figures there only (thousands of windows per run).
+  const figures = req.referenceSoc ? new SlidingArcFigures(req.referenceSoc, usable, band) : null;
   const run = dpLoopFor(inputs, req, whole).run({
     horizonSteps: req.horizonSteps,
     replanSteps: req.replanSteps,
     terminalForWindow: (_start, end) => terminalRuleFor(req.terminal, inputs, req.from + end, req.steady),
-    ...(reference
+    ...(figures
       ? {
           onPlan: (plan: DpWindowPlan) => {
-            const fig = arcFigures(plan.socKwh.subarray(1), reference.subarray(plan.startStep, plan.endStep), usable, band);
+            const fig = figures.update(plan.startStep, plan.endStep, plan.socKwh.subarray(1), plan.recomputedSteps);
             shareSum += fig.nearSteadyShare;
             leavingSum += fig.leavingArcSteps;
             const steps = plan.endStep - plan.startStep;
