@@ -5,6 +5,8 @@
 // min ≥ max holds no energy; efficiencies must lie in (0, 1].
 import { describe, expect, it } from 'vitest';
 import { solveDispatch } from '../../server/engine/dispatch/solve-dispatch';
+import { alignInputs } from '../../server/engine/inputs/align-inputs';
+import { solveSteadyCycle } from '../../server/engine/steady/solve-steady-cycle';
 import { battery, problem } from './support/problem-builder';
 
 const prices = [40, 60, 20, 80, 30, 70];
@@ -15,7 +17,7 @@ describe('bad inputs', () => {
     const loadKw = [100, 200, 300, 300, 1600, 1700];
     const s = solveDispatch(problem(prices, { site, loadKw }));
     expect(s.status).toBe('error');
-    expect(s.message).toContain('step 4 (2026-01-01T04:00:00.000Z)');
+    expect(s.message).toContain('step 4 (2026-01-01 04:00 +00:00)');
     expect(s.message).toContain('import limit (500 kW) plus the discharge power (1000 kW)');
   });
 
@@ -41,7 +43,7 @@ describe('bad inputs', () => {
     const withGap = [40, 60, Number.NaN, 80, Number.NaN, 70];
     const s = solveDispatch(problem(withGap));
     expect(s.status).toBe('error');
-    expect(s.message).toContain('import price profile has no valid number at step 2 (2026-01-01T02:00:00.000Z)');
+    expect(s.message).toContain('import price profile has no valid number at step 2 (2026-01-01 02:00 +00:00)');
   });
 
   it('refuses an export price above the import price when the grid has no limits (unbounded earnings)', () => {
@@ -56,6 +58,31 @@ describe('bad inputs', () => {
     const limited = { ...site, importLimitKw: 1000 };
     const s = solveDispatch(problem([50, 50, 50], { site: limited, loadKw: [1300, 1300, 1300], battery: battery({ socInitialPct: 50 }) }), { method: 'lp' });
     expect(s.status).toBe('infeasible');
-    expect(s.message).toContain('step 0 (2026-01-01T00:00:00.000Z)');
+    expect(s.message).toContain('step 0 (2026-01-01 00:00 +00:00)');
+  });
+
+  it('names the interval in the site\'s local time with its offset', () => {
+    // [S] IANA tz database: Europe/Berlin keeps CET (UTC+01:00) in January, so 2026-01-01T04:00Z is 05:00 local.
+    const berlin = { ...site, timezone: 'Europe/Berlin' };
+    const s = solveDispatch(problem(prices, { site: berlin, loadKw: [100, 200, 300, 300, 1600, 1700] }));
+    expect(s.message).toContain('step 4 (2026-01-01 05:00 +01:00)');
+  });
+
+  it('names a clock slot of the representative day, not a date, when the steady cycle cannot be served', () => {
+    // [D] Two days of hourly load, 1600 kW from 17:00 local, against a 500 kW import limit and 1000 kW of discharge:
+    // the 17:00 slot of the representative day averages 1600 kW, more than 1500 kW can serve.
+    const start = Date.UTC(2026, 0, 1);
+    const aligned = alignInputs({
+      battery: battery(),
+      site,
+      prices: { startMs: start, stepMinutes: 60, values: Array.from({ length: 48 }, (_, t) => 40 + (t % 24)) },
+      load: { startMs: start, stepMinutes: 60, values: Array.from({ length: 48 }, (_, t) => (t % 24 >= 17 ? 1600 : 100)) },
+    });
+    if (!aligned.ok) throw new Error(aligned.issue.message);
+    const steady = solveSteadyCycle(aligned.inputs);
+    if (!steady.ok) throw new Error(steady.issue.message);
+    expect(steady.cycle.status).toBe('error');
+    expect(steady.cycle.message).toContain('the 17:00 slot of the representative day');
+    expect(steady.cycle.message).not.toContain('1970');
   });
 });

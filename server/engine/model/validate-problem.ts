@@ -1,9 +1,10 @@
 /**
  * Input checks of a DispatchProblem that would otherwise end as a silent wrong
  * answer or an unexplained "infeasible". The message names the first offending
- * parameter or interval (with its UTC time) and says how to fix it.
+ * parameter or interval (with its local time) and says how to fix it.
  */
 import type { DispatchProblem } from '../types';
+import { clockLabel, localTimeLabel } from '../time/zone-offsets';
 import { energyBounds } from './build-dispatch-model';
 import { validateBattery, validateSite, type InputIssue } from './validate-battery';
 
@@ -18,7 +19,10 @@ const SERIES = [
 
 export function stepLabel(problem: DispatchProblem, t: number): string {
   const ms = problem.timesMs[t];
-  return ms === undefined || !Number.isFinite(ms) ? `step ${t}` : `step ${t} (${new Date(ms).toISOString()})`;
+  if (ms === undefined || !Number.isFinite(ms)) return `step ${t}`;
+  // The steady cycle's steps are clock slots of a representative day (minutes after midnight), not instants.
+  if (problem.freeInitialEnergy) return `the ${clockLabel(Math.round(ms / 60_000))} slot of the representative day`;
+  return `step ${t} (${localTimeLabel(problem.site.timezone, ms)})`;
 }
 
 function validateSeries(p: DispatchProblem): InputIssue | null {

@@ -17,6 +17,7 @@ import { DEFAULT_BAND_FRACTION } from '../turnpike/turnpike-figures';
 import { planFlags, settingWarnings } from './plan-flags';
 import { planTurnpike, type PlanTurnpike } from './plan-turnpike';
 import { planInsights, type DpPlanInsights } from '../dp';
+import { localTimeLabel } from '../time/zone-offsets';
 
 export interface PlanRequest {
   readonly startMs: number;
@@ -100,7 +101,7 @@ export function solvePlan(inputs: AlignedInputs, request: PlanRequest): PlanResu
       windowSteps: windowEnd - from,
       requestedHorizonHours: request.horizonHours,
       terminalKind: request.terminal.kind,
-      timeOfStep: (t) => new Date(inputs.timesMs[0]! + (from + t) * inputs.stepMinutes * 60_000).toISOString(),
+      timeOfStep: (t) => localTimeLabel(inputs.site.timezone, inputs.timesMs[0]! + (from + t) * inputs.stepMinutes * 60_000),
       longerHours: longer ? lookedLongerHours : null,
       ...(longer ? {} : { longerMissing: 'the price data end at the horizon, so there is no longer plan to compare with' }),
     }),

@@ -91,3 +91,13 @@ export function clockLabel(minuteOfDay: number): string {
   const m = minuteOfDay % 60;
   return `${String(h).padStart(2, '0')}:${String(m).padStart(2, '0')}`;
 }
+
+/** An instant as the site's wall time with its offset, e.g. "2026-05-07 17:00 +02:00" (the form the app shows). */
+export function localTimeLabel(zone: string, ms: number): string {
+  const offset = tzOffset(zone, new Date(ms));
+  if (!Number.isFinite(offset)) return new Date(ms).toISOString();
+  const local = new Date(ms + offset * MINUTE_MS).toISOString();
+  const abs = Math.abs(offset);
+  const pad = (v: number) => String(v).padStart(2, '0');
+  return `${local.slice(0, 10)} ${local.slice(11, 16)} ${offset < 0 ? '-' : '+'}${pad(Math.floor(abs / 60))}:${pad(abs % 60)}`;
+}
