@@ -28,6 +28,8 @@ export default defineConfig({
       },
     },
   },
+  // The upload preview parses in a module worker.
+  worker: { format: 'es' },
   server: {
     port: 5173,
     proxy: { '/api': `http://127.0.0.1:${apiPort}` },

@@ -103,6 +103,8 @@ describe('uploading a price CSV', () => {
     expect(fact('Min / max')).toContain(String(csv.min));
     expect(await preview.locator('pre').innerText()).toContain(csv.first);
     await preview.getByRole('figure').locator('svg path').first().waitFor();
+    // The file was parsed off the page's thread, so a large file cannot freeze the form.
+    expect(page.workers().map((w) => w.url())).toEqual([expect.stringMatching(/parse-profile\.worker/)]);
     await form.getByLabel('Name (optional)').fill(name);
     await screenshot(page, 'upload-1-preview');
 

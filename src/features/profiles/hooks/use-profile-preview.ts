@@ -1,10 +1,11 @@
 /**
  * Parses the chosen file in the browser with the same reader the server uses,
  * so the planner sees what will be stored before sending it. The server parses
- * again and decides.
+ * again and decides. The parsing runs in a worker, so the form stays live.
  */
-import { useEffect, useState } from 'react';
-import { decodeProfileBytes, parseProfileCsv, type ParseProfileResult, type ProfileKind } from '@shared/profile-csv';
+import { useEffect, useRef, useState } from 'react';
+import type { ParseProfileResult, ProfileKind } from '@shared/profile-csv';
+import type { ParseRequest, ParseResponse } from '../workers/parse-profile-messages';
 
 export interface PreviewOptions {
   kind: ProfileKind;
@@ -20,40 +21,35 @@ export type PreviewState =
   | { status: 'done'; firstLines: string[]; result: ParseProfileResult };
 
 export function useProfilePreview(file: File | null, options: PreviewOptions, timezone: string): PreviewState {
-  const [text, setText] = useState<{ file: File; text: string } | { file: File; error: string } | null>(null);
   const [state, setState] = useState<PreviewState>({ status: 'idle' });
+  const worker = useRef<Worker | null>(null);
+  const lastId = useRef(0);
 
   useEffect(() => {
-    let cancelled = false;
-    if (!file) return;
-    file
-      .arrayBuffer()
-      .then((buffer) => !cancelled && setText({ file, text: decodeProfileBytes(new Uint8Array(buffer)) }))
-      .catch((error: unknown) => !cancelled && setText({ file, error: error instanceof Error ? error.message : String(error) }));
+    const w = new Worker(new URL('../workers/parse-profile.worker.ts', import.meta.url), { type: 'module' });
+    w.addEventListener('message', (event: MessageEvent<ParseResponse>) => {
+      const { id, ...rest } = event.data;
+      if (id === lastId.current) setState(rest);
+    });
+    w.addEventListener('error', (event) => setState({ status: 'failed-to-read', message: `The preview could not run: ${event.message}` }));
+    worker.current = w;
     return () => {
-      cancelled = true;
+      w.terminate();
+      worker.current = null;
     };
-  }, [file]);
+  }, []);
 
   const { kind, unit, intervalEnding, fillGaps } = options;
   useEffect(() => {
-    if (!file || !text || text.file !== file) {
-      setState(file ? { status: 'working' } : { status: 'idle' });
-      return;
-    }
-    if ('error' in text) {
-      setState({ status: 'failed-to-read', message: text.error });
+    const id = ++lastId.current;
+    if (!file || !worker.current) {
+      setState({ status: 'idle' });
       return;
     }
     setState({ status: 'working' });
-    // Yield first so "Reading the file…" paints before a large file blocks the thread for a moment.
-    const timer = setTimeout(() => {
-      const result = parseProfileCsv(text.text, { kind, unit, timezone, intervalEnding, fillGaps });
-      const firstLines = text.text.replace(/^\uFEFF/, '').split(/\r\n|\n|\r/, 6);
-      setState({ status: 'done', firstLines, result });
-    }, 0);
-    return () => clearTimeout(timer);
-  }, [file, text, kind, unit, intervalEnding, fillGaps, timezone]);
+    const request: ParseRequest = { id, file, options: { kind, unit, timezone, intervalEnding, fillGaps } };
+    worker.current.postMessage(request);
+  }, [file, kind, unit, intervalEnding, fillGaps, timezone]);
 
   return state;
 }
