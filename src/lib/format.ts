@@ -40,10 +40,13 @@ export const formatMoney = (n: number | null | undefined, currency: string) =>
 export const formatPercent = (share: number | null | undefined, digits = 0) =>
   share === null || share === undefined || !Number.isFinite(share) ? '–' : `${(share * 100).toFixed(digits)} %`;
 
-/** "45 s", "3 min", "1 h 20 min". */
+/** "350 ms", "4.2 s", "45 s", "3 min", "1 h 20 min". */
 export function formatDuration(seconds: number | null | undefined): string {
   if (seconds === null || seconds === undefined || !Number.isFinite(seconds)) return '–';
-  if (seconds < 60) return `${Math.max(1, Math.round(seconds))} s`;
+  // The exact path solves in milliseconds: "1 s" would hide a thousandfold difference.
+  if (seconds < 1) return `${Math.max(1, Math.round(seconds * 1000))} ms`;
+  if (seconds < 10) return `${seconds.toFixed(1)} s`;
+  if (seconds < 60) return `${Math.round(seconds)} s`;
   const minutes = Math.round(seconds / 60);
   if (minutes < 60) return `${minutes} min`;
   return `${Math.floor(minutes / 60)} h ${minutes % 60} min`;
