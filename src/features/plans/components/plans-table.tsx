@@ -1,17 +1,20 @@
 import { Link } from 'react-router-dom';
 import type { Plan } from '@shared/schemas/plan';
-import { formatMoney, formatPercent } from '@/lib/format';
-
-const day = (iso: string) => iso.slice(0, 16).replace('T', ' ');
+import { useRunSourceLists } from '@/components/run-source-fields';
+import { formatLocalTime, formatMoney, formatPercent } from '@/lib/format';
 
 /** One row per plan: window, horizon, status, the job and the headline figures. */
 export function PlansTable({ plans }: { plans: Plan[] }) {
+  // Windows in each site's own local time: planners think in the site's clock, and sites may differ.
+  const { sites } = useRunSourceLists('');
+  const zoneOf = (siteId: string) => sites.data?.find((s) => s.id === siteId)?.timezone ?? 'UTC';
+  const local = (iso: string, siteId: string) => formatLocalTime(Date.parse(iso), zoneOf(siteId));
   return (
     <div className="overflow-x-auto">
       <table className="w-full rounded bg-white text-left text-sm shadow-sm">
         <thead className="bg-ink-100 text-ink-700">
           <tr>
-            {['Battery', 'Delivery (UTC)', 'Horizon', 'Rule', 'Status', 'Computation', 'Cost', 'Near-steady', 'Flags'].map((h) => (
+            {['Battery', 'Delivery (site time)', 'Horizon', 'Rule', 'Status', 'Computation', 'Cost', 'Near-steady', 'Flags'].map((h) => (
               <th key={h} scope="col" className="whitespace-nowrap px-2 py-1.5">{h}</th>
             ))}
           </tr>
@@ -23,7 +26,7 @@ export function PlansTable({ plans }: { plans: Plan[] }) {
                 <Link to={`/plans/${p.id}`} className="font-semibold text-seaglass-700 underline">{p.batteryName ?? 'battery'}</Link>
                 <span className="block text-xs text-ink-500">{p.siteName}</span>
               </td>
-              <td className="whitespace-nowrap px-2 py-1">{day(p.deliveryStart)} – {day(p.deliveryEnd)}</td>
+              <td className="whitespace-nowrap px-2 py-1">{local(p.deliveryStart, p.siteId)} – {local(p.deliveryEnd, p.siteId)}</td>
               <td className="px-2 py-1">{p.horizonHours} h</td>
               <td className="px-2 py-1">{p.terminalRule}</td>
               <td className="px-2 py-1">{p.status}</td>
