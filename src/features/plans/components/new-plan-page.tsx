@@ -1,8 +1,9 @@
 import { useSearchParams } from 'react-router-dom';
 import { useCan } from '@/lib/authorization';
 import { PlanForm } from './plan-form';
+import { prefillFromSearch } from './new-plan-prefill';
 
-/** `/plans/new?siteId=&batteryId=`: the plan form, preset from the page that linked here. */
+/** `/plans/new?siteId=&batteryId=&…` (new-plan-prefill.ts): the plan form, preset from the page that linked here. */
 export function NewPlanPage() {
   const [params] = useSearchParams();
   const canEdit = useCan('data.edit');
@@ -14,7 +15,7 @@ export function NewPlanPage() {
         The plan is computed in the background; its page shows the progress and then the schedule, how long it stays near the steady cycle,
         and what is safe to commit.
       </p>
-      <PlanForm initial={{ siteId: params.get('siteId') ?? '', batteryId: params.get('batteryId') ?? '' }} />
+      <PlanForm initial={prefillFromSearch(params)} />
     </section>
   );
 }

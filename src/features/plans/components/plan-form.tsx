@@ -7,12 +7,13 @@ import { useState, type FormEvent } from 'react';
 import { useNavigate } from 'react-router-dom';
 import { planCreateSchema } from '@shared/schemas/plan';
 import { FormField, buttonClass, describedBy, inputClass } from '@/components/form-field';
-import { RunSourceFields, emptyRunSource, useRunSourceLists, type RunSource } from '@/components/run-source-fields';
+import { RunSourceFields, useRunSourceLists, type RunSource } from '@/components/run-source-fields';
 import { fieldErrors, parseNumberInput } from '@/lib/form-values';
 import { formatNumber, fromWallTimeInput, toWallTimeInput } from '@/lib/format';
 import { useCreatePlan } from '../api/create-plan';
 import { usePlanDefaults } from '../api/get-plan-defaults';
 import { TerminalRuleField, terminalRuleText, type TerminalKind } from './terminal-rule-field';
+import { prefilledTerminal, prefilledWindow, runSourceOf, type PlanPrefill } from './new-plan-prefill';
 
 const DAY_MS = 86_400_000;
 
@@ -39,18 +40,20 @@ function horizonHint(siteDefault: number | null, used: number | null): string {
   return used > siteDefault ? `${base} This window is longer, so empty means ${formatNumber(used)} h, the window itself.` : base;
 }
 
-export function PlanForm({ initial }: { initial?: Partial<RunSource> }) {
+export function PlanForm({ initial }: { initial?: PlanPrefill }) {
   const navigate = useNavigate();
-  const [source, setSource] = useState<RunSource>({ ...emptyRunSource, ...initial });
-  const [deliveryWindow, setWindow] = useState({ start: '', end: '' });
-  const [horizon, setHorizon] = useState('');
-  const [terminal, setTerminal] = useState<{ kind: TerminalKind; targetPct: string }>({ kind: 'steady-value', targetPct: '50' });
-  const [soc, setSoc] = useState('');
+  const [source, setSource] = useState<RunSource>(() => runSourceOf(initial));
+  const [windowEdit, setWindow] = useState<{ start: string; end: string } | null>(null);
+  const [horizon, setHorizon] = useState(initial?.horizonHours ?? '');
+  const [terminal, setTerminal] = useState<{ kind: TerminalKind; targetPct: string }>(() => prefilledTerminal(initial?.terminalRule));
+  const [soc, setSoc] = useState(initial?.initialSocPct ?? '');
   const [errors, setErrors] = useState<Record<string, string>>({});
   const create = useCreatePlan();
   const { sites } = useRunSourceLists(source.siteId);
   const site = sites.data?.find((s) => s.id === source.siteId);
   const timeZone = site?.timezone ?? 'UTC';
+  // A preset window (instants in the link) reads as wall times once the site's zone is known, until edited.
+  const deliveryWindow = windowEdit ?? prefilledWindow(initial, timeZone);
   const startMs = fromWallTimeInput(deliveryWindow.start, timeZone);
   const defaults = usePlanDefaults(source.batteryId || null, startMs === null ? null : new Date(startMs).toISOString());
   const siteDefault = defaults.data?.defaultHorizonHours ?? site?.defaultHorizonHours ?? null;

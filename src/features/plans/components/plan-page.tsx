@@ -18,6 +18,8 @@ import { TurnpikePanel } from './turnpike-panel';
 import { ScheduleTable } from './schedule-table';
 import { LazyPlanCharts } from './charts/lazy-plan-charts';
 import { compareUrl } from './compare-url';
+import { FactList } from './fact-list';
+import { HorizonPreviewSection } from './horizon-preview/horizon-preview-section';
 
 const socSource: Record<string, string> = {
   'last-approved-plan': 'end SoC of the last approved plan',
@@ -35,16 +37,7 @@ function PlanFacts({ plan }: { plan: Plan }) {
     ['Method', plan.method === 'dp' ? 'exact dynamic program (fast path)' : plan.method === 'lp' ? 'linear program' : 'not computed yet'],
     ['Status', plan.status],
   ];
-  return (
-    <dl className="grid gap-x-6 gap-y-1 text-sm sm:grid-cols-[auto_1fr]">
-      {facts.map(([term, text]) => (
-        <div key={term} className="contents">
-          <dt className="font-medium text-ink-700">{term}</dt>
-          <dd className="text-ink-900">{text}</dd>
-        </div>
-      ))}
-    </dl>
-  );
+  return <FactList rows={facts} />;
 }
 
 export function PlanPage({ signOff }: { signOff?: (planId: string) => ReactNode }) {
@@ -83,6 +76,7 @@ export function PlanPage({ signOff }: { signOff?: (planId: string) => ReactNode 
           <PlanSummaryCard results={plan.results} currency={currency} />
           <TurnpikePanel results={plan.results} />
           <LazyPlanCharts results={plan.results} timeZone={tz} currency={currency} energyKwh={energyKwh} usableKwh={usableKwh} />
+          {inputs && <HorizonPreviewSection plan={plan} inputs={inputs} results={plan.results} />}
           <section aria-labelledby="schedule-heading" className="space-y-2">
             <h2 id="schedule-heading" className="text-lg font-semibold text-ink-900">Schedule</h2>
             <ScheduleTable results={plan.results} timeZone={tz} currency={currency} energyKwh={energyKwh} />

@@ -5,6 +5,7 @@
  */
 import type { PlanResults } from '@shared/schemas/plan';
 import { formatPercent, formatSteps } from '@/lib/format';
+import { FactList } from './fact-list';
 
 export function TurnpikePanel({ results }: { results: PlanResults }) {
   const tp = results.turnpike;
@@ -23,14 +24,7 @@ export function TurnpikePanel({ results }: { results: PlanResults }) {
         How long the plan can be trusted
       </h2>
       <p className="text-ink-800">{tp.summary}</p>
-      <dl className="grid gap-x-6 gap-y-1 text-sm sm:grid-cols-[auto_1fr]">
-        {rows.map(([term, text]) => (
-          <div key={term} className="contents">
-            <dt className="font-medium text-ink-700">{term}</dt>
-            <dd className="text-ink-900">{text}</dd>
-          </div>
-        ))}
-      </dl>
+      <FactList rows={rows} />
       {tp.flags.length > 0 && (
         <ul aria-label="Flags" className="space-y-2">
           {tp.flags.map((flag) => (
