@@ -2,8 +2,9 @@
  * Journey 2 (issue 8): the planner makes a plan in the form, then from the comparison page
  * plans for the same delivery window with three horizons and both terminal rules (`free`,
  * `steady-value`), reads the comparison, finds the flag on the short-horizon `free` plan,
- * runs a horizon study (watching its progress bar) and adopts its recommendation as the
- * site's default horizon, which the plan form then proposes.
+ * tries another horizon with the plan page's slider (re-planned on the fast path, then the plan
+ * form preset with it), runs a horizon study (watching its progress bar) and adopts its
+ * recommendation as the site's default horizon, which the plan form then proposes.
  */
 import { describe, expect, it } from 'vitest';
 import type { Locator, Page } from 'playwright-core';
@@ -141,6 +142,24 @@ describe('comparing plans by horizon', () => {
         await flags.getByText(/The leaving arc reaches into the delivery window/).waitFor({ timeout: 60_000 });
         expect(await flags.innerText()).toMatch(/use the steady-value terminal rule/);
         await screenshot(page, 'compare-3-short-plan-flag');
+
+        // Try another horizon on the same page: one step right with the keyboard re-plans on the fast path at once,
+        // and the plan form opens preset with that horizon.
+        const tryHorizon = page.getByRole('region', { name: 'Try another horizon' });
+        const slider = tryHorizon.getByRole('slider', { name: 'Horizon' });
+        await tryHorizon.getByRole('status').filter({ hasText: /Re-planned with 24 h in/ }).waitFor({ timeout: 30_000 });
+        await slider.focus();
+        await page.keyboard.press('ArrowRight');
+        expect(await slider.inputValue()).toBe('25');
+        await tryHorizon.getByRole('status').filter({ hasText: /Re-planned with 25 h in/ }).waitFor({ timeout: 30_000 });
+        expect(await tryHorizon.getByLabel('Horizon in hours').inputValue()).toBe('25');
+        await tryHorizon.getByRole('figure', { name: 'SoC of the plan and of the preview' }).locator('svg path').first().waitFor({ timeout: 30_000 });
+        await screenshot(page, 'compare-3b-horizon-preview');
+        await tryHorizon.getByRole('link', { name: 'Make a plan with 25 h' }).click();
+        await page.getByRole('heading', { name: 'New plan' }).waitFor();
+        await expect.poll(() => page.getByLabel('From').inputValue(), { timeout: 30_000 }).toBe(day.from);
+        expect(await page.getByLabel('Horizon', { exact: true }).inputValue()).toBe('25');
+        expect(await page.getByLabel('Terminal rule').inputValue()).toBe('free');
 
         // A horizon study over the whole price year (empty period), watched while it runs.
         await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Studies' }).click();
