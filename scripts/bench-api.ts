@@ -4,13 +4,16 @@
  *      in the same process's default worker (the web server runs one by default),
  *      against the same requests with nothing running;
  *   2. a month of 15-minute data studied over 6 horizons with the default worker:
- *      seconds from POST /api/studies to the stored result.
+ *      seconds from POST /api/studies to the stored result;
+ *   3. the horizon preview of a one-day plan (a year of hourly prices behind it) at
+ *      H = 24 h and H = 168 h: p50/p95 per request (scripts/lib/bench-preview.ts).
  * Each study runs twice: for a battery the exact dynamic program takes (no daily
  * cycle cap: the fast path) and for the lithium-ion defaults (a cap of one cycle
  * per day couples each day's steps: the LP path).
  * Uses its own database (slackwater_bench, recreated), the real app on a free
  * port, real HTTP with a signed-in planner, invented prices.
- * Run: npx tsx scripts/bench-api.ts   (BENCH_SKIP_LP_YEAR=1 skips the slow LP-path year study)
+ * Run: npx tsx scripts/bench-api.ts   (BENCH_SKIP_LP_YEAR=1 skips the slow LP-path year study,
+ *   BENCH_PREVIEW_ONLY=1 measures only the horizon preview)
  */
 import { randomUUID } from 'node:crypto';
 import { loadavg, cpus } from 'node:os';
@@ -26,6 +29,7 @@ import { hashPassword } from '../server/auth/password-hash';
 import { startJobWorker } from '../server/jobs/job-worker';
 import { stopBoss } from '../server/jobs/boss';
 import { logger } from '../server/logger';
+import { measurePreview } from './lib/bench-preview';
 
 const HOUR_MS = 3_600_000;
 const START = Date.parse('2026-01-01T00:00:00Z');
@@ -162,6 +166,22 @@ async function main() {
   planPath = `/api/plans/${plan.plan.id}`;
   while ((await client.ok('GET', planPath)).job.state !== 'completed') await new Promise((r) => setTimeout(r, 200));
 
+  // The preview re-plans a one-day plan of the fast-path battery with other horizons, in the web process.
+  const dpPlan = await client.ok('POST', '/api/plans', {
+    batteryId: dpBattery.id, priceProfileId: year, deliveryStart: new Date(START + 24 * HOUR_MS).toISOString(),
+    deliveryEnd: new Date(START + 48 * HOUR_MS).toISOString(), horizonHours: 24, terminalRule: 'steady-value',
+  });
+  while ((await client.ok('GET', `/api/plans/${dpPlan.plan.id}`)).job.state !== 'completed') await new Promise((r) => setTimeout(r, 200));
+  const horizonPreview = await measurePreview(client, dpPlan.plan.id, [24, 168]);
+  if (process.env.BENCH_PREVIEW_ONLY === '1') {
+    console.log(JSON.stringify({ machine: machineInfo(), horizonPreview }, null, 2));
+    await worker.stop();
+    await stopBoss(2000);
+    server.close();
+    await closeDb();
+    return;
+  }
+
   // Let the worker's solve threads finish loading the engine before measuring "idle".
   await new Promise((r) => setTimeout(r, 5000));
   const idle = percentiles(await hammer(client, planPath, () => true, 400));
@@ -181,9 +201,10 @@ async function main() {
   console.log(
     JSON.stringify(
       {
-        machine: { cores: cpus().length, loadAverage1m: Math.round(loadavg()[0]! * 10) / 10, node: process.version },
+        machine: machineInfo(),
         study: { horizons, terminalRules, replanHours: 1 },
         getPlanLatencyIdle: idle,
+        horizonPreview,
         ...results,
       },
       null,
@@ -197,6 +218,7 @@ async function main() {
 }
 
 const round = (v: number) => Math.round(v * 100) / 100;
+const machineInfo = () => ({ cores: cpus().length, loadAverage1m: Math.round(loadavg()[0]! * 10) / 10, node: process.version });
 
 main().then(
   () => process.exit(0),
