@@ -5,6 +5,7 @@
  * and the decision horizon. Models the fast path cannot take say why instead.
  */
 import { Suspense, lazy, useState } from 'react';
+import { Link } from 'react-router-dom';
 import { horizonPreviewLimits } from '@shared/schemas/horizon-preview';
 import type { Plan, PlanInputs, PlanResults } from '@shared/schemas/plan';
 import { ApiError } from '@/lib/api-client';
@@ -46,7 +47,14 @@ export function HorizonPreviewSection({ plan, inputs, results }: { plan: Plan; i
     <section aria-labelledby="try-horizon-heading" className="space-y-4 rounded-lg border border-ink-100 bg-white p-5 shadow-sm">
       <h2 id="try-horizon-heading" className="text-lg font-semibold text-ink-900">Try another horizon</h2>
       {unavailable ? (
-        <p role="note" className="rounded bg-amber-100 p-3 text-sm text-ink-900">{unavailable.message}</p>
+        <div className="space-y-2">
+          <p role="note" className="rounded bg-amber-100 p-3 text-sm text-ink-900">{unavailable.message}</p>
+          {canEdit && (
+            <Link to={newPlanUrl(plan, plan.horizonHours)} className="inline-block text-sm font-semibold text-seaglass-700 underline">
+              Open the plan form with this plan’s inputs
+            </Link>
+          )}
+        </div>
       ) : (
         <>
           <p className="text-sm text-ink-700">
