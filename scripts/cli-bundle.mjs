@@ -5,8 +5,9 @@
 //
 // A manifest lists every source file the bundle was built from with its size,
 // mtime and SHA-256, so a launcher can tell in a few milliseconds whether the
-// bundle is still current. Packages stay external: they resolve from
-// node_modules at run time (the solvers load their .wasm files next to themselves).
+// bundle is still current. The small pure-JavaScript packages are bundled too
+// (resolving them at start-up cost more than parsing them); the LP solvers stay
+// external because they load their .wasm files from next to themselves.
 //
 // `node scripts/cli-bundle.mjs` builds it; `import { ensureCliBundle }` builds it
 // only when missing or out of date. Plain JavaScript: it runs without tsx.
@@ -23,9 +24,10 @@ const ENTRIES = {
   // worker-pool.ts loads `./study-worker` with its own file extension, next to itself.
   'study-worker': 'server/engine/study/study-worker.ts',
 };
+const EXTERNAL = ['highs', 'glpk.js', 'glpk.js/*'];
 // Files that shape the output without being bundled inputs.
 const SETTINGS = ['tsconfig.json', 'scripts/cli-bundle.mjs'];
-const FORMAT = 1;
+const FORMAT = 2;
 
 const sha256 = (file) => createHash('sha256').update(readFileSync(file)).digest('hex');
 
@@ -77,12 +79,15 @@ export async function buildCliBundle(root) {
       platform: 'node',
       format: 'esm',
       target: 'node20',
-      packages: 'external',
+      external: EXTERNAL,
       tsconfig: 'tsconfig.json',
       sourcemap: 'linked',
       metafile: true,
       logLevel: 'warning',
-      banner: { js: '// Built by scripts/cli-bundle.mjs from server/engine; do not edit.' },
+      // Bundled CommonJS packages may call require() for Node built-ins.
+      banner: {
+        js: "// Built by scripts/cli-bundle.mjs from server/engine; do not edit.\nimport { createRequire as __createRequire } from 'node:module';\nconst require = __createRequire(import.meta.url);",
+      },
     });
     const inputs = {};
     for (const rel of [...Object.keys(result.metafile.inputs), ...SETTINGS].sort()) inputs[rel] = describe(root, rel);
