@@ -35,6 +35,8 @@ export interface DpWindowPlan {
   readonly endStep: number;
   readonly terminal: TerminalRule;
   readonly socKwh: Float64Array;
+  /** SoC at the end of each step: socKwh without its first entry. */
+  readonly endSocKwh: Float64Array;
   readonly chargeKw: Float64Array;
   readonly dischargeKw: Float64Array;
   readonly storedEnergyValue: Float64Array;
@@ -123,16 +125,7 @@ function runWindows(ctx: DpContext, o: DpClosedLoopOptions): DpClosedLoopResult 
     if (failure !== null) {
       return failed(emptyDpSolution('infeasible', `the window starting at step ${s} has no feasible plan: ${failure}`), windows, solver.stats);
     }
-    if (soc && o.onPlan) {
-      const view = solver.planViews(s, end);
-      soc[0] = e;
-      soc.set(view.y, 1);
-      o.onPlan({
-        startStep: s, endStep: end, terminal: rule, socKwh: soc.subarray(0, end - s + 1),
-        chargeKw: view.c, dischargeKw: view.d, storedEnergyValue: view.value,
-        recomputedSteps: solver.recomputed.subarray(0, solver.recomputedCount),
-      });
-    }
+    if (soc && o.onPlan) o.onPlan(new RingPlanView(solver, s, end, rule, e, soc));
     realized.copyFrom(solver, s, applyTo, 0);
     e = realized.y[applyTo - 1] ?? e;
   }
@@ -142,4 +135,60 @@ function runWindows(ctx: DpContext, o: DpClosedLoopOptions): DpClosedLoopResult 
     windows,
     stats: solver.stats,
   };
+}
+
+/**
+ * A window's plan as views of the solver's rings, each made on first use: a
+ * run hands out thousands of plans and most readers look at one or two series.
+ */
+class RingPlanView implements DpWindowPlan {
+  private soc?: Float64Array;
+  private endSoc?: Float64Array;
+  private charge?: Float64Array;
+  private discharge?: Float64Array;
+  private value?: Float64Array;
+  private recomputed?: Int32Array;
+
+  constructor(
+    private readonly solver: WindowSolver,
+    readonly startStep: number,
+    readonly endStep: number,
+    readonly terminal: TerminalRule,
+    private readonly e0: number,
+    private readonly socBuffer: Float64Array,
+  ) {}
+
+  private ring(series: Float64Array): Float64Array {
+    const r = this.solver.ringIndex(this.startStep);
+    return series.subarray(r, r + this.endStep - this.startStep);
+  }
+
+  get socKwh(): Float64Array {
+    if (!this.soc) {
+      this.socBuffer[0] = this.e0;
+      this.socBuffer.set(this.endSocKwh, 1);
+      this.soc = this.socBuffer.subarray(0, this.endStep - this.startStep + 1);
+    }
+    return this.soc;
+  }
+
+  get endSocKwh(): Float64Array {
+    return (this.endSoc ??= this.ring(this.solver.plan.y));
+  }
+
+  get chargeKw(): Float64Array {
+    return (this.charge ??= this.ring(this.solver.plan.c));
+  }
+
+  get dischargeKw(): Float64Array {
+    return (this.discharge ??= this.ring(this.solver.plan.d));
+  }
+
+  get storedEnergyValue(): Float64Array {
+    return (this.value ??= this.ring(this.solver.plan.value));
+  }
+
+  get recomputedSteps(): Int32Array {
+    return (this.recomputed ??= this.solver.recomputed.subarray(0, this.solver.recomputedCount));
+  }
 }

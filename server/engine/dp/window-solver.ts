@@ -64,14 +64,6 @@ export class WindowSolver {
     return t % this.size;
   }
 
-  /** Views of the last forward pass's plan for steps [start, end) (valid until the next solve). */
-  planViews(start: number, end: number): { y: Float64Array; c: Float64Array; d: Float64Array; value: Float64Array } {
-    const r = start % this.size;
-    const e = r + end - start;
-    const p = this.plan;
-    return { y: p.y.subarray(r, e), c: p.c.subarray(r, e), d: p.d.subarray(r, e), value: p.value.subarray(r, e) };
-  }
-
   /** Physical store slot of V_t (valid for t of the last solved window). */
   slotOf(t: number): number {
     return this.map[t % this.size] ?? 0;

@@ -197,7 +197,7 @@ function runClosedLoopOnDp(
     ...(figures
       ? {
           onPlan: (plan: DpWindowPlan) => {
-            const fig = figures.update(plan.startStep, plan.endStep, plan.socKwh.subarray(1), plan.recomputedSteps);
+            const fig = figures.update(plan.startStep, plan.endStep, plan.endSocKwh, plan.recomputedSteps);
             shareSum += fig.nearSteadyShare;
             leavingSum += fig.leavingArcSteps;
             const steps = plan.endStep - plan.startStep;
