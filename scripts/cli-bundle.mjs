@@ -68,7 +68,8 @@ export function cliBundleIsFresh(root) {
 export async function buildCliBundle(root) {
   const { build } = await import('esbuild');
   mkdirSync(path.join(root, OUT_DIR), { recursive: true });
-  const staging = path.join(root, OUT_DIR, `.build-${process.pid}-${Date.now()}`);
+  const started = Date.now();
+  const staging = path.join(root, OUT_DIR, `.build-${process.pid}-${started}`);
   try {
     const result = await build({
       absWorkingDir: root,
@@ -90,7 +91,12 @@ export async function buildCliBundle(root) {
       },
     });
     const inputs = {};
-    for (const rel of [...Object.keys(result.metafile.inputs), ...SETTINGS].sort()) inputs[rel] = describe(root, rel);
+    for (const rel of [...Object.keys(result.metafile.inputs), ...SETTINGS].sort()) {
+      const seen = describe(root, rel);
+      // Edited while esbuild read it (a shared working tree): the bundle may hold either
+      // version, so record it as unseen and let the next run build again.
+      inputs[rel] = seen.mtimeMs >= started - 2 ? { ...seen, size: -1 } : seen;
+    }
     for (const name of Object.keys(ENTRIES)) {
       for (const ext of ['.mjs', '.mjs.map']) renameSync(path.join(staging, name + ext), path.join(root, OUT_DIR, name + ext));
     }

@@ -18,5 +18,6 @@ if (bundle) {
   const result = spawnSync(tsx, [path.join(root, 'server', 'engine', 'cli', 'main.ts'), ...process.argv.slice(2)], {
     stdio: 'inherit',
   });
+  if (result.error) process.stderr.write(`internal error: cannot run ${tsx}: ${result.error.message}\n`);
   process.exitCode = result.status ?? 1;
 }
