@@ -9,6 +9,7 @@ import { requireUser } from '../auth/current-user';
 import { AppError } from '../http/app-error';
 import { pathId } from '../sites/request-context';
 import { TokenBuckets } from './preview-rate-limit';
+import { PreviewBusyError } from './preview-thread-client';
 import * as service from './horizon-preview.service';
 
 export const horizonPreviewRouter = Router();
@@ -27,5 +28,10 @@ horizonPreviewRouter.post('/plans/:id/horizon-preview', async (req, res) => {
   }
   const id = pathId(req, 'plan');
   const body = horizonPreviewRequestSchema.parse(req.body);
-  res.json(await service.previewHorizon(id, body));
+  try {
+    res.json(await service.previewHorizon(id, body));
+  } catch (error) {
+    if (error instanceof PreviewBusyError) res.setHeader('Retry-After', String(error.retryAfterSeconds));
+    throw error;
+  }
 });

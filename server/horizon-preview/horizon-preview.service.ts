@@ -6,13 +6,12 @@
  */
 import { horizonPreviewLimits, MAX_PREVIEW_STEPS, type HorizonPreview, type HorizonPreviewLimits, type HorizonPreviewRequest } from '@shared/schemas/horizon-preview';
 import { getDb } from '../db/client';
-import { AppError, notFound, unprocessable } from '../http/app-error';
+import { notFound, unprocessable } from '../http/app-error';
 import { checkWholeSteps } from '../plans/run-inputs';
 import { findPlanForPreview } from './horizon-preview.repo';
-import { previewSource, steadyOf } from './preview-inputs';
-import { previewEligibility, solvePreview } from './preview-solve';
-
-const hours = (h: number) => `${Number(h.toFixed(4))} h`;
+import { loadPreviewSeries } from './preview-inputs';
+import { hours } from './preview-solve';
+import { previewThread } from './preview-thread-client';
 
 function checkRange(horizonHours: number, limits: HorizonPreviewLimits, dataEnd: string): void {
   const path = 'horizonHours';
@@ -33,19 +32,6 @@ function checkRange(horizonHours: number, limits: HorizonPreviewLimits, dataEnd:
   }
 }
 
-/** Why the preview cannot run, in the planner's words, with what to do instead. */
-function needsExactPath(reason: string): AppError {
-  const why = reason.replace(/; the LP path solves it$/, '');
-  return new AppError(
-    'preview_needs_exact_path',
-    `The quick horizon preview needs the exact fast path, and this plan’s model is one it cannot solve exactly: ${why}. ` +
-      'Make a full plan with the horizon you want instead: it runs in the background on the linear program.',
-    422,
-    [{ path: 'model', message: why }],
-    { previewAvailable: false },
-  );
-}
-
 export async function previewHorizon(planId: string, body: HorizonPreviewRequest): Promise<HorizonPreview> {
   const started = performance.now();
   const row = await findPlanForPreview(getDb(), planId);
@@ -56,12 +42,9 @@ export async function previewHorizon(planId: string, body: HorizonPreviewRequest
   const dataEnd = [inputs.profiles.price, inputs.profiles.load, inputs.profiles.generation].filter((p) => p !== null).map((p) => p.end).sort()[0] ?? '';
   checkRange(body.horizonHours, limits, dataEnd);
 
-  const source = await previewSource(row.id, row.inputVersion, inputs);
-  const eligible = previewEligibility(source.aligned, inputs, body.horizonHours);
-  if (!eligible.ok) throw needsExactPath(eligible.reason);
-  const outcome = solvePreview(source.aligned, steadyOf(source), inputs, body.horizonHours);
-  if (!outcome.ok) throw unprocessable(`The plan cannot be solved with a horizon of ${hours(body.horizonHours)}: ${outcome.message}.`);
-  const { preview } = outcome;
+  // The solve runs on the preview thread: the event loop stays free for every other request meanwhile.
+  const key = `${row.id}:${row.inputVersion}`;
+  const preview = await previewThread.run({ key, inputs, horizonHours: body.horizonHours, loadSeries: () => loadPreviewSeries(key, inputs) });
   return {
     planId: row.id,
     ...preview,

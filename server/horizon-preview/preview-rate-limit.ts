@@ -1,6 +1,6 @@
 /**
- * A per-user token bucket for the horizon preview: each preview solves on the
- * web process's own thread, so one user's slider must not crowd out everyone
+ * A per-user token bucket for the horizon preview: the process has one preview
+ * thread for everyone, so one user's slider must not crowd out everyone
  * else. Kept in memory (the preview writes nothing, not even a counter): each
  * process limits its own share, which is enough to keep any one of them responsive.
  */

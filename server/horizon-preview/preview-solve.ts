@@ -6,7 +6,10 @@
 import type { HorizonPreview, HorizonPreviewStep } from '@shared/schemas/horizon-preview';
 import type { PlanInputs } from '@shared/schemas/plan';
 import { canSolveWithDp, parseTerminal, problemFor, solvePlan, stepIndexOf, type AlignedInputs, type DpEligibility, type SteadyCycle } from '../engine';
+import { AppError } from '../http/app-error';
 import { summarisePlan } from '../plans/plan-summary';
+
+export const hours = (h: number) => `${Number(h.toFixed(4))} h`;
 
 /**
  * Whether the dynamic program takes the plan's model over the window the
@@ -18,6 +21,19 @@ export function previewEligibility(a: AlignedInputs, inputs: PlanInputs, horizon
   if (!start.ok) return { ok: false, reason: start.message };
   const end = Math.min(a.timesMs.length, start.index + Math.round((horizonHours * 60) / a.stepMinutes));
   return canSolveWithDp(problemFor(a, start.index, end, 0, { kind: 'free' }));
+}
+
+/** Why the preview cannot run, in the planner's words, with what to do instead. */
+export function needsExactPath(reason: string): AppError {
+  const why = reason.replace(/; the LP path solves it$/, '');
+  return new AppError(
+    'preview_needs_exact_path',
+    `The quick horizon preview needs the exact fast path, and this plan’s model is one it cannot solve exactly: ${why}. ` +
+      'Make a full plan with the horizon you want instead: it runs in the background on the linear program.',
+    422,
+    [{ path: 'model', message: why }],
+    { previewAvailable: false },
+  );
 }
 
 export type PreviewFigures = Omit<HorizonPreview, 'planId' | 'planCost' | 'costDifference' | 'limits' | 'serverMs'>;
