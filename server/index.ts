@@ -6,6 +6,7 @@ import { logger } from './logger';
 import { ensureFakeSmtp, stopFakeSmtp } from './mail/mail.service';
 import { startJobWorker, type JobWorker } from './jobs/job-worker';
 import { stopBoss } from './jobs/boss';
+import { previewThread } from './horizon-preview/preview-thread-client';
 
 async function main() {
   const config = loadConfig();
@@ -24,6 +25,8 @@ async function main() {
     }
     process.exit(1);
   });
+  // Loads the engine in the horizon preview's thread now, not on the first slider move.
+  previewThread.warm();
   // RUN_WORKER=false leaves the jobs to `npm run worker` processes (README: scaling past one machine).
   const worker: JobWorker | null = config.RUN_WORKER === 'true' ? await startJobWorker(config.DATABASE_URL) : null;
 
@@ -34,6 +37,7 @@ async function main() {
     logger.info('Stopping Slackwater…');
     server.close();
     await worker?.stop();
+    await previewThread.close();
     await stopBoss();
     await stopFakeSmtp();
     await closeDb();
