@@ -166,7 +166,8 @@ async function main() {
   planPath = `/api/plans/${plan.plan.id}`;
   while ((await client.ok('GET', planPath)).job.state !== 'completed') await new Promise((r) => setTimeout(r, 200));
 
-  // The preview re-plans a one-day plan of the fast-path battery with other horizons, in the web process.
+  // The preview re-plans a one-day plan of the fast-path battery with other horizons, on the web process's preview
+  // thread (the first preview also starts that thread, which loads the engine: under tsx most of its time).
   const dpPlan = await client.ok('POST', '/api/plans', {
     batteryId: dpBattery.id, priceProfileId: year, deliveryStart: new Date(START + 24 * HOUR_MS).toISOString(),
     deliveryEnd: new Date(START + 48 * HOUR_MS).toISOString(), horizonHours: 24, terminalRule: 'steady-value',
