@@ -1,40 +1,18 @@
 // `npm run cli` runs a prebuilt bundle of the engine command line (scripts/cli.mjs,
 // scripts/cli-bundle.mjs). It must answer exactly as the TypeScript sources do,
 // and be rebuilt whenever a source it was built from changes.
-import { execFile } from 'node:child_process';
 import { createHash } from 'node:crypto';
 import { cpSync, existsSync, mkdtempSync, readFileSync, rmSync, symlinkSync, utimesSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { buildCliBundle, cliBundleIsFresh, CLI_BUNDLE } from '../../scripts/cli-bundle.mjs';
+import { repoRoot as root, runProcess, tempFiles, type Run } from './support/cli-process';
 
-const root = join(import.meta.dirname, '..', '..');
-const dir = mkdtempSync(join(tmpdir(), 'slackwater-cli-bundle-'));
-const file = (name: string, text: string) => {
-  writeFileSync(join(dir, name), text);
-  return join(dir, name);
-};
+const { file } = tempFiles('slackwater-cli-bundle-');
 
-interface Run {
-  readonly code: number;
-  readonly stdout: string;
-  readonly stderr: string;
-}
-
-function npmCli(args: readonly string[], sources: boolean): Promise<Run> {
-  const env = { ...process.env, SLACKWATER_CLI_SOURCES: sources ? '1' : '0' };
-  return new Promise((resolve) => {
-    execFile(
-      'npm',
-      ['run', '--silent', 'cli', '--', ...args],
-      { cwd: root, env, maxBuffer: 64 << 20 },
-      (error, stdout, stderr) => {
-        resolve({ code: error ? Number(error.code ?? 1) : 0, stdout, stderr });
-      },
-    );
-  });
-}
+const npmCli = (args: readonly string[], sources: boolean): Promise<Run> =>
+  runProcess('npm', ['run', '--silent', 'cli', '--', ...args], { ...process.env, SLACKWATER_CLI_SOURCES: sources ? '1' : '0' });
 
 // Three local days of 15-minute prices with a site load, so the DP and LP paths both run.
 const quarters = Array.from({ length: 288 }, (_, k) => k);

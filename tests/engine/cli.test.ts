@@ -1,33 +1,12 @@
 // The command line's contract (issue 4): one JSON document on stdout, exit 0;
 // bad input → exit 2 with the message on stderr. Runs the real command on small
 // files written to a temporary folder; the commands run in parallel in beforeAll.
-import { execFile } from 'node:child_process';
-import { mkdtempSync, writeFileSync } from 'node:fs';
-import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { CliInputError, parseArgs, required } from '../../server/engine/cli/cli-args';
+import { repoRoot as root, runProcess as run, tempFiles, type Run } from './support/cli-process';
 
-const root = join(import.meta.dirname, '..', '..');
-const dir = mkdtempSync(join(tmpdir(), 'slackwater-cli-'));
-const file = (name: string, text: string) => {
-  writeFileSync(join(dir, name), text);
-  return join(dir, name);
-};
-
-interface Run {
-  readonly code: number;
-  readonly stdout: string;
-  readonly stderr: string;
-}
-
-function run(command: string, args: string[]): Promise<Run> {
-  return new Promise((resolve) => {
-    execFile(command, args, { cwd: root, maxBuffer: 64 << 20 }, (error, stdout, stderr) => {
-      resolve({ code: error ? Number(error.code ?? 1) : 0, stdout, stderr });
-    });
-  });
-}
+const { file } = tempFiles('slackwater-cli-');
 
 const tsx = join(root, 'node_modules', '.bin', 'tsx');
 const cli = (...args: string[]) => run(tsx, ['server/engine/cli/main.ts', ...args]);
