@@ -12,7 +12,7 @@ import type { Plan, PlanCreated } from '@shared/schemas/plan';
 import { createTestApp, testOrigin } from '../support/test-app';
 import { signInAs, type SignedInAgent } from '../support/auth';
 import type { JobWorker } from '../../server/jobs/job-worker';
-import { previewLimiter } from '../../server/horizon-preview/horizon-preview.routes';
+import { PREVIEW_LIMIT, previewLimitStore } from '../../server/horizon-preview/horizon-preview.routes';
 import { optimalArbitrageProfit } from '../jobs/independent-lp';
 import { createPlace, dailyPrices, HOUR_MS, sqlRows, startTestWorker, stopTestWorker, useOwnJobQueues, waitUntilFinished, type Place } from '../jobs/support';
 
@@ -198,8 +198,8 @@ describe('the horizon preview rate limit', () => {
   it('answers 429 with Retry-After once a user has used up the burst, and only for that user', async () => {
     const plan = await makePlan(place, 24, 'free');
     const eager = await signInAs(app, 'viewer');
-    // Use up the bucket directly (the same limiter the route uses), so the test never races the refill.
-    while (previewLimiter.take(eager.user.id).ok);
+    // Use up the allowance in the store the route counts in, so the test never races the window's end.
+    for (let i = 0; i < PREVIEW_LIMIT.limit; i++) await previewLimitStore.increment(eager.user.id);
     const refused = await preview(eager, plan.id, 30);
     expect(refused.status).toBe(429);
     expect(Number(refused.headers['retry-after'])).toBeGreaterThanOrEqual(1);
