@@ -4,6 +4,7 @@
  * unambiguously; wall times typed in a form map back to instants the same way.
  */
 import { createZoneClock, formatInstant } from '@shared/profile-csv';
+import { format } from 'date-fns';
 
 /** "2026-05-04 17:00 +02:00" in `timeZone` (UTC text when the zone is unknown). */
 export function formatLocalTime(ms: number, timeZone: string): string {
@@ -57,3 +58,12 @@ export function formatSteps(steps: number, stepMinutes: number): string {
   const minutes = steps * stepMinutes;
   return minutes % 60 === 0 ? `${minutes / 60} h` : minutes > 60 ? `${(minutes / 60).toFixed(1)} h` : `${minutes} min`;
 }
+
+/**
+ * When something happened (an upload, a sign-off, an e-mail), in the browser's own zone, written like
+ * every other time in the app: "2026-12-01 23:16 +01:00". Seconds on request (audit trail, history).
+ */
+export function formatMoment(iso: string | number, withSeconds = false): string {
+  return format(new Date(iso), withSeconds ? 'yyyy-MM-dd HH:mm:ss xxx' : 'yyyy-MM-dd HH:mm xxx');
+}
+

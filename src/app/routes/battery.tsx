@@ -10,6 +10,7 @@ import { useBattery } from '@/features/batteries/api/get-battery';
 import { useUpdateBattery } from '@/features/batteries/api/update-battery';
 import { BatteryDetails } from '@/features/batteries/components/battery-details';
 import { BatteryForm } from '@/features/batteries/components/battery-form';
+import { formatMoment } from '@/lib/format';
 
 export function BatteryRoute() {
   const { id = '' } = useParams();
@@ -55,7 +56,7 @@ export function BatteryRoute() {
       ) : (
         <BatteryDetails battery={b} currency={s.currency} />
       )}
-      <p className="text-xs text-ink-500">Version {b.version} · last changed {new Date(b.updatedAt).toLocaleString()}</p>
+      <p className="text-xs text-ink-500">Version {b.version} · last changed {formatMoment(b.updatedAt)}</p>
     </section>
   );
 }

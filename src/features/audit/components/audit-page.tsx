@@ -4,6 +4,7 @@ import { buttonClass } from '@/components/form-field';
 import { EmptyState, ErrorState, LoadingState } from '@/components/query-state';
 import { useAuditEvents, type AuditFilterValues } from '../api/get-audit-events';
 import { AuditFilters } from './audit-filters';
+import { formatMoment } from '@/lib/format';
 
 const describeDetails = (details: Record<string, unknown>) =>
   Object.entries(details)
@@ -15,7 +16,7 @@ function EventRow({ event }: { event: AuditEvent }) {
   return (
     <tr className="border-t border-ink-100 align-top">
       <td className="px-4 py-2 whitespace-nowrap tabular-nums" title={event.at}>
-        {new Date(event.at).toLocaleString()}
+        {formatMoment(event.at, true)}
       </td>
       <td className="px-4 py-2 break-all">{event.actorEmail ?? '—'}</td>
       <td className="px-4 py-2">

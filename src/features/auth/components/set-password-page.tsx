@@ -5,6 +5,7 @@ import { usePasswordLink, useRedeemPasswordLink } from '../api/password-links';
 import { AuthFrame, FrameLink, wideButton } from './auth-frame';
 import { fieldError, formError } from './field-errors';
 import { NewPasswordFields, useNewPasswordForm } from './new-password-fields';
+import { formatMoment } from '@/lib/format';
 
 /**
  * The token arrives in the URL fragment (`#token=…`): it is read once and the address bar
@@ -62,7 +63,7 @@ export function SetPasswordPage() {
         <>
           {invite ? 'Choose the password for ' : 'For '}
           <strong className="font-semibold text-ink-900">{link.data.email}</strong>. The link expires{' '}
-          {new Date(link.data.expiresAt).toLocaleString()}.
+          {formatMoment(link.data.expiresAt)}.
         </>
       }
     >

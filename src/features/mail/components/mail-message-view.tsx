@@ -1,5 +1,6 @@
 import { ErrorState, LoadingState } from '@/components/query-state';
 import { useMailMessage } from '../api/get-mail-message';
+import { formatMoment } from '@/lib/format';
 
 /** Plain text with its web addresses as links (opened in a new tab, without a Referer). */
 function LinkedText({ text }: { text: string }) {
@@ -37,7 +38,7 @@ export function MailMessageView({ id }: { id: number | null }) {
           <dt className="font-medium">To</dt>
           <dd className="break-all">{m.to}</dd>
           <dt className="font-medium">Sent</dt>
-          <dd>{new Date(m.sentAt).toLocaleString()}</dd>
+          <dd>{formatMoment(m.sentAt)}</dd>
         </dl>
       </header>
       <LinkedText text={m.text} />

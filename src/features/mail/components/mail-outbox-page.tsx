@@ -3,6 +3,7 @@ import { inputClass } from '@/components/form-field';
 import { EmptyState, ErrorState, LoadingState } from '@/components/query-state';
 import { useOutbox } from '../api/get-outbox';
 import { MailMessageView } from './mail-message-view';
+import { formatMoment } from '@/lib/format';
 
 /** Admin page: the messages the local fake SMTP server received (development and demo). */
 export function MailOutboxPage() {
@@ -44,7 +45,7 @@ export function MailOutboxPage() {
                 >
                   <span className="block truncate font-medium text-ink-900">{m.subject || '(no subject)'}</span>
                   <span className="block truncate text-sm text-ink-700">to {m.to}</span>
-                  <span className="block text-xs text-ink-500">{new Date(m.sentAt).toLocaleString()}</span>
+                  <span className="block text-xs text-ink-500">{formatMoment(m.sentAt)}</span>
                 </button>
               </li>
             ))}

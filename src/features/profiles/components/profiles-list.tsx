@@ -5,6 +5,7 @@ import { compactSelect } from '@/components/form-field';
 import { EmptyState, ErrorState, LoadingState } from '@/components/query-state';
 import { useSiteProfiles } from '../api/get-site-profiles';
 import { describeStep, displayUnit, formatLocal } from '../lib/format';
+import { formatMoment } from '@/lib/format';
 
 export function ProfilesList({ siteId, timezone, currency }: { siteId: string; timezone: string; currency: string }) {
   const profiles = useSiteProfiles(siteId);
@@ -52,7 +53,7 @@ export function ProfilesList({ siteId, timezone, currency }: { siteId: string; t
               <td className="px-3 py-2 tabular-nums">
                 {p.min.toLocaleString()} … {p.max.toLocaleString()} {displayUnit(p.unit, currency)}
               </td>
-              <td className="px-3 py-2">{new Date(p.uploadedAt).toLocaleString()}</td>
+              <td className="px-3 py-2">{formatMoment(p.uploadedAt)}</td>
             </tr>
           ))}
         </tbody>

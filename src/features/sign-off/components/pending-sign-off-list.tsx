@@ -1,8 +1,7 @@
 import { Link } from 'react-router-dom';
 import { EmptyState, ErrorState, LoadingState } from '@/components/query-state';
 import { usePendingSignOffs } from '../api/get-pending-sign-offs';
-
-const when = (iso: string) => new Date(iso).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' });
+import { formatMoment } from '@/lib/format';
 
 /** Submitted plans the signed-in approver may sign off (never their own submissions), oldest first. */
 export function PendingSignOffList({ enabled = true }: { enabled?: boolean }) {
@@ -34,10 +33,10 @@ export function PendingSignOffList({ enabled = true }: { enabled?: boolean }) {
               <td className="px-3 py-2">{p.siteName}</td>
               <td className="px-3 py-2">{p.batteryName}</td>
               <td className="px-3 py-2">
-                {when(p.deliveryStart)} – {when(p.deliveryEnd)}
+                {formatMoment(p.deliveryStart)} – {formatMoment(p.deliveryEnd)}
               </td>
               <td className="px-3 py-2">{p.submittedBy.name ?? p.submittedBy.email}</td>
-              <td className="px-3 py-2">{p.submittedAt ? when(p.submittedAt) : ''}</td>
+              <td className="px-3 py-2">{p.submittedAt ? formatMoment(p.submittedAt) : ''}</td>
               <td className="px-3 py-2">
                 <Link to={`/plans/${p.planId}`} className="font-semibold text-seaglass-700 underline">
                   Review

@@ -1,7 +1,6 @@
 import { Link } from 'react-router-dom';
 import type { PersonAt, SignOffRecord } from '@shared/schemas/sign-off';
-
-const when = (iso: string) => new Date(iso).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' });
+import { formatMoment } from '@/lib/format';
 
 function Person({ label, who, comment }: { label: string; who: PersonAt | null; comment?: string | null }) {
   if (!who) return null;
@@ -9,7 +8,7 @@ function Person({ label, who, comment }: { label: string; who: PersonAt | null; 
     <div>
       <dt className="text-xs font-semibold uppercase tracking-wide text-ink-500">{label}</dt>
       <dd className="text-ink-900">
-        {who.name ?? who.id} <span className="text-ink-500">on {when(who.at)}</span>
+        {who.name ?? who.id} <span className="text-ink-500">on {formatMoment(who.at)}</span>
         {comment && <q className="mt-0.5 block text-ink-700">{comment}</q>}
       </dd>
     </div>
@@ -28,7 +27,7 @@ export function SignOffFacts({ record }: { record: SignOffRecord }) {
         <div>
           <dt className="text-xs font-semibold uppercase tracking-wide text-ink-500">Superseded</dt>
           <dd className="text-ink-900">
-            on {when(record.superseded.at)} by{' '}
+            on {formatMoment(record.superseded.at)} by{' '}
             <Link className="text-seaglass-700 underline" to={`/plans/${record.superseded.byPlanId}`}>
               a newer approved plan
             </Link>

@@ -1,5 +1,6 @@
 import { Link } from 'react-router-dom';
 import type { PlanEvent } from '@shared/schemas/sign-off';
+import { formatMoment } from '@/lib/format';
 
 const WORDS: Record<PlanEvent['action'], string> = {
   submitted: 'submitted it for sign-off',
@@ -17,7 +18,7 @@ export function SignOffHistory({ events }: { events: PlanEvent[] }) {
       {events.map((e) => (
         <li key={e.id} className="text-sm">
           <span className="text-ink-500">
-            {new Date(e.at).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'medium' })}
+            {formatMoment(e.at, true)}
           </span>{' '}
           <span className="font-medium text-ink-900">{e.actorName ?? e.actorEmail ?? 'someone'}</span> {WORDS[e.action]}
           {e.version !== null && <span className="text-ink-500"> (version {e.version})</span>}

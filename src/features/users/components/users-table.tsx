@@ -17,6 +17,7 @@ import { roleLabels, roles } from '@shared/schemas/auth';
 import { userStatuses, type User } from '@shared/schemas/users';
 import { inputClass } from '@/components/form-field';
 import { RoleSelect, UserActions, isActiveAdmin, type ReportOutcome } from './user-row-actions';
+import { formatMoment } from '@/lib/format';
 
 const features = tableFeatures({
   columnFilteringFeature,
@@ -36,7 +37,7 @@ const statusStyle: Record<User['status'], string> = {
   disabled: 'bg-ink-100 text-ink-500',
 };
 
-const formatTime = (iso: string | null) => (iso ? new Date(iso).toLocaleString() : 'never');
+const formatTime = (iso: string | null) => (iso ? formatMoment(iso) : 'never');
 
 const isLastAdmin = (user: User, all: readonly User[]) => isActiveAdmin(user) && all.filter(isActiveAdmin).length === 1;
 
