@@ -68,6 +68,21 @@ export function cliBundleIsFresh(root) {
 export async function buildCliBundle(root) {
   const { build } = await import('esbuild');
   mkdirSync(path.join(root, OUT_DIR), { recursive: true });
+  // A file saved just before or during a build may be read by esbuild in either
+  // version (file times come from a coarse clock). Build again then, so a save made
+  // right before a run never leaves a bundle that looks stale on the next one.
+  for (let attempt = 1; ; attempt += 1) {
+    const built = await buildOnce(build, root);
+    if (built.settled || attempt === MAX_ATTEMPTS) return built.bundle;
+    await new Promise((resolve) => setTimeout(resolve, CLOCK_SLACK_MS + 1));
+  }
+}
+
+const MAX_ATTEMPTS = 3;
+// Kernel file times lag the wall clock by up to one scheduler tick (4-10 ms).
+const CLOCK_SLACK_MS = 20;
+
+async function buildOnce(build, root) {
   const started = Date.now();
   const staging = path.join(root, OUT_DIR, `.build-${process.pid}-${started}`);
   try {
@@ -91,11 +106,14 @@ export async function buildCliBundle(root) {
       },
     });
     const inputs = {};
+    let settled = true;
     for (const rel of [...Object.keys(result.metafile.inputs), ...SETTINGS].sort()) {
       const seen = describe(root, rel);
-      // Edited while esbuild read it (a shared working tree): the bundle may hold either
-      // version, so record it as unseen and let the next run build again.
-      inputs[rel] = seen.mtimeMs >= started - 2 ? { ...seen, size: -1 } : seen;
+      // Possibly edited while esbuild read it: the bundle may hold either version, so
+      // record it as unseen (the next run builds again) unless a rebuild settles it.
+      const unsure = seen.mtimeMs >= started - CLOCK_SLACK_MS;
+      if (unsure) settled = false;
+      inputs[rel] = unsure ? { ...seen, size: -1 } : seen;
     }
     for (const name of Object.keys(ENTRIES)) {
       for (const ext of ['.mjs', '.mjs.map']) renameSync(path.join(staging, name + ext), path.join(root, OUT_DIR, name + ext));
@@ -103,10 +121,10 @@ export async function buildCliBundle(root) {
     const manifest = { format: FORMAT, node: process.versions.node, builtAt: new Date().toISOString(), entries: ENTRIES, inputs };
     writeFileSync(path.join(staging, 'manifest.json'), `${JSON.stringify(manifest, null, 1)}\n`);
     renameSync(path.join(staging, 'manifest.json'), path.join(root, MANIFEST));
+    return { bundle: path.join(root, CLI_BUNDLE), settled };
   } finally {
     rmSync(staging, { recursive: true, force: true });
   }
-  return path.join(root, CLI_BUNDLE);
 }
 
 /**
