@@ -53,6 +53,25 @@ describe('session lifetime', () => {
     expect(s.expiresAt.getTime()).toBeGreaterThan(Date.now() + minutes(29));
   });
 
+  it('counts the idle period from the last request: a session 5 minutes from its expiry is slid back to 30', async () => {
+    // [S] ASVS 4.0.3 3.3.2: the idle timeout runs from the last activity, not from the last renewal.
+    const agent = await signInAs(app, 'viewer');
+    await getDb().update(sessions).set({ expiresAt: new Date(Date.now() + minutes(25)) }).where(eq(sessions.userId, agent.user.id));
+    const response = await agent.get('/api/auth/me');
+    expect(response.status).toBe(200);
+    expect(String(response.headers['set-cookie'])).toMatch(/slackwater_session=[a-z0-9]+;.*Max-Age=1800/);
+    expect((await sessionOf(agent.user.id)).expiresAt.getTime()).toBeGreaterThan(Date.now() + minutes(29));
+  });
+
+  it('does not write on every request: a session slid within the last minute is left as it is', async () => {
+    const agent = await signInAs(app, 'viewer');
+    const before = await sessionOf(agent.user.id);
+    const response = await agent.get('/api/auth/me');
+    expect(response.status).toBe(200);
+    expect(response.headers['set-cookie']).toBeUndefined();
+    expect((await sessionOf(agent.user.id)).expiresAt.getTime()).toBe(before.expiresAt.getTime());
+  });
+
   it('ends a session 12 hours after sign-in however active it was', async () => {
     const agent = await signInAs(app, 'planner');
     await getDb()
