@@ -20,14 +20,16 @@ const envSchema = z.object({
     .string()
     .regex(/^[a-z_][a-z0-9_]{0,49}$/, 'use lower-case letters, digits and underscores')
     .default('pgboss'),
-  /**
-   * Testing aid: while this file exists, a job waits after it has started (and keeps
-   * sending heartbeats). Lets a test kill a worker at a known point without timing.
-   */
-  SLACKWATER_JOB_HOLD_FILE: z.string().min(1).optional(),
 });
 
-export type JobsConfig = z.infer<typeof envSchema> & { heartbeatMs: number };
+export type JobsConfig = z.infer<typeof envSchema> & {
+  heartbeatMs: number;
+  /**
+   * Runs after a job has been claimed and its heartbeat started, before the handler.
+   * Only tests set it (to stop a job at a known point); it is never read from the environment.
+   */
+  beforeHandler?: (signal: AbortSignal) => Promise<void>;
+};
 
 export function loadJobsConfig(env: NodeJS.ProcessEnv = process.env): JobsConfig {
   const parsed = envSchema.safeParse(env);

@@ -2,8 +2,6 @@
  * One attempt of one job: claim its progress row, keep a heartbeat, run the
  * handler, and decide what a failure means (final, or worth another attempt).
  */
-import { existsSync } from 'node:fs';
-import { setTimeout as sleep } from 'node:timers/promises';
 import type PgBoss from 'pg-boss';
 import { getDb } from '../db/client';
 import { logger } from '../logger';
@@ -19,11 +17,6 @@ interface AttemptOptions {
 }
 
 const messageOf = (error: unknown) => (error instanceof Error ? error.message : String(error));
-
-/** Testing aid (see SLACKWATER_JOB_HOLD_FILE): wait while the file exists. */
-async function holdWhileFileExists(file: string | undefined, signal: AbortSignal): Promise<void> {
-  while (file && existsSync(file) && !signal.aborted) await sleep(100);
-}
 
 /** Ends the job for good: the entity gets the message and the progress row turns `failed`, together. */
 export async function failJobFinally(handler: JobHandler, data: JobData, attempt: number | null, message: string): Promise<void> {
@@ -45,7 +38,7 @@ export async function runClaimedJob(handler: JobHandler, job: PgBoss.JobWithMeta
   }, options.config.heartbeatMs);
   const ctx = new JobContext(job.id, attempt, options.signal);
   try {
-    await holdWhileFileExists(options.config.SLACKWATER_JOB_HOLD_FILE, options.signal);
+    await options.config.beforeHandler?.(options.signal);
     await handler.run(ctx, data);
   } catch (error) {
     await ctx.flush();

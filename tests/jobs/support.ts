@@ -20,7 +20,7 @@ export const HOUR_MS = 3_600_000;
 /** Call at the top of a test file, before the app sends any job. */
 export function useOwnJobQueues(name: string, extra: Record<string, string> = {}): void {
   // A forked test process may run several files: start from the defaults, not the last file's settings.
-  for (const key of ['JOB_RETRY_LIMIT', 'JOB_STALE_SECONDS', 'WORKER_CONCURRENCY', 'STUDY_THREADS', 'SLACKWATER_JOB_HOLD_FILE']) delete process.env[key];
+  for (const key of ['JOB_RETRY_LIMIT', 'JOB_STALE_SECONDS', 'WORKER_CONCURRENCY', 'STUDY_THREADS']) delete process.env[key];
   process.env.PGBOSS_SCHEMA = `pgboss_t_${name}`.slice(0, 50);
   Object.assign(process.env, extra);
 }

@@ -2,7 +2,7 @@
  * Worker processes for the crash tests: `npm run worker` as child processes on
  * the test database and a pg-boss schema of the test file's own, plus a hold
  * file that keeps a started job waiting so a test can kill its worker at a
- * known point (SLACKWATER_JOB_HOLD_FILE), and polling with a generous timeout.
+ * known point (tests/jobs/held-worker.ts), and polling with a generous timeout.
  */
 import { spawn, type ChildProcess } from 'node:child_process';
 import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
@@ -39,7 +39,8 @@ export class WorkerProcesses {
    * tsx command, so the child's pid is the worker's own (the tsx command runs it in a grandchild).
    */
   start(options: { holding: boolean }): Promise<ChildProcess> {
-    const child = spawn(process.execPath, ['--import', 'tsx', 'server/worker.ts'], {
+    const entry = options.holding ? 'tests/jobs/held-worker.ts' : 'server/worker.ts';
+    const child = spawn(process.execPath, ['--import', 'tsx', entry], {
       env: {
         ...process.env,
         NODE_ENV: 'test',
@@ -48,7 +49,7 @@ export class WorkerProcesses {
         PGBOSS_SCHEMA: this.schema,
         JOB_STALE_SECONDS: '3',
         ...this.env,
-        ...(options.holding ? { SLACKWATER_JOB_HOLD_FILE: this.holdFile } : {}),
+        ...(options.holding ? { HOLD_FILE: this.holdFile } : {}),
       },
       stdio: ['ignore', 'pipe', 'pipe'],
     });
