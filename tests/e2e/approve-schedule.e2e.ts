@@ -79,6 +79,10 @@ describe('approving a schedule', () => {
           expect((await figure.boundingBox())?.height ?? 0).toBeGreaterThan(120); // drawn at its height, not collapsed
         }
         await approverPage.getByRole('table', { name: /Schedule/ }).waitFor();
+        // The page's own links lead to the cautions (one full list, pointed to from the sign-off panel).
+        await approverPage.getByRole('navigation', { name: 'On this page' }).getByRole('link', { name: 'Cautions' }).click();
+        await approverPage.waitForURL(/#cautions-heading$/);
+        expect(await approverPage.getByRole('heading', { name: 'Cautions' }).isVisible()).toBe(true);
         const cautions = approverPage.getByRole('complementary', { name: 'Before you sign off' });
         expect(await cautions.innerText()).toMatch(/interconnection agreement[\s\S]*operating limits[\s\S]*fire and safety/);
         await expect

@@ -1,8 +1,8 @@
 /**
  * The plan page: what was asked, the job's progress while it runs, then the
- * summary, the turnpike figures in words, the charts, the schedule table and
- * the cautions. The sign-off section is handed in by the route (features do
- * not import each other).
+ * summary, the turnpike figures in words, the charts, the horizon slider, the
+ * schedule table and the cautions, with in-page links at the top. The sign-off
+ * section is handed in by the route (features do not import each other).
  */
 import type { ReactNode } from 'react';
 import { Link, useParams } from 'react-router-dom';
@@ -20,6 +20,7 @@ import { LazyPlanCharts } from './charts/lazy-plan-charts';
 import { compareUrl } from './compare-url';
 import { FactList } from './fact-list';
 import { HorizonPreviewSection } from './horizon-preview/horizon-preview-section';
+import { PlanSectionsNav, type PlanSection } from './plan-sections-nav';
 
 const socSource: Record<string, string> = {
   'last-approved-plan': 'end SoC of the last approved plan',
@@ -38,6 +39,22 @@ function PlanFacts({ plan }: { plan: Plan }) {
     ['Status', plan.status],
   ];
   return <FactList rows={facts} />;
+}
+
+function sectionsOf(plan: Plan, withSignOff: boolean): PlanSection[] {
+  const computed: PlanSection[] = plan.results
+    ? [
+        { id: 'turnpike-heading', label: 'How far to trust it' },
+        { id: 'charts-heading', label: 'Charts' },
+        ...(plan.inputs ? [{ id: 'try-horizon-heading', label: 'Try another horizon' }] : []),
+        { id: 'schedule-heading', label: 'Schedule' },
+      ]
+    : [];
+  return [
+    ...computed,
+    { id: 'cautions-heading', label: 'Cautions', tone: 'caution' },
+    ...(withSignOff ? [{ id: 'sign-off-heading', label: 'Sign-off' }] : []),
+  ];
 }
 
 export function PlanPage({ signOff }: { signOff?: (planId: string) => ReactNode }) {
@@ -65,6 +82,7 @@ export function PlanPage({ signOff }: { signOff?: (planId: string) => ReactNode 
           Compare horizons for this delivery window
         </Link>
       </header>
+      <PlanSectionsNav sections={sectionsOf(plan, Boolean(signOff) && !isJobActive(plan.job))} />
       {plan.job && plan.job.state !== 'completed' && <JobProgressBar job={plan.job} label="Computing the plan" />}
       {plan.errorMessage && plan.job?.state === 'failed' && (
         <p role="alert" className="rounded border border-brick-600 bg-brick-100 p-4 text-ink-900">
@@ -75,7 +93,12 @@ export function PlanPage({ signOff }: { signOff?: (planId: string) => ReactNode 
         <>
           <PlanSummaryCard results={plan.results} currency={currency} />
           <TurnpikePanel results={plan.results} />
-          <LazyPlanCharts results={plan.results} timeZone={tz} currency={currency} energyKwh={energyKwh} usableKwh={usableKwh} />
+          <section aria-labelledby="charts-heading">
+            <h2 id="charts-heading" className="sr-only">
+              Charts
+            </h2>
+            <LazyPlanCharts results={plan.results} timeZone={tz} currency={currency} energyKwh={energyKwh} usableKwh={usableKwh} />
+          </section>
           {inputs && <HorizonPreviewSection plan={plan} inputs={inputs} results={plan.results} />}
           <section aria-labelledby="schedule-heading" className="space-y-2">
             <h2 id="schedule-heading" className="text-lg font-semibold text-ink-900">Schedule</h2>

@@ -13,3 +13,21 @@ export function SignOffCautions() {
     </aside>
   );
 }
+
+/**
+ * The same reminder where the full cautions are already on the page (the plan page):
+ * one short paragraph that points to them instead of repeating the list.
+ */
+export function SignOffCautionsReminder({ cautionsId }: { cautionsId: string }) {
+  return (
+    <aside aria-label="Before you sign off" className="rounded border border-amber-500 bg-amber-100 p-3 text-sm text-ink-900">
+      <span className="font-semibold text-amber-600">Before you sign off</span>, read the{' '}
+      <a href={`#${cautionsId}`} className="font-semibold underline">
+        cautions
+      </a>{' '}
+      above: the interconnection agreement, the grid code and the system operator&rsquo;s instructions, the battery maker&rsquo;s
+      operating limits and the site&rsquo;s fire and safety requirements come before this schedule; qualified personnel decide
+      dispatch.
+    </aside>
+  );
+}

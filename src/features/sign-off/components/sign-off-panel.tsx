@@ -3,15 +3,15 @@ import { exportPlanUrl } from '../api/export-plan-url';
 import { useSignOff } from '../api/get-sign-off';
 import { PlanStatusBadge } from './plan-status-badge';
 import { SignOffActions } from './sign-off-actions';
-import { SignOffCautions } from './sign-off-cautions';
+import { SignOffCautionsReminder } from './sign-off-cautions';
 import { SignOffFacts } from './sign-off-facts';
 import { SignOffHistory } from './sign-off-history';
 
 /**
  * The sign-off section of a plan page: status, who submitted and signed off,
  * when, the checksum, the actions the user may take, the CSV export, the full
- * history and the cautions of DESIGN section 8. Composed into the plan page by
- * the route (features do not import each other).
+ * history, and a pointer to the plan page's cautions (DESIGN section 8) just above
+ * it. Composed into the plan page by the route (features do not import each other).
  */
 export function SignOffPanel({ planId }: { planId: string }) {
   const query = useSignOff(planId);
@@ -28,7 +28,7 @@ export function SignOffPanel({ planId }: { planId: string }) {
         </h2>
         <PlanStatusBadge status={record.status} />
       </div>
-      <SignOffCautions />
+      <SignOffCautionsReminder cautionsId="cautions-heading" />
       <SignOffFacts record={record} />
       <SignOffActions record={record} />
       {record.can.export && (
