@@ -1,4 +1,4 @@
-import type { DispatchProblem } from '../types';
+import type { DispatchProblem, TerminalRule } from '../types';
 import { backwardStep } from './backward-step';
 import { writeTerminal } from './context';
 import { solveDispatchDp } from './solve';
@@ -29,8 +29,16 @@ export type DecisionHorizon =
  * more than the largest D′ that fails to agree by step `steps`. Exact, not
  * estimated: decisions with any lookahead ≥ depthSteps are identical.
  * `solved`: value functions of this very problem, when already at hand.
+ * `terminalAt(cut)`: the rule a plan with lookahead `cut` would end with, when it
+ * depends on where the plan ends (the steady-value rule prices end energy at the
+ * steady cycle's value for that time of day); by default the problem's own rule.
  */
-export function decisionHorizon(problem: DispatchProblem, steps: number, solved?: DpValueFunctions): DecisionHorizon {
+export function decisionHorizon(
+  problem: DispatchProblem,
+  steps: number,
+  solved?: DpValueFunctions,
+  terminalAt: (cut: number) => TerminalRule = () => problem.terminal,
+): DecisionHorizon {
   const n = problem.priceImport.length;
   if (!(Number.isInteger(steps) && steps >= 1 && steps <= n)) {
     return { ok: false, error: `steps must be a whole number from 1 to ${n}, got ${steps}` };
@@ -47,7 +55,7 @@ export function decisionHorizon(problem: DispatchProblem, steps: number, solved?
   let depth = steps;
   for (let cut = n - 1; cut >= steps; cut--) {
     let cur = 0;
-    let agrees = writeTerminal(ctx, scratch, cur, problem.terminal, problem.initialEnergyKwh)
+    let agrees = writeTerminal(ctx, scratch, cur, terminalAt(cut), problem.initialEnergyKwh)
       && shapesEqual(scratch, cur, ref, vf.slot(cut));
     for (let t = cut - 1; !agrees && t >= steps; t--) {
       if (!backwardStep(scratch, 1 - cur, cur, ctx.stages, t, ctx.retention, ctx.emin, ctx.emax, ctx.tol)) break;

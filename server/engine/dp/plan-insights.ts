@@ -1,4 +1,4 @@
-import type { DispatchProblem } from '../types';
+import type { DispatchProblem, TerminalRule } from '../types';
 import { decisionHorizon } from './decision-horizon';
 import { solveDispatchDp } from './solve';
 import { valueCurves } from './value-curves';
@@ -21,11 +21,17 @@ export interface DpPlanInsights {
 /**
  * Decision horizon of the first `deliverySteps` decisions and value curves at
  * the given step indexes of a plan problem the DP can solve (else null).
+ * `terminalAt(cut)`: the rule a plan of lookahead `cut` steps would end with.
  */
-export function planInsights(problem: DispatchProblem, deliverySteps: number, curveSteps: readonly number[]): DpPlanInsights | null {
+export function planInsights(
+  problem: DispatchProblem,
+  deliverySteps: number,
+  curveSteps: readonly number[],
+  terminalAt?: (cut: number) => TerminalRule,
+): DpPlanInsights | null {
   const solved = solveDispatchDp(problem, { keepValueFunctions: true }).valueFunctions;
   if (!solved) return null;
-  const dh = decisionHorizon(problem, deliverySteps, solved);
+  const dh = decisionHorizon(problem, deliverySteps, solved, terminalAt);
   if (!dh.ok) return null;
   const times = curveSteps.map((t) => problem.timesMs[t] ?? Number.NaN);
   const curves = valueCurves(problem, solved, times);

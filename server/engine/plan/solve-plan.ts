@@ -87,7 +87,10 @@ export function solvePlan(inputs: AlignedInputs, request: PlanRequest): PlanResu
   const main = solveTo(windowEnd);
   if (main.solution.status !== 'optimal') return fail('plan', main.solution.message ?? `the plan could not be solved (${main.solution.status})`);
   const curveSteps = Array.from({ length: end.index - from }, (_, i) => i).filter((i) => i === 0 || inputs.clock.minuteOfDay[from + i]! % 60 === 0);
-  const dpInsights = main.solution.method === 'dp' ? planInsights(problemFor(inputs, from, windowEnd, e0, main.rule), end.index - from, curveSteps) : null;
+  // A shorter lookahead ends elsewhere, so under steady-value it prices its end energy at another time of day.
+  const ruleAtLookahead = (cut: number) => terminalRuleFor(request.terminal, inputs, from + cut, steady);
+  const dpInsights =
+    main.solution.method === 'dp' ? planInsights(problemFor(inputs, from, windowEnd, e0, main.rule), end.index - from, curveSteps, ruleAtLookahead) : null;
   const longerHours = Math.max(4 * request.horizonHours, request.horizonHours + 168);
   const longerEnd = Math.min(n, from + Math.floor((longerHours * 60) / inputs.stepMinutes));
   const longer = longerEnd > windowEnd ? solveTo(longerEnd).solution : null;

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { decisionHorizon, solveDispatchDp } from '../../../server/engine/dp';
-import type { DispatchProblem } from '../../../server/engine/types';
+import type { DispatchProblem, TerminalRule } from '../../../server/engine/types';
 import { solveWithGlpk } from './glpk-reference';
 import { randomProblem, rng, VARIANTS } from './random-problems';
 
@@ -47,6 +47,41 @@ describe('decision horizon', () => {
     expect(checked).toBeGreaterThan(60);
     // Prices far ahead must stop mattering in most instances, else nothing was certified.
     expect(shorter).toBeGreaterThan(20);
+  });
+
+  it('under the steady-value rule, certifies decisions for every lookahead priced at its own end time of day', () => {
+    // A steady value that changes with the hour at which the plan ends, as the steady
+    // cycle's does: a shorter lookahead values its end energy differently, so the
+    // certificate must use each truncation's own end value, not the full plan's.
+    let checked = 0;
+    for (let i = 0; i < 24; i++) {
+      const seed = 9_100 + i;
+      const r = rng(seed);
+      const random = randomProblem('asymmetric powers and efficiencies', seed, 40 + Math.floor(r() * 40));
+      // Nearly flat prices: then the end value decides whether energy is bought now and held
+      // to the end, so it reaches far back (with wide price swings it hardly matters).
+      const prices = random.priceImport.map(() => 70 + (r() - 0.5) * 6);
+      const base: DispatchProblem = { ...random, priceImport: prices, priceExport: prices };
+      const byHour = Array.from({ length: 24 }, () => 20 + r() * 120);
+      const ruleAt = (cut: number): TerminalRule => ({ kind: 'steady-value', valuePerMwh: byHour[Math.round(cut * base.stepHours) % 24]! });
+      const n = base.priceImport.length;
+      const p: DispatchProblem = { ...base, terminal: ruleAt(n) };
+      const steps = 1 + Math.floor(r() * 4);
+      const dh = decisionHorizon(p, steps, undefined, ruleAt);
+      if (!dh.ok) continue;
+      const first = solveDispatchDp(p).socKwh.slice(1, steps + 1);
+      for (let depth = dh.depthSteps; depth <= n; depth += 1 + Math.floor(r() * 6)) {
+        const cut = { ...truncate(p, depth), terminal: ruleAt(depth) };
+        expect(solveDispatchDp(cut).socKwh.slice(1, steps + 1), `seed ${seed} depth ${depth}`).toEqual(first);
+        // [S] GLPK on the truncated problem with its own end value: the certified first SoCs cost nothing extra.
+        const free = solveWithGlpk(cut);
+        const fixed = solveWithGlpk(cut, { fixSocKwh: first });
+        expect(fixed.status, `seed ${seed} depth ${depth}`).toBe('optimal');
+        expect(Math.abs(fixed.objective - free.objective)).toBeLessThanOrEqual(1e-9 * Math.max(1, Math.abs(free.objective)));
+        checked++;
+      }
+    }
+    expect(checked).toBeGreaterThan(100);
   });
 
   it('refuses a number of steps outside the problem', () => {
