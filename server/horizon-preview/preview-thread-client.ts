@@ -54,14 +54,26 @@ export interface PreviewJob {
   readonly loadSeries: () => Promise<SnapshotSeries>;
 }
 
+const FIRST_PAUSE_MS = 1000;
+const LONGEST_PAUSE_MS = 60_000;
+
 export class PreviewThread {
   private worker: Worker | null = null;
   private readonly waiting = new Map<number, Waiting>();
   private nextId = 1;
   private active = 0;
+  /** Crashes since the thread last answered anything, and when the next may start. */
+  private crashes = 0;
+  private restartAt = 0;
 
-  /** `maxPending`: previews accepted at once (computing or queued); one more is answered 503. */
-  constructor(private readonly maxPending = 8) {}
+  /**
+   * `maxPending`: previews accepted at once (computing or queued); one more is answered 503.
+   * `spawn`: starts the thread (tests hand in threads that misbehave).
+   */
+  constructor(
+    private readonly maxPending = 8,
+    private readonly spawn: () => Worker = spawnPreviewThread,
+  ) {}
 
   /** Previews accepted and not yet answered. */
   get pending(): number {
@@ -76,6 +88,14 @@ export class PreviewThread {
   async run(job: PreviewJob): Promise<PreviewFigures> {
     if (this.active >= this.maxPending) {
       throw new PreviewBusyError(1, `The preview is busy: ${this.active} previews are being computed or wait their turn. Wait a second and move the slider again.`);
+    }
+    const pauseMs = this.worker ? 0 : this.restartAt - Date.now();
+    if (pauseMs > 0) {
+      const seconds = Math.ceil(pauseMs / 1000);
+      throw new PreviewBusyError(
+        seconds,
+        `The horizon preview stopped after a failure (logged) and restarts in ${seconds} s. Try again then, or make a full plan with this horizon: it runs in the background.`,
+      );
     }
     this.active++;
     try {
@@ -100,7 +120,7 @@ export class PreviewThread {
 
   private thread(): Worker {
     if (this.worker) return this.worker;
-    const worker = spawnPreviewThread();
+    const worker = this.spawn();
     // An idle thread must not keep a process (a test run, a script) alive; open requests keep their sockets.
     worker.unref();
     worker.on('message', (reply: PreviewReply) => this.settle(reply));
@@ -122,6 +142,7 @@ export class PreviewThread {
 
   private settle(reply: PreviewReply): void {
     const waiting = this.waiting.get(reply.id);
+    this.crashes = 0; // it answers: it loaded and works
     if (!waiting) return;
     this.waiting.delete(reply.id);
     if (reply.type === 'miss') waiting.resolve('miss');
@@ -141,7 +162,12 @@ export class PreviewThread {
   private ended(worker: Worker, error: Error | null): void {
     if (this.worker !== worker) return;
     this.worker = null;
-    if (error) logger.error('The horizon preview thread stopped; the next preview starts a new one', error);
+    if (error) {
+      this.crashes++;
+      const pauseMs = Math.min(LONGEST_PAUSE_MS, FIRST_PAUSE_MS * 2 ** (this.crashes - 1));
+      this.restartAt = Date.now() + pauseMs;
+      logger.error(`The horizon preview thread stopped (${this.crashes} in a row); a new one starts with a preview after ${pauseMs / 1000} s`, error);
+    }
     const held = [...this.waiting.values()];
     this.waiting.clear();
     for (const w of held) w.reject(new PreviewBusyError(1, 'The horizon preview stopped while computing. Move the slider again in a second.'));
