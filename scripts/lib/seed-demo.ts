@@ -5,16 +5,17 @@
 import { closeDb, initDb } from '../../server/db/client';
 import { seedDemoAccounts } from '../../server/users/demo-accounts';
 import { seedDemoSite } from '../../server/sites/demo-site';
+import { seedDemoPlans } from '../../server/plans/demo-plans';
 
-type Seeder = (log: (m: string) => void) => Promise<void>;
+type Seeder = (log: (m: string) => void, databaseUrl: string) => Promise<void>;
 
-/** Seeders run in order: accounts first, then sites, batteries, profiles. */
-const seeders: Seeder[] = [seedDemoAccounts, seedDemoSite];
+/** Seeders run in order: accounts first, then sites, batteries, profiles, then plans and a study. */
+const seeders: Seeder[] = [seedDemoAccounts, seedDemoSite, seedDemoPlans];
 
 export async function seedDemo(url: string, log: (m: string) => void): Promise<void> {
   initDb(url, 2);
   try {
-    for (const seed of seeders) await seed(log);
+    for (const seed of seeders) await seed(log, url);
   } finally {
     await closeDb();
   }

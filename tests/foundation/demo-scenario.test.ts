@@ -1,0 +1,97 @@
+/**
+ * The demo scenario `npm start` loads: on a fresh database it holds plans in every
+ * state of the sign-off and a finished horizon study, computed through the real
+ * job path; a second load adds nothing.
+ */
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import pg from 'pg';
+import { ensureDatabase, migrateDatabase } from '../../scripts/lib/database';
+import { seedDemo } from '../../scripts/lib/seed-demo';
+import { stopFakeSmtp } from '../../server/mail/mail.service';
+import { testDatabaseUrl } from '../support/database-url';
+
+const scratchName = `slackwater_demo_${process.pid}_${Date.now()}`;
+const urlFor = (name: string) => {
+  const url = new URL(testDatabaseUrl());
+  url.pathname = `/${name}`;
+  return url.toString();
+};
+const scratchUrl = urlFor(scratchName);
+
+async function query<T extends pg.QueryResultRow>(text: string, url = scratchUrl) {
+  const client = new pg.Client({ connectionString: url });
+  await client.connect();
+  try {
+    return (await client.query<T>(text)).rows;
+  } finally {
+    await client.end();
+  }
+}
+
+interface PlanRow {
+  id: string;
+  status: string;
+  horizon_hours: number;
+  terminal_rule: string;
+  initial_soc_pct: number;
+  source: string;
+  soc_plan: string | null;
+  end_soc: number | null;
+  checksum: string | null;
+  submitted_by: string | null;
+  approved_by: string | null;
+  day: string;
+}
+
+const plansQuery = `
+  select id, status, horizon_hours, terminal_rule, initial_soc_pct, inputs->>'initialSocSource' as source,
+         inputs->>'initialSocPlanId' as soc_plan, (results->'summary'->>'endSocPct')::float8 as end_soc, checksum,
+         submitted_by, approved_by, to_char(delivery_start at time zone 'Europe/Berlin', 'YYYY-MM-DD') as day
+  from plans order by delivery_start, horizon_hours, terminal_rule`;
+
+describe('the demo scenario', () => {
+  beforeAll(async () => {
+    await ensureDatabase(scratchUrl);
+    await migrateDatabase(scratchUrl);
+  }, 60_000);
+  afterAll(async () => {
+    await stopFakeSmtp();
+    await query(`drop database if exists "${scratchName}" with (force)`, urlFor('postgres'));
+  });
+
+  it('holds an approved plan, the next day awaiting sign-off from its end SoC, four horizons of one day and a finished study; a second load adds nothing', async () => {
+    await seedDemo(scratchUrl, () => undefined);
+    const plans = await query<PlanRow>(plansQuery);
+    expect(plans.map((p) => [p.day, p.status, p.horizon_hours, p.terminal_rule])).toEqual([
+      ['2026-11-30', 'approved', 48, 'steady-value'],
+      ['2026-12-01', 'submitted', 48, 'steady-value'],
+      ['2026-12-02', 'draft', 24, 'free'],
+      ['2026-12-02', 'draft', 24, 'steady-value'],
+      ['2026-12-02', 'draft', 48, 'steady-value'],
+      ['2026-12-02', 'draft', 168, 'steady-value'],
+    ]);
+    const [approved, today, shortFree] = plans;
+    // Sign-off is segregation of duties (SECURITY.md, ASVS 4.0.3 4.3.3): another person approved, with a SHA-256 checksum.
+    expect(approved!.checksum).toMatch(/^[0-9a-f]{64}$/);
+    expect(approved!.approved_by).not.toBe(approved!.submitted_by);
+    // The next day starts from the approved schedule's end SoC (the plan form's default rule).
+    expect(today).toMatchObject({ source: 'last-approved-plan', soc_plan: approved!.id });
+    expect(today!.initial_soc_pct).toBeCloseTo(approved!.end_soc!, 9);
+    // [D] A free end values nothing left after the horizon, so with positive prices the
+    // battery is emptied to its minimum SoC by the end of a 24 h horizon (the leaving arc).
+    const [battery] = await query<{ soc_min_pct: number }>('select soc_min_pct from batteries');
+    expect(shortFree!.end_soc).toBeCloseTo(battery!.soc_min_pct, 6);
+
+    const studies = await query<{ state: string; runs: number }>(
+      `select j.state, jsonb_array_length(s.results->'runs') as runs from horizon_studies s join job_progress j on j.job_id = s.job_id`,
+    );
+    // [D] Six horizons times two terminal rules.
+    expect(studies).toEqual([{ state: 'completed', runs: 12 }]);
+    const mail = await query<{ to: string; subject: string }>('select "to", subject from mail_outbox order by id');
+    expect(mail.filter((m) => m.to === 'approver@slackwater.example' && /^Plan awaiting your sign-off/.test(m.subject))).toHaveLength(2);
+
+    await seedDemo(scratchUrl, () => undefined);
+    expect(await query<PlanRow>(plansQuery)).toEqual(plans);
+    expect(await query('select id from horizon_studies')).toHaveLength(1);
+  }, 240_000);
+});
