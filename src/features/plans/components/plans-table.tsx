@@ -1,14 +1,12 @@
 import { Link } from 'react-router-dom';
 import type { Plan } from '@shared/schemas/plan';
-import { useRunSourceLists } from '@/components/run-source-fields';
-import { formatLocalTime, formatMoney, formatPercent } from '@/lib/format';
+import { useSiteTime } from '@/components/use-site-time';
+import { formatMoney, formatPercent } from '@/lib/format';
 
 /** One row per plan: window, horizon, status, the job and the headline figures. */
 export function PlansTable({ plans }: { plans: Plan[] }) {
   // Windows in each site's own local time: planners think in the site's clock, and sites may differ.
-  const { sites } = useRunSourceLists('');
-  const zoneOf = (siteId: string) => sites.data?.find((s) => s.id === siteId)?.timezone ?? 'UTC';
-  const local = (iso: string, siteId: string) => formatLocalTime(Date.parse(iso), zoneOf(siteId));
+  const { local } = useSiteTime();
   return (
     <div className="overflow-x-auto">
       <table className="w-full rounded bg-white text-left text-sm shadow-sm">

@@ -2,10 +2,12 @@ import { Link } from 'react-router-dom';
 import { EmptyState, ErrorState, LoadingState } from '@/components/query-state';
 import { usePendingSignOffs } from '../api/get-pending-sign-offs';
 import { formatMoment } from '@/lib/format';
+import { useSiteTime } from '@/components/use-site-time';
 
 /** Submitted plans the signed-in approver may sign off (never their own submissions), oldest first. */
 export function PendingSignOffList({ enabled = true }: { enabled?: boolean }) {
   const query = usePendingSignOffs(enabled);
+  const { local } = useSiteTime();
   if (!enabled) return null;
   if (query.isPending) return <LoadingState label="Loading plans awaiting your sign-off…" />;
   if (query.isError) return <ErrorState error={query.error} onRetry={() => void query.refetch()} />;
@@ -33,7 +35,7 @@ export function PendingSignOffList({ enabled = true }: { enabled?: boolean }) {
               <td className="px-3 py-2">{p.siteName}</td>
               <td className="px-3 py-2">{p.batteryName}</td>
               <td className="px-3 py-2">
-                {formatMoment(p.deliveryStart)} – {formatMoment(p.deliveryEnd)}
+                {local(p.deliveryStart, p.siteId)} – {local(p.deliveryEnd, p.siteId)}
               </td>
               <td className="px-3 py-2">{p.submittedBy.name ?? p.submittedBy.email}</td>
               <td className="px-3 py-2">{p.submittedAt ? formatMoment(p.submittedAt) : ''}</td>

@@ -4,6 +4,7 @@ import type { JobState } from '@shared/schemas/job';
 import { inputClass } from '@/components/form-field';
 import { EmptyState, ErrorState, LoadingState } from '@/components/query-state';
 import { SiteFilter } from '@/components/run-source-fields';
+import { useSiteTime } from '@/components/use-site-time';
 import { useCan } from '@/lib/authorization';
 import { formatPercent } from '@/lib/format';
 import { useStudies } from '../api/get-studies';
@@ -16,6 +17,7 @@ export function StudiesPage() {
   const siteId = params.get('siteId') ?? undefined;
   const status = (params.get('status') as JobState | 'active' | null) ?? undefined;
   const studies = useStudies({ siteId, status });
+  const { local } = useSiteTime();
   const setFilter = (key: string, value: string) => {
     const next = new URLSearchParams(params);
     if (value) next.set(key, value);
@@ -47,7 +49,7 @@ export function StudiesPage() {
       ) : (
         <table className="w-full rounded bg-white text-left text-sm shadow-sm">
           <thead className="bg-ink-100 text-ink-700">
-            <tr>{['Battery', 'Period (UTC)', 'Horizons', 'State', 'Recommendation'].map((h) => <th key={h} scope="col" className="px-2 py-1.5">{h}</th>)}</tr>
+            <tr>{['Battery', 'Period (site time)', 'Horizons', 'State', 'Recommendation'].map((h) => <th key={h} scope="col" className="px-2 py-1.5">{h}</th>)}</tr>
           </thead>
           <tbody>
             {studies.data.map((s) => (
@@ -56,7 +58,7 @@ export function StudiesPage() {
                   <Link to={`/studies/${s.id}`} className="font-semibold text-seaglass-700 underline">{s.batteryName}</Link>
                   <span className="block text-xs text-ink-500">{s.siteName}</span>
                 </td>
-                <td className="px-2 py-1">{s.start.slice(0, 10)} – {s.end.slice(0, 10)}</td>
+                <td className="px-2 py-1">{local(s.start, s.siteId)} – {local(s.end, s.siteId)}</td>
                 <td className="px-2 py-1">{s.horizonsHours.join(', ')} h × {s.terminalRules.join(', ')}</td>
                 <td className="px-2 py-1">{s.status === 'running' ? `running ${formatPercent(s.job?.shareDone)}` : s.status}</td>
                 <td className="px-2 py-1">{s.recommendation?.horizonHours != null ? `${s.recommendation.horizonHours} h, ${s.recommendation.terminal}` : '–'}</td>
