@@ -97,25 +97,26 @@ export async function seedDemoPlans(log: (m: string) => void, databaseUrl: strin
       databaseUrl,
     );
 
-    // Yesterday's schedule, signed off.
+    // Friday's schedule, signed off.
     const approved = await computed(
-      await queuePlan({ deliveryStart: day('2026-11-30'), deliveryEnd: day('2026-12-01'), horizonHours: 48, terminalRule: 'steady-value', initialSocPct: 50 }),
+      await queuePlan({ deliveryStart: day('2026-12-04'), deliveryEnd: day('2026-12-05'), horizonHours: 48, terminalRule: 'steady-value', initialSocPct: 50 }),
     );
     const submitted = await submitPlan(signOffActor('planner'), approved.id, { version: approved.version, comment: 'Steady-value end, two days ahead.' });
     await approvePlan(signOffActor('approver'), approved.id, { version: submitted.version, comment: 'Checked against the site limits and the operator’s instructions.' });
 
-    // Today's plan starts where the approved one ends, and waits for the approver; tomorrow
-    // has four horizons side by side (the short free-end plan empties the battery at its end).
-    const todayId = await queuePlan({ deliveryStart: day('2026-12-01'), deliveryEnd: day('2026-12-02'), horizonHours: 48, terminalRule: 'steady-value' });
-    const tomorrow: [number, 'free' | 'steady-value'][] = [[24, 'free'], [24, 'steady-value'], [48, 'steady-value'], [168, 'steady-value']];
-    const tomorrowIds = await Promise.all(
-      tomorrow.map(([horizonHours, terminalRule]) => queuePlan({ deliveryStart: day('2026-12-02'), deliveryEnd: day('2026-12-03'), horizonHours, terminalRule })),
+    // Saturday's plan starts where the approved one ends, and waits for the approver. Sunday has
+    // four horizons side by side: the short free-end plan sells off the energy that the longer
+    // ones keep for Monday morning (the leaving arc).
+    const saturdayId = await queuePlan({ deliveryStart: day('2026-12-05'), deliveryEnd: day('2026-12-06'), horizonHours: 48, terminalRule: 'steady-value' });
+    const sunday: [number, 'free' | 'steady-value'][] = [[24, 'free'], [24, 'steady-value'], [48, 'steady-value'], [168, 'steady-value']];
+    const sundayIds = await Promise.all(
+      sunday.map(([horizonHours, terminalRule]) => queuePlan({ deliveryStart: day('2026-12-06'), deliveryEnd: day('2026-12-07'), horizonHours, terminalRule })),
     );
-    const today = await computed(todayId);
-    await submitPlan(signOffActor('planner'), today.id, { version: today.version, comment: 'Same settings as yesterday.' });
-    await Promise.all(tomorrowIds.map(computed));
+    const saturday = await computed(saturdayId);
+    await submitPlan(signOffActor('planner'), saturday.id, { version: saturday.version, comment: 'Same settings as yesterday.' });
+    await Promise.all(sundayIds.map(computed));
     await settled(() => getStudy(study.study.id), 'horizon study');
-    log('Demo plans (approved, awaiting sign-off, four horizons of one day) and a horizon study computed.');
+    log('Demo plans (approved, awaiting sign-off, four horizons of one Sunday) and a horizon study computed.');
   } finally {
     await worker.stop();
     await stopBoss();

@@ -63,12 +63,12 @@ describe('the demo scenario', () => {
     await seedDemo(scratchUrl, () => undefined);
     const plans = await query<PlanRow>(plansQuery);
     expect(plans.map((p) => [p.day, p.status, p.horizon_hours, p.terminal_rule])).toEqual([
-      ['2026-11-30', 'approved', 48, 'steady-value'],
-      ['2026-12-01', 'submitted', 48, 'steady-value'],
-      ['2026-12-02', 'draft', 24, 'free'],
-      ['2026-12-02', 'draft', 24, 'steady-value'],
-      ['2026-12-02', 'draft', 48, 'steady-value'],
-      ['2026-12-02', 'draft', 168, 'steady-value'],
+      ['2026-12-04', 'approved', 48, 'steady-value'],
+      ['2026-12-05', 'submitted', 48, 'steady-value'],
+      ['2026-12-06', 'draft', 24, 'free'],
+      ['2026-12-06', 'draft', 24, 'steady-value'],
+      ['2026-12-06', 'draft', 48, 'steady-value'],
+      ['2026-12-06', 'draft', 168, 'steady-value'],
     ]);
     const [approved, today, shortFree] = plans;
     // Sign-off is segregation of duties (SECURITY.md, ASVS 4.0.3 4.3.3): another person approved, with a SHA-256 checksum.
@@ -81,6 +81,8 @@ describe('the demo scenario', () => {
     // battery is emptied to its minimum SoC by the end of a 24 h horizon (the leaving arc).
     const [battery] = await query<{ soc_min_pct: number }>('select soc_min_pct from batteries');
     expect(shortFree!.end_soc).toBeCloseTo(battery!.soc_min_pct, 6);
+    // The Sunday was chosen so the horizons differ: the 168 h plan keeps energy for Monday morning.
+    expect(plans[5]!.end_soc!).toBeGreaterThan(shortFree!.end_soc! + 5);
 
     const studies = await query<{ state: string; runs: number }>(
       `select j.state, jsonb_array_length(s.results->'runs') as runs from horizon_studies s join job_progress j on j.job_id = s.job_id`,
