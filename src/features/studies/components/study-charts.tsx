@@ -2,20 +2,14 @@
  * Gap to the reference path and near-steady share against the horizon, one
  * line per terminal rule (default export: loaded lazily with the chart libraries).
  */
-import { Axis, GlyphSeries, Grid, LineSeries, XYChart, buildChartTheme } from '@visx/xychart';
+import { Axis, GlyphSeries, LineSeries } from '@visx/xychart';
 import type { StudyRun } from '@shared/schemas/study';
+import { ChartFigure, ChartPlot } from '@/components/charts/chart-frame';
+import { chartThemeWith, colours, seriesPalette } from '@/components/charts/chart-theme';
 
-const palette = ['#13233f', '#2f9c81', '#e0961f', '#52698f'];
-const theme = buildChartTheme({
-  backgroundColor: '#ffffff',
-  colors: palette,
-  gridColor: '#e3e9f2',
-  gridColorDark: '#a4b3cc',
-  tickLength: 4,
-  svgLabelSmall: { fill: '#2a4470', fontFamily: 'Barlow, sans-serif', fontSize: 11 },
-  svgLabelBig: { fill: '#13233f', fontFamily: 'Barlow, sans-serif', fontSize: 12 },
-});
-const margin = { top: 12, right: 16, bottom: 40, left: 64 };
+// One colour per terminal rule (a study has at most four), also the theme's series colours.
+const palette = seriesPalette.slice(0, 4);
+const theme = chartThemeWith(palette);
 
 export interface StudyChartsProps {
   runs: StudyRun[];
@@ -26,27 +20,23 @@ function ByHorizon({ runs, title, label, value, extra }: { runs: StudyRun[]; tit
   const rules = [...new Set(runs.map((r) => r.terminal))];
   const horizons = [...new Set(runs.map((r) => r.horizonHours))].sort((a, b) => a - b);
   return (
-    <figure className="rounded bg-white p-2 shadow-sm">
-      <figcaption className="px-2 text-sm font-medium text-ink-800">{title}</figcaption>
-      {/* XYChart takes its width from its parent, which needs the height or the chart collapses onto what follows. */}
-      <div style={{ height: 240 }}>
-        <XYChart height={240} theme={theme} xScale={{ type: 'log', domain: [horizons[0] ?? 1, horizons.at(-1) ?? 2] }} yScale={{ type: 'linear', nice: true, zero: true }} margin={margin}
-          accessibilityLabel={`${title}; the numbers are in the table of runs`}>
-          <Grid columns={false} numTicks={4} />
-          <Axis orientation="bottom" tickValues={horizons} tickFormat={(h: number) => `${h} h`} label="horizon" />
-          <Axis orientation="left" numTicks={4} label={label} />
-          {extra && (
-            <LineSeries dataKey={extra.text} data={horizons.map((h) => ({ h }))} xAccessor={(d) => d.h} yAccessor={() => extra.y} stroke="#e0961f" strokeDasharray="4 3" />
-          )}
-          {rules.map((rule, i) => {
-            const data = runs.filter((r) => r.terminal === rule && value(r) !== null).sort((a, b) => a.horizonHours - b.horizonHours);
-            return [
-              <LineSeries key={`${rule}-line`} dataKey={rule} data={data} xAccessor={(r) => r.horizonHours} yAccessor={value} stroke={palette[i % palette.length]} strokeWidth={2} />,
-              <GlyphSeries key={`${rule}-dots`} dataKey={`${rule} runs`} data={data} xAccessor={(r) => r.horizonHours} yAccessor={value} colorAccessor={() => palette[i % palette.length]} size={7} />,
-            ];
-          })}
-        </XYChart>
-      </div>
+    <ChartFigure caption={title}>
+      {/* Taller bottom margin: room for the "horizon" axis label. */}
+      <ChartPlot height={240} gridTicks={4} theme={theme} xScale={{ type: 'log', domain: [horizons[0] ?? 1, horizons.at(-1) ?? 2] }} yScale={{ type: 'linear', nice: true, zero: true }} margin={{ bottom: 40 }}
+        accessibilityLabel={`${title}; the numbers are in the table of runs`}>
+        <Axis orientation="bottom" tickValues={horizons} tickFormat={(h: number) => `${h} h`} label="horizon" />
+        <Axis orientation="left" numTicks={4} label={label} />
+        {extra && (
+          <LineSeries dataKey={extra.text} data={horizons.map((h) => ({ h }))} xAccessor={(d) => d.h} yAccessor={() => extra.y} stroke={colours.amber} strokeDasharray="4 3" />
+        )}
+        {rules.map((rule, i) => {
+          const data = runs.filter((r) => r.terminal === rule && value(r) !== null).sort((a, b) => a.horizonHours - b.horizonHours);
+          return [
+            <LineSeries key={`${rule}-line`} dataKey={rule} data={data} xAccessor={(r) => r.horizonHours} yAccessor={value} stroke={palette[i % palette.length]} strokeWidth={2} />,
+            <GlyphSeries key={`${rule}-dots`} dataKey={`${rule} runs`} data={data} xAccessor={(r) => r.horizonHours} yAccessor={value} colorAccessor={() => palette[i % palette.length]} size={7} />,
+          ];
+        })}
+      </ChartPlot>
       <ul className="flex flex-wrap gap-4 px-2 text-xs text-ink-700">
         {rules.map((rule, i) => (
           <li key={rule} className="flex items-center gap-1">
@@ -55,7 +45,7 @@ function ByHorizon({ runs, title, label, value, extra }: { runs: StudyRun[]; tit
         ))}
         {extra && <li className="text-amber-600">dashed: {extra.text}</li>}
       </ul>
-    </figure>
+    </ChartFigure>
   );
 }
 

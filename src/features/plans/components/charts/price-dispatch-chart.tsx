@@ -1,9 +1,10 @@
 /** Price (line) over charge and discharge (bars, discharge below zero); the lookahead faded. */
-import { Axis, BarSeries, Grid, LineSeries, Tooltip, XYChart } from '@visx/xychart';
+import { Axis, BarSeries, LineSeries } from '@visx/xychart';
+import { ChartFigure, ChartPlot } from '@/components/charts/chart-frame';
+import { colours, lookaheadLine } from '@/components/charts/chart-theme';
+import { NearestTooltip } from '@/components/charts/chart-tooltip';
 import { formatLocalTime, formatNumber } from '@/lib/format';
-import { chartMargin, chartTheme, colours, lookaheadLine } from './chart-theme';
 import { timeTick, type SplitSteps, type StepPoint } from './chart-data';
-import { ChartLegend } from './soc-chart';
 
 const x = (p: StepPoint) => new Date(p.t);
 
@@ -12,49 +13,43 @@ export function PriceDispatchChart({ split, timeZone, currency }: { split: Split
   const part = (delivery: boolean) => split.all.filter((p) => p.step.delivery === delivery);
   const every = Math.max(1, Math.ceil(split.all.length / 8));
   const tickValues = split.all.filter((_, i) => i % every === 0).map((p) => p.t);
-  const tooltip = (p: StepPoint) => (
-    <span className="text-xs">
-      {formatLocalTime(p.t, timeZone)} {p.step.delivery ? '' : '(lookahead)'}
-      <br />
-      price {formatNumber(p.step.priceImport, 2)} {currency}/MWh · charge {formatNumber(p.step.chargeKw, 0)} kW · discharge {formatNumber(p.step.dischargeKw, 0)} kW
-    </span>
-  );
   return (
-    <figure className="space-y-1 rounded bg-white p-2 shadow-sm">
-      <figcaption className="px-2 text-sm font-medium text-ink-800">Price and dispatch</figcaption>
-      {/* XYChart takes its width from its parent, which needs the height or the chart collapses onto what follows. */}
-      <div style={{ height: 180 }}>
-        <XYChart height={180} theme={chartTheme} xScale={{ type: 'time' }} yScale={{ type: 'linear', nice: true, zero: false }} margin={chartMargin}
-          accessibilityLabel={`Price in ${currency}/MWh per step; the numbers are in the schedule table`}>
-          <Grid columns={false} numTicks={4} />
-          <Axis orientation="left" numTicks={4} label={`${currency}/MWh`} />
-          <LineSeries dataKey="price" data={split.delivery} xAccessor={x} yAccessor={(p) => p.step.priceImport} stroke={colours.ink} />
-          {split.lookahead.length > 0 && (
-            <LineSeries dataKey="price (lookahead)" data={split.lookahead} xAccessor={x} yAccessor={(p) => p.step.priceImport} stroke={colours.inkSoft} {...lookaheadLine} />
+    <ChartFigure
+      caption="Price and dispatch"
+      className="space-y-1"
+      legend={[
+        { colour: colours.ink, label: 'price' },
+        { colour: colours.seaglass, label: 'charge (above zero)' },
+        { colour: colours.inkSoft, label: 'discharge (below zero)' },
+        { colour: colours.inkFaint, label: 'lookahead: dashed price, pale bars', dashed: true },
+      ]}
+    >
+      <ChartPlot height={180} gridTicks={4} xScale={{ type: 'time' }} yScale={{ type: 'linear', nice: true, zero: false }}
+        accessibilityLabel={`Price in ${currency}/MWh per step; the numbers are in the schedule table`}>
+        <Axis orientation="left" numTicks={4} label={`${currency}/MWh`} />
+        <LineSeries dataKey="price" data={split.delivery} xAccessor={x} yAccessor={(p) => p.step.priceImport} stroke={colours.ink} />
+        {split.lookahead.length > 0 && (
+          <LineSeries dataKey="price (lookahead)" data={split.lookahead} xAccessor={x} yAccessor={(p) => p.step.priceImport} stroke={colours.inkSoft} {...lookaheadLine} />
+        )}
+        <NearestTooltip<StepPoint>
+          render={({ datum: p }) => (
+            <>
+              {formatLocalTime(p.t, timeZone)} {p.step.delivery ? '' : '(lookahead)'}
+              <br />
+              price {formatNumber(p.step.priceImport, 2)} {currency}/MWh · charge {formatNumber(p.step.chargeKw, 0)} kW · discharge {formatNumber(p.step.dischargeKw, 0)} kW
+            </>
           )}
-          <Tooltip<StepPoint> snapTooltipToDatumX showVerticalCrosshair renderTooltip={({ tooltipData }) => (tooltipData?.nearestDatum ? tooltip(tooltipData.nearestDatum.datum) : null)} />
-        </XYChart>
-      </div>
-      <div style={{ height: 170 }}>
-        <XYChart height={170} theme={chartTheme} xScale={{ type: 'band', paddingInner: 0.15 }} yScale={{ type: 'linear', nice: true }} margin={chartMargin}
-          accessibilityLabel="Charge (above zero) and discharge (below zero) in kW per step">
-          <Grid columns={false} numTicks={4} />
-          <Axis orientation="bottom" tickValues={tickValues} tickFormat={(v: number) => timeTick(timeZone)(v)} />
-          <Axis orientation="left" numTicks={4} label="kW" />
-          <BarSeries dataKey="charge" data={part(true)} xAccessor={(p) => p.t} yAccessor={(p) => p.step.chargeKw} colorAccessor={() => colours.seaglass} />
-          <BarSeries dataKey="discharge" data={part(true)} xAccessor={(p) => p.t} yAccessor={(p) => -p.step.dischargeKw} colorAccessor={() => colours.inkSoft} />
-          <BarSeries dataKey="charge (lookahead)" data={part(false)} xAccessor={(p) => p.t} yAccessor={(p) => p.step.chargeKw} colorAccessor={() => colours.seaglassSoft} />
-          <BarSeries dataKey="discharge (lookahead)" data={part(false)} xAccessor={(p) => p.t} yAccessor={(p) => -p.step.dischargeKw} colorAccessor={() => colours.inkFaint} />
-        </XYChart>
-      </div>
-      <ChartLegend
-        items={[
-          { colour: colours.ink, label: 'price' },
-          { colour: colours.seaglass, label: 'charge (above zero)' },
-          { colour: colours.inkSoft, label: 'discharge (below zero)' },
-          { colour: colours.inkFaint, label: 'lookahead: dashed price, pale bars', dashed: true },
-        ]}
-      />
-    </figure>
+        />
+      </ChartPlot>
+      <ChartPlot height={170} gridTicks={4} xScale={{ type: 'band', paddingInner: 0.15 }} yScale={{ type: 'linear', nice: true }}
+        accessibilityLabel="Charge (above zero) and discharge (below zero) in kW per step">
+        <Axis orientation="bottom" tickValues={tickValues} tickFormat={(v: number) => timeTick(timeZone)(v)} />
+        <Axis orientation="left" numTicks={4} label="kW" />
+        <BarSeries dataKey="charge" data={part(true)} xAccessor={(p) => p.t} yAccessor={(p) => p.step.chargeKw} colorAccessor={() => colours.seaglass} />
+        <BarSeries dataKey="discharge" data={part(true)} xAccessor={(p) => p.t} yAccessor={(p) => -p.step.dischargeKw} colorAccessor={() => colours.inkSoft} />
+        <BarSeries dataKey="charge (lookahead)" data={part(false)} xAccessor={(p) => p.t} yAccessor={(p) => p.step.chargeKw} colorAccessor={() => colours.seaglassSoft} />
+        <BarSeries dataKey="discharge (lookahead)" data={part(false)} xAccessor={(p) => p.t} yAccessor={(p) => -p.step.dischargeKw} colorAccessor={() => colours.inkFaint} />
+      </ChartPlot>
+    </ChartFigure>
   );
 }
