@@ -16,7 +16,7 @@ import { loadConfig } from '../config';
 import { listBatteries } from '../batteries/batteries.repo';
 import { startJobWorker } from '../jobs/job-worker';
 import { stopBoss } from '../jobs/boss';
-import { configureMail } from '../mail/mail.service';
+import { configureMail, stopFakeSmtp } from '../mail/mail.service';
 import { profiles } from '../profiles/profiles.schema';
 import { findSiteByName } from '../sites/sites.repo';
 import { DEMO_BATTERY_NAME, DEMO_SITE_NAME } from '../sites/demo-site';
@@ -118,7 +118,9 @@ export async function seedDemoPlans(log: (m: string) => void, databaseUrl: strin
     await settled(() => getStudy(study.study.id), 'horizon study');
     log('Demo plans (approved, awaiting sign-off, four horizons of one Sunday) and a horizon study computed.');
   } finally {
+    // Nothing may stay open, or the seeding process (npm start, npm test) never exits.
     await worker.stop();
     await stopBoss();
+    await stopFakeSmtp();
   }
 }

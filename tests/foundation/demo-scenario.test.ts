@@ -1,13 +1,12 @@
 /**
- * The demo scenario `npm start` loads: on a fresh database it holds plans in every
- * state of the sign-off and a finished horizon study, computed through the real
- * job path; a second load adds nothing.
+ * The demo scenario `npm start` loads, run the way it runs it (scripts/prepare-demo.ts
+ * in its own process): on a fresh database it holds plans in every state of the
+ * sign-off and a finished horizon study, computed through the real job path; the
+ * process exits by itself (nothing left open); a second load adds nothing.
  */
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { spawn } from 'node:child_process';
+import { afterAll, describe, expect, it } from 'vitest';
 import pg from 'pg';
-import { ensureDatabase, migrateDatabase } from '../../scripts/lib/database';
-import { seedDemo } from '../../scripts/lib/seed-demo';
-import { stopFakeSmtp } from '../../server/mail/mail.service';
 import { testDatabaseUrl } from '../support/database-url';
 
 const scratchName = `slackwater_demo_${process.pid}_${Date.now()}`;
@@ -49,18 +48,36 @@ const plansQuery = `
          submitted_by, approved_by, to_char(delivery_start at time zone 'Europe/Berlin', 'YYYY-MM-DD') as day
   from plans order by delivery_start, horizon_hours, terminal_rule`;
 
+/** Runs the demo preparation as `npm start` does; rejects if it fails or is still running after `limitMs`. */
+function prepareDemo(limitMs = 150_000): Promise<string> {
+  return new Promise((resolve, reject) => {
+    const child = spawn(process.execPath, ['--import', 'tsx', 'scripts/prepare-demo.ts'], {
+      env: { ...process.env, DATABASE_URL: scratchUrl, LOG_LEVEL: 'error' },
+      stdio: ['ignore', 'pipe', 'pipe'],
+    });
+    let output = '';
+    child.stdout.on('data', (d: Buffer) => (output += d.toString()));
+    child.stderr.on('data', (d: Buffer) => (output += d.toString()));
+    // Not a speed check: a process that never exits (an open server or timer) would hang `npm start` and `npm test`.
+    const guard = setTimeout(() => {
+      child.kill('SIGKILL');
+      reject(new Error(`the demo preparation had not exited after ${limitMs / 1000} s; something kept it open:\n${output}`));
+    }, limitMs);
+    child.on('exit', (code) => {
+      clearTimeout(guard);
+      if (code === 0) resolve(output);
+      else reject(new Error(`the demo preparation failed (${code}):\n${output}`));
+    });
+  });
+}
+
 describe('the demo scenario', () => {
-  beforeAll(async () => {
-    await ensureDatabase(scratchUrl);
-    await migrateDatabase(scratchUrl);
-  }, 60_000);
   afterAll(async () => {
-    await stopFakeSmtp();
     await query(`drop database if exists "${scratchName}" with (force)`, urlFor('postgres'));
   });
 
-  it('holds an approved plan, the next day awaiting sign-off from its end SoC, four horizons of one day and a finished study; a second load adds nothing', async () => {
-    await seedDemo(scratchUrl, () => undefined);
+  it('holds an approved plan, the next day awaiting sign-off from its end SoC, four horizons of one Sunday and a finished study; the process exits; a second load adds nothing', async () => {
+    expect(await prepareDemo()).toMatch(/Demo plans \(approved, awaiting sign-off, four horizons of one Sunday\) and a horizon study computed/);
     const plans = await query<PlanRow>(plansQuery);
     expect(plans.map((p) => [p.day, p.status, p.horizon_hours, p.terminal_rule])).toEqual([
       ['2026-12-04', 'approved', 48, 'steady-value'],
@@ -92,8 +109,8 @@ describe('the demo scenario', () => {
     const mail = await query<{ to: string; subject: string }>('select "to", subject from mail_outbox order by id');
     expect(mail.filter((m) => m.to === 'approver@slackwater.example' && /^Plan awaiting your sign-off/.test(m.subject))).toHaveLength(2);
 
-    await seedDemo(scratchUrl, () => undefined);
+    expect(await prepareDemo()).toMatch(/Demo plans present/);
     expect(await query<PlanRow>(plansQuery)).toEqual(plans);
     expect(await query('select id from horizon_studies')).toHaveLength(1);
-  }, 240_000);
+  }, 360_000);
 });
