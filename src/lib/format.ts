@@ -6,9 +6,21 @@
 import { createZoneClock, formatInstant } from '@shared/profile-csv';
 import { format } from 'date-fns';
 
+const clocks = new Map<string, ReturnType<typeof createZoneClock>>();
+
+/** One clock per zone: a table of a year of 5-minute values formats 100 000 instants. */
+function zoneClock(timeZone: string) {
+  let clock = clocks.get(timeZone);
+  if (clock === undefined) {
+    clock = createZoneClock(timeZone);
+    clocks.set(timeZone, clock);
+  }
+  return clock;
+}
+
 /** "2026-05-04 17:00 +02:00" in `timeZone` (UTC text when the zone is unknown). */
 export function formatLocalTime(ms: number, timeZone: string): string {
-  const clock = createZoneClock(timeZone);
+  const clock = zoneClock(timeZone);
   if (!clock) return new Date(ms).toISOString();
   const text = formatInstant(ms, clock);
   return `${text.slice(0, 10)} ${text.slice(11, 16)} ${text.slice(19)}`;
@@ -16,7 +28,7 @@ export function formatLocalTime(ms: number, timeZone: string): string {
 
 /** "2026-05-04T17:00" (for datetime-local inputs) in `timeZone`. */
 export function toWallTimeInput(ms: number, timeZone: string): string {
-  const clock = createZoneClock(timeZone);
+  const clock = zoneClock(timeZone);
   return clock ? formatInstant(ms, clock).slice(0, 16) : new Date(ms).toISOString().slice(0, 16);
 }
 
@@ -26,7 +38,7 @@ export function toWallTimeInput(ms: number, timeZone: string): string {
  */
 export function fromWallTimeInput(text: string, timeZone: string): number | null {
   if (!/^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}$/.test(text)) return null;
-  const clock = createZoneClock(timeZone);
+  const clock = zoneClock(timeZone);
   const wall = Date.parse(`${text}:00Z`);
   if (!clock) return wall;
   return clock.instantsOf(wall)[0] ?? null;

@@ -4,7 +4,8 @@ import { FormField, buttonClass, inputClass } from '@/components/form-field';
 import { ErrorState, LoadingState } from '@/components/query-state';
 import { profileOriginalUrl, useProfile } from '../api/get-profile';
 import { downsampleMinMax } from '../lib/downsample';
-import { describeStep, displayUnit, formatLocal, formatNumber } from '../lib/format';
+import { formatLocalTime, formatNumber } from '@/lib/format';
+import { describeStep, displayUnit } from '../lib/format';
 import { localMidnight } from '../lib/local-date';
 import { DeleteProfileButton } from './delete-profile-button';
 import { LazySeriesChart } from './lazy-series-chart';
@@ -35,10 +36,10 @@ export function ProfileDetail({ id, timezone, currency, canEdit, onDeleted }: Pr
     ['Kind', p.kind],
     ['Unit', `${unit}${p.sourceUnit !== p.unit ? ` (uploaded as ${displayUnit(p.sourceUnit, currency)})` : ''}`],
     ['Resolution', describeStep(p.stepMinutes)],
-    ['From', formatLocal(Date.parse(p.start), timezone)],
-    ['To', formatLocal(Date.parse(p.end), timezone)],
+    ['From', formatLocalTime(Date.parse(p.start), timezone)],
+    ['To', formatLocalTime(Date.parse(p.end), timezone)],
     ['Intervals', p.valueCount.toLocaleString()],
-    ['Min / mean / max', `${formatNumber(p.min)} / ${formatNumber(p.mean)} / ${formatNumber(p.max)}`],
+    ['Min / mean / max', `${formatNumber(p.min, 3)} / ${formatNumber(p.mean, 3)} / ${formatNumber(p.max, 3)}`],
     ['Filled by interpolation', p.filledCount.toLocaleString()],
     ['Labels', p.intervalEnding ? 'interval-ending (shifted to starts)' : 'interval-beginning'],
     ['Original file', `${p.originalFilename} (${(p.originalBytes / 1024).toFixed(1)} kB)`],

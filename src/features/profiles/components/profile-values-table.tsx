@@ -2,7 +2,7 @@
 import { useMemo } from 'react';
 import { createColumnHelper, createPaginatedRowModel, rowPaginationFeature, tableFeatures, useTable } from '@tanstack/react-table';
 import { buttonClass, compactSelect } from '@/components/form-field';
-import { formatLocal, formatNumber } from '../lib/format';
+import { formatLocalTime, formatNumber } from '@/lib/format';
 
 interface ValueRow {
   index: number;
@@ -33,7 +33,7 @@ export function ProfileValuesTable({ startMs, stepMinutes, values, filledIndexes
     () =>
       helper.columns([
         helper.accessor('index', { header: '#', cell: (info) => info.getValue() + 1 }),
-        helper.accessor('startMs', { header: `Interval start (${timeZone})`, cell: (info) => formatLocal(info.getValue(), timeZone) }),
+        helper.accessor('startMs', { header: `Interval start (${timeZone})`, cell: (info) => formatLocalTime(info.getValue(), timeZone) }),
         helper.accessor('value', { header: unit, cell: (info) => formatNumber(info.getValue(), 4) }),
         helper.accessor('filled', { header: 'Filled', cell: (info) => (info.getValue() ? 'interpolated' : '') }),
       ]),

@@ -4,7 +4,8 @@ import { PROFILE_KINDS, type ProfileKind } from '@shared/profile-csv';
 import { compactSelect } from '@/components/form-field';
 import { EmptyState, ErrorState, LoadingState } from '@/components/query-state';
 import { useSiteProfiles } from '../api/get-site-profiles';
-import { describeStep, displayUnit, formatLocal } from '../lib/format';
+import { formatLocalTime } from '@/lib/format';
+import { describeStep, displayUnit } from '../lib/format';
 import { formatMoment } from '@/lib/format';
 
 export function ProfilesList({ siteId, timezone, currency }: { siteId: string; timezone: string; currency: string }) {
@@ -47,7 +48,7 @@ export function ProfilesList({ siteId, timezone, currency }: { siteId: string; t
               <td className="px-3 py-2">{p.kind}</td>
               <td className="px-3 py-2">{describeStep(p.stepMinutes)}</td>
               <td className="px-3 py-2 tabular-nums">
-                {formatLocal(Date.parse(p.start), timezone).slice(0, 16)} → {formatLocal(Date.parse(p.end), timezone).slice(0, 16)}
+                {formatLocalTime(Date.parse(p.start), timezone).slice(0, 16)} → {formatLocalTime(Date.parse(p.end), timezone).slice(0, 16)}
               </td>
               <td className="px-3 py-2 text-right tabular-nums">{p.valueCount.toLocaleString()}</td>
               <td className="px-3 py-2 tabular-nums">

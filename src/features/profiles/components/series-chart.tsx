@@ -6,7 +6,7 @@ import { Axis, LineSeries } from '@visx/xychart';
 import { ChartFigure, ChartPlot } from '@/components/charts/chart-frame';
 import { chartThemeWith, colours } from '@/components/charts/chart-theme';
 import { NearestTooltip } from '@/components/charts/chart-tooltip';
-import { formatLocal, formatNumber } from '../lib/format';
+import { formatLocalTime, formatNumber } from '@/lib/format';
 import type { SeriesPoint } from '../lib/downsample';
 
 // A profile is one sea-glass line (DESIGN section 7), where the plans' first series is ink.
@@ -23,7 +23,7 @@ export interface SeriesChartProps {
 }
 
 export default function SeriesChart({ points, timeZone, unit, label, height = 260 }: SeriesChartProps) {
-  const tickDate = (d: Date | number) => formatLocal(typeof d === 'number' ? d : d.getTime(), timeZone).slice(0, 10);
+  const tickDate = (d: Date | number) => formatLocalTime(typeof d === 'number' ? d : d.getTime(), timeZone).slice(0, 10);
   return (
     // The page titles the chart; the caption names it for screen readers.
     <ChartFigure hideCaption caption={`${label} in ${unit}; the numbers are in the table below.`}>
@@ -35,10 +35,10 @@ export default function SeriesChart({ points, timeZone, unit, label, height = 26
         <NearestTooltip<SeriesPoint>
           render={({ datum: p }) => (
             <>
-              {formatLocal(p.t, timeZone)}
+              {formatLocalTime(p.t, timeZone)}
               <br />
               <strong>
-                {formatNumber(p.v)} {unit}
+                {formatNumber(p.v, 3)} {unit}
               </strong>
             </>
           )}

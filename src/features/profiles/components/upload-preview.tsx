@@ -1,6 +1,7 @@
 import type { PreviewState } from '../hooks/use-profile-preview';
 import { downsampleMinMax } from '../lib/downsample';
-import { describeStep, displayUnit, formatLocal, formatNumber } from '../lib/format';
+import { formatLocalTime, formatNumber } from '@/lib/format';
+import { describeStep, displayUnit } from '../lib/format';
 import { LazySeriesChart } from './lazy-series-chart';
 import { UploadIssuesTable } from './upload-issues-table';
 
@@ -39,10 +40,10 @@ function AcceptedPreview({ profile, timezone, currency }: { profile: Accepted; t
   const facts: [string, string][] = [
     ['Delimiter', delimiter],
     ['Resolution', describeStep(profile.stepMinutes)],
-    ['From', formatLocal(profile.startMs, timezone)],
-    ['To', formatLocal(endMs, timezone)],
+    ['From', formatLocalTime(profile.startMs, timezone)],
+    ['To', formatLocalTime(endMs, timezone)],
     ['Intervals', profile.values.length.toLocaleString()],
-    ['Min / max', `${formatNumber(min)} / ${formatNumber(max)} ${unit}`],
+    ['Min / max', `${formatNumber(min, 3)} / ${formatNumber(max, 3)} ${unit}`],
     ['Filled by interpolation', profile.filledIndexes.length.toLocaleString()],
   ];
   return (
