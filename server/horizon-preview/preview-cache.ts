@@ -6,7 +6,7 @@
  * Aligning a year of profiles and solving the steady cycle take far longer than
  * the exact re-plan itself (tenths of a second against milliseconds). Pure: no database.
  */
-import type { PlanInputs } from '@shared/schemas/plan';
+import type { PlanInputs, SteadyDays } from '@shared/schemas/plan';
 import { solveSteadyCycle, type AlignedInputs, type ProfileSeries, type SteadyCycle } from '../engine';
 import { unprocessable } from '../http/app-error';
 import { alignSnapshot } from '../plans/plan-compute';
@@ -56,10 +56,10 @@ export class PreviewCache {
   }
 }
 
-/** The steady cycle of the plan's whole data period, as the plan job solves it. */
-export function steadyOf(source: PreviewSource): SteadyCycle {
+/** The steady cycle of the plan's whole data period over the plan's days, as the plan job solves it. */
+export function steadyOf(source: PreviewSource, days: SteadyDays = 'all'): SteadyCycle {
   if (!source.steady) {
-    const result = solveSteadyCycle(source.aligned);
+    const result = solveSteadyCycle(source.aligned, { days });
     if (!result.ok) throw unprocessable(`The steady cycle cannot be solved for this plan: ${result.issue.message}.`);
     source.steady = result.cycle;
   }

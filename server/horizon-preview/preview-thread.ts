@@ -23,7 +23,7 @@ function answer(request: PreviewRequest): PreviewReply {
   }
   const eligible = previewEligibility(source.aligned, inputs, horizonHours);
   if (!eligible.ok) throw needsExactPath(eligible.reason);
-  const outcome = solvePreview(source.aligned, steadyOf(source), inputs, horizonHours);
+  const outcome = solvePreview(source.aligned, steadyOf(source, inputs.steadyDays), inputs, horizonHours);
   if (!outcome.ok) throw unprocessable(`The plan cannot be solved with a horizon of ${hours(horizonHours)}: ${outcome.message}.`);
   return { id, type: 'done', preview: outcome.preview };
 }

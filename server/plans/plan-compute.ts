@@ -66,6 +66,7 @@ export async function computePlan(input: PlanComputeInput, report: Report): Prom
     terminal: terminal.choice,
     initialSocPct: inputs.initialSocPct,
     bandFraction: inputs.bandPct / 100,
+    steadyDays: inputs.steadyDays ?? 'all',
   });
   if (!outcome.ok) return { ok: false, message: outcome.issue.message };
   report(0.9, 'Writing up the turnpike figures.');

@@ -43,6 +43,7 @@ export async function createPlan(body: PlanCreate, actor: Actor, databaseUrl: st
     initialSocSource: soc.source,
     initialSocPlanId: soc.planId,
     bandPct: DEFAULT_BAND_PCT,
+    steadyDays: body.steadyDays ?? 'all',
   };
 
   const { entityId: planId, jobId } = await createWithJob({
@@ -70,6 +71,7 @@ export async function createPlan(body: PlanCreate, actor: Actor, databaseUrl: st
       terminalRule: body.terminalRule,
       initialSocPct: soc.pct,
       initialSocSource: soc.source,
+      steadyDays: inputs.steadyDays,
     },
   });
   const plan = await getPlan(planId);

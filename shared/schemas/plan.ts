@@ -23,6 +23,21 @@ export const horizonHoursSchema = z
   .gt(0, 'The horizon must be longer than 0 hours.')
   .max(8784, 'The horizon is at most 8784 hours (one year).');
 
+/**
+ * Which local days the steady cycle averages (DESIGN section 3): every day, or only
+ * weekdays (Mon–Fri) or weekend days (Sat–Sun), when the two price shapes differ.
+ */
+export const steadyDaysValues = ['all', 'weekday', 'weekend'] as const;
+export type SteadyDays = (typeof steadyDaysValues)[number];
+export const steadyDaysSchema = z.enum(steadyDaysValues, {
+  error: 'Choose which days the steady cycle averages: all, weekday or weekend.',
+});
+export const steadyDaysLabels: Record<SteadyDays, string> = {
+  all: 'every day',
+  weekday: 'weekdays (Mon–Fri)',
+  weekend: 'weekend days (Sat–Sun)',
+};
+
 export const socPctSchema = z
   .number({ error: 'Give the SoC in % of nameplate energy.' })
   .min(0, 'The SoC is at least 0 %.')
@@ -39,6 +54,7 @@ export const planCreateSchema = z
     horizonHours: horizonHoursSchema,
     terminalRule: terminalRuleSchema,
     initialSocPct: socPctSchema.nullish(),
+    steadyDays: steadyDaysSchema.optional(),
   })
   .superRefine((body, ctx) => {
     const windowHours = (body.deliveryEnd.getTime() - body.deliveryStart.getTime()) / 3_600_000;
@@ -124,6 +140,8 @@ export interface PlanInputs {
   initialSocPlanId: string | null;
   /** Tolerance band around the steady cycle, % of usable energy. */
   bandPct: number;
+  /** Days the steady cycle averages; absent in plans made before the choice existed (then all). */
+  steadyDays?: SteadyDays;
   /** Cautions of DESIGN section 8 for settings outside common practice, at creation time. */
   warnings: string[];
 }

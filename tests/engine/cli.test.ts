@@ -32,6 +32,8 @@ beforeAll(async () => {
     steady: run('npm', ['run', '--silent', 'cli', '--', 'steady', ...common]),
     reference: cli('reference', '--prices', fixtureA, '--battery', battery, '--site', site),
     plan: cli('plan', ...common, '--start', '2026-05-04T12:00:00Z', '--end', '2026-05-05T00:00:00Z', '--horizon', '24', '--terminal', 'steady-value'),
+    planWeekday: cli('plan', ...common, '--start', '2026-05-04T12:00:00Z', '--end', '2026-05-05T00:00:00Z', '--horizon', '24', '--terminal', 'free', '--days', 'weekday'),
+    planWeekend: cli('plan', ...common, '--start', '2026-05-04T12:00:00Z', '--end', '2026-05-05T00:00:00Z', '--horizon', '24', '--terminal', 'free', '--days', 'weekend'),
     study: cli('study', ...common, '--horizons', '6,12', '--replan', '2', '--terminal', 'free,steady-value', '--workers', '1'),
     badBattery: cli('reference', '--prices', prices, '--battery', badBattery),
     badPrices: cli('reference', '--prices', badPrices, '--battery', battery),
@@ -67,6 +69,18 @@ describe('command line', () => {
     expect(out.steps).toBe(12);
     expect(out.lookahead.steps).toBe(12);
     expect(Object.keys(out.turnpike)).toEqual(expect.arrayContaining(['band', 'nearSteadyShare', 'entryArcSteps', 'leavingArcSteps', 'commitWindowSteps', 'flags']));
+  });
+
+  it('plan --days: the steady cycle from weekdays only, and exit 2 when the data hold no weekend day', () => {
+    // [D] 4 and 5 May 2026 are a Monday and a Tuesday (UTC site): two weekdays, no weekend day.
+    const weekday = results.planWeekday!;
+    expect(weekday.code, weekday.stderr).toBe(0);
+    const out = JSON.parse(weekday.stdout);
+    expect(out.steadyCycle).toEqual(expect.objectContaining({ days: 'weekday', daysAveraged: 2 }));
+    expect(out.steadyCycle.notes).toContain('averaged over 2 weekday days by local clock slot');
+    expect(JSON.parse(results.plan!.stdout).steadyCycle).toEqual(expect.objectContaining({ days: 'all', daysAveraged: 2 }));
+    expect(results.planWeekend!.code).toBe(2);
+    expect(results.planWeekend!.stderr).toContain('the profile must cover at least one whole weekend day');
   });
 
   it('study: a run per horizon and terminal rule, and a recommendation', () => {

@@ -1,12 +1,12 @@
 /** Links that open the plan form preset with another horizon ("Make a plan with N h" on the horizon preview). */
 import { describe, expect, it } from 'vitest';
 import type { Plan } from '@shared/schemas/plan';
-import { newPlanUrl, prefillFromSearch, prefilledTerminal, prefilledWindow, runSourceOf } from '../../src/features/plans/components/new-plan-prefill';
+import { newPlanUrl, prefillFromSearch, prefilledTerminal, prefilledWindow, runSourceOf, steadyDaysOf } from '../../src/features/plans/components/new-plan-prefill';
 
 const plan = {
   siteId: 's-1', batteryId: 'b-1', priceProfileId: 'p-1', loadProfileId: 'l-1', generationProfileId: null,
   deliveryStart: '2026-05-14T22:00:00.000Z', deliveryEnd: '2026-05-15T22:00:00.000Z', horizonHours: 24,
-  terminalRule: 'target:80', initialSocPct: 42.5,
+  terminalRule: 'target:80', initialSocPct: 42.5, inputs: { steadyDays: 'weekday' },
 } as Plan;
 
 describe('a preset plan form link', () => {
@@ -17,7 +17,9 @@ describe('a preset plan form link', () => {
     expect(prefill).toEqual({
       siteId: 's-1', batteryId: 'b-1', priceProfileId: 'p-1', loadProfileId: 'l-1',
       deliveryStart: plan.deliveryStart, deliveryEnd: plan.deliveryEnd, horizonHours: '36', terminalRule: 'target:80', initialSocPct: '42.5',
+      steadyDays: 'weekday',
     });
+    expect(steadyDaysOf(prefill.steadyDays)).toBe('weekday');
     expect(runSourceOf(prefill)).toEqual({ siteId: 's-1', batteryId: 'b-1', priceProfileId: 'p-1', loadProfileId: 'l-1', generationProfileId: '' });
   });
 
@@ -29,5 +31,8 @@ describe('a preset plan form link', () => {
     expect(prefilledTerminal('target:80')).toEqual({ kind: 'target', targetPct: '80' });
     expect(prefilledTerminal('free').kind).toBe('free');
     expect(prefilledTerminal('something else').kind).toBe('steady-value');
+    // Plans made before the choice existed, and unknown words in a link, mean every day.
+    expect(steadyDaysOf(undefined)).toBe('all');
+    expect(steadyDaysOf('sundays')).toBe('all');
   });
 });

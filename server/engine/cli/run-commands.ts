@@ -5,6 +5,7 @@
 import type { AlignedInputs } from '../inputs/align-inputs';
 import { stepIndexOf } from '../inputs/problem-for';
 import { solveSteadyCycle } from '../steady/solve-steady-cycle';
+import type { DaySelection } from '../steady/representative-day';
 import { solveReferencePath } from '../reference/solve-reference-path';
 import { summarizePath } from '../reference/path-summary';
 import { solvePlan } from '../plan/solve-plan';
@@ -43,9 +44,15 @@ function initialSoc(args: ParsedArgs): number | undefined {
   return numberOption(args, 'initial-soc', (v) => v >= 0 && v <= 100, 'a percentage between 0 and 100');
 }
 
-export function steadyCommand(inputs: AlignedInputs, args: ParsedArgs) {
+/** --days: which local days the steady cycle averages. */
+function steadyDays(args: ParsedArgs): DaySelection {
   const days = args.options.get('days') ?? 'all';
   if (days !== 'all' && days !== 'weekday' && days !== 'weekend') throw new CliInputError(`--days ${days}: expected all, weekday or weekend`);
+  return days;
+}
+
+export function steadyCommand(inputs: AlignedInputs, args: ParsedArgs) {
+  const days = steadyDays(args);
   const result = solveSteadyCycle(inputs, { days });
   if (!result.ok) throw new CliInputError(`${result.issue.field}: ${result.issue.message}`);
   const c = result.cycle;
@@ -96,6 +103,7 @@ export function planCommand(inputs: AlignedInputs, args: ParsedArgs) {
   if (horizon === undefined) required(args, 'horizon');
   const band = numberOption(args, 'band', (v) => v > 0 && v < 100, 'a band in % of usable energy, e.g. 5');
   const soc = initialSoc(args);
+  const days = steadyDays(args);
   const result = solvePlan(inputs, {
     startMs: parseInstant(required(args, 'start'), tz, '--start'),
     endMs: parseInstant(required(args, 'end'), tz, '--end'),
@@ -103,6 +111,7 @@ export function planCommand(inputs: AlignedInputs, args: ParsedArgs) {
     terminal: terminal(required(args, 'terminal')),
     ...(soc !== undefined ? { initialSocPct: soc } : {}),
     ...(band !== undefined ? { bandFraction: band / 100 } : {}),
+    steadyDays: days,
     method: method(args),
   });
   if (!result.ok) throw new CliInputError(`${result.issue.field}: ${result.issue.message}`);
@@ -115,6 +124,7 @@ export function planCommand(inputs: AlignedInputs, args: ParsedArgs) {
     ...summarizePath(inputs, plan.solution, plan.from, 0, delivery),
     lookahead: { hours: plan.lookaheadHours, ...summarizePath(inputs, plan.solution, plan.from, delivery) },
     terminal: plan.terminalRule,
+    steadyCycle: { days, daysAveraged: plan.steady.days, cost: plan.steady.costPerDay, notes: plan.steady.notes },
     turnpike: { ...figures, value: valueFigures },
     decisionHorizonHours: plan.dpInsights?.decisionHorizonHours ?? null,
     valueCurves: plan.dpInsights?.valueCurves ?? [],

@@ -12,6 +12,7 @@ import type { InputIssue } from '../model/validate-battery';
 import { problemFor, socPctToKwh, stepIndexOf } from '../inputs/problem-for';
 import { solveDispatch, type DispatchOptions } from '../dispatch/solve-dispatch';
 import { solveSteadyCycle, type SteadyCycle } from '../steady/solve-steady-cycle';
+import type { DaySelection } from '../steady/representative-day';
 import { terminalRuleFor, type TerminalChoice } from '../terminal/terminal-choice';
 import { DEFAULT_BAND_FRACTION } from '../turnpike/turnpike-figures';
 import { planFlags, settingWarnings } from './plan-flags';
@@ -30,6 +31,8 @@ export interface PlanRequest {
   readonly bandFraction?: number;
   readonly method?: DispatchOptions['method'];
   readonly steady?: SteadyCycle;
+  /** Which local days the steady cycle averages (when `steady` is not given): all, weekdays or weekend days. */
+  readonly steadyDays?: DaySelection;
 }
 
 export interface Plan {
@@ -67,7 +70,7 @@ export function solvePlan(inputs: AlignedInputs, request: PlanRequest): PlanResu
   }
   let steady = request.steady;
   if (!steady) {
-    const result = solveSteadyCycle(inputs);
+    const result = solveSteadyCycle(inputs, { days: request.steadyDays ?? 'all' });
     if (!result.ok) return result;
     steady = result.cycle;
   }

@@ -4,7 +4,7 @@
  * with another horizon. Instants travel as RFC 3339 text and become wall times
  * in the site's zone only in the form, once the zone is known.
  */
-import type { Plan } from '@shared/schemas/plan';
+import { steadyDaysSchema, type Plan, type SteadyDays } from '@shared/schemas/plan';
 import { emptyRunSource, type RunSource } from '@/components/run-source-fields';
 import { toWallTimeInput } from '@/lib/format';
 import type { TerminalKind } from './terminal-rule-field';
@@ -15,11 +15,12 @@ export interface PlanPrefill extends Partial<RunSource> {
   horizonHours?: string;
   terminalRule?: string;
   initialSocPct?: string;
+  steadyDays?: string;
 }
 
 const prefillKeys = [
   'siteId', 'batteryId', 'priceProfileId', 'loadProfileId', 'generationProfileId',
-  'deliveryStart', 'deliveryEnd', 'horizonHours', 'terminalRule', 'initialSocPct',
+  'deliveryStart', 'deliveryEnd', 'horizonHours', 'terminalRule', 'initialSocPct', 'steadyDays',
 ] as const satisfies readonly (keyof PlanPrefill)[];
 
 /** `/plans/new?…` with everything of `plan` but the horizon. */
@@ -28,7 +29,7 @@ export function newPlanUrl(plan: Plan, horizonHours: number): string {
     siteId: plan.siteId, batteryId: plan.batteryId, priceProfileId: plan.priceProfileId,
     loadProfileId: plan.loadProfileId ?? '', generationProfileId: plan.generationProfileId ?? '',
     deliveryStart: plan.deliveryStart, deliveryEnd: plan.deliveryEnd, horizonHours: String(horizonHours),
-    terminalRule: plan.terminalRule, initialSocPct: String(plan.initialSocPct),
+    terminalRule: plan.terminalRule, initialSocPct: String(plan.initialSocPct), steadyDays: plan.inputs?.steadyDays ?? 'all',
   };
   const params = new URLSearchParams();
   for (const key of prefillKeys) if (values[key]) params.set(key, values[key]);
@@ -64,4 +65,10 @@ export function prefilledTerminal(text: string | undefined): { kind: TerminalKin
   if (text === 'free' || text === 'cyclic' || text === 'steady-value') return { kind: text, targetPct: '50' };
   const target = /^target:(.+)$/.exec(text ?? '');
   return target ? { kind: 'target', targetPct: target[1]! } : { kind: 'steady-value', targetPct: '50' };
+}
+
+/** The steady-cycle days of a link or a select, every day when absent or unknown. */
+export function steadyDaysOf(text: string | undefined): SteadyDays {
+  const parsed = steadyDaysSchema.safeParse(text);
+  return parsed.success ? parsed.data : 'all';
 }

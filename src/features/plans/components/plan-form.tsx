@@ -5,7 +5,7 @@
  */
 import { useState, type FormEvent } from 'react';
 import { useNavigate } from 'react-router-dom';
-import { planCreateSchema } from '@shared/schemas/plan';
+import { planCreateSchema, steadyDaysLabels, steadyDaysValues, type SteadyDays } from '@shared/schemas/plan';
 import { FormField, buttonClass, describedBy, inputClass } from '@/components/form-field';
 import { RunSourceFields, useRunSourceLists, type RunSource } from '@/components/run-source-fields';
 import { fieldErrors, parseNumberInput } from '@/lib/form-values';
@@ -13,7 +13,7 @@ import { formatNumber, fromWallTimeInput, toWallTimeInput } from '@/lib/format';
 import { useCreatePlan } from '../api/create-plan';
 import { usePlanDefaults } from '../api/get-plan-defaults';
 import { TerminalRuleField, terminalRuleText, type TerminalKind } from './terminal-rule-field';
-import { prefilledTerminal, prefilledWindow, runSourceOf, type PlanPrefill } from './new-plan-prefill';
+import { prefilledTerminal, prefilledWindow, runSourceOf, steadyDaysOf, type PlanPrefill } from './new-plan-prefill';
 
 const DAY_MS = 86_400_000;
 
@@ -47,6 +47,7 @@ export function PlanForm({ initial }: { initial?: PlanPrefill }) {
   const [horizon, setHorizon] = useState(initial?.horizonHours ?? '');
   const [terminal, setTerminal] = useState<{ kind: TerminalKind; targetPct: string }>(() => prefilledTerminal(initial?.terminalRule));
   const [soc, setSoc] = useState(initial?.initialSocPct ?? '');
+  const [steadyDays, setSteadyDays] = useState<SteadyDays>(() => steadyDaysOf(initial?.steadyDays));
   const [errors, setErrors] = useState<Record<string, string>>({});
   const create = useCreatePlan();
   const { sites } = useRunSourceLists(source.siteId);
@@ -76,6 +77,7 @@ export function PlanForm({ initial }: { initial?: PlanPrefill }) {
       horizonHours: horizonValue,
       terminalRule: terminalRuleText(terminal.kind, terminal.targetPct),
       initialSocPct: parseNumberInput(soc),
+      steadyDays,
     };
     const parsed = planCreateSchema.safeParse(body);
     if (!parsed.success) {
@@ -118,6 +120,15 @@ export function PlanForm({ initial }: { initial?: PlanPrefill }) {
           hint={defaults.data ? `Empty: ${formatNumber(defaults.data.initialSocPct)} %, ${sourceSoc[defaults.data.initialSocSource]}.` : undefined}>
           <input id="initialSocPct" inputMode="decimal" className={inputClass} value={soc} placeholder={defaults.data ? String(defaults.data.initialSocPct) : ''}
             aria-invalid={!!errors.initialSocPct} aria-describedby={describedBy('initialSocPct', { error: errors.initialSocPct })} onChange={(e) => setSoc(e.target.value)} />
+        </FormField>
+        <FormField id="steadyDays" label="Steady cycle from" error={errors.steadyDays}
+          hint="The days averaged into the representative day; pick the delivery window's kind of day when weekday and weekend prices differ.">
+          <select id="steadyDays" className={inputClass} value={steadyDays} aria-invalid={!!errors.steadyDays}
+            aria-describedby={describedBy('steadyDays', { error: errors.steadyDays })} onChange={(e) => setSteadyDays(steadyDaysOf(e.target.value))}>
+            {steadyDaysValues.map((value) => (
+              <option key={value} value={value}>{steadyDaysLabels[value]}</option>
+            ))}
+          </select>
         </FormField>
       </div>
       <TerminalRuleField kind={terminal.kind} targetPct={terminal.targetPct} error={errors.terminalRule} onChange={(kind, targetPct) => setTerminal({ kind, targetPct })} />

@@ -6,7 +6,7 @@
  */
 import type { ReactNode } from 'react';
 import { Link, useParams } from 'react-router-dom';
-import type { Plan } from '@shared/schemas/plan';
+import { steadyDaysLabels, type Plan } from '@shared/schemas/plan';
 import { describeTerminalRule } from '@shared/schemas/terminal-rule';
 import { ErrorState, LoadingState } from '@/components/query-state';
 import { JobProgressBar, isJobActive } from '@/components/job-progress';
@@ -35,6 +35,7 @@ function PlanFacts({ plan }: { plan: Plan }) {
     ['Horizon', `${plan.horizonHours} h`],
     ['Terminal rule', describeTerminalRule(plan.terminalRule)],
     ['Initial SoC', `${formatNumber(plan.initialSocPct, 1)} % (${socSource[plan.inputs?.initialSocSource ?? 'request'] ?? ''})`],
+    ['Steady cycle from', steadyDaysLabels[plan.inputs?.steadyDays ?? 'all']],
     ['Method', plan.method === 'dp' ? 'exact dynamic program (fast path)' : plan.method === 'lp' ? 'linear program' : 'not computed yet'],
     ['Status', plan.status],
   ];

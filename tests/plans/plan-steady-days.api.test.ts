@@ -1,0 +1,98 @@
+/**
+ * The steady cycle from weekdays or weekend days only (DESIGN section 3: "Offer
+ * weekday/weekend representative days as an option"), through POST /api/plans,
+ * the job and the stored results.
+ */
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Plan, PlanCreated } from '@shared/schemas/plan';
+import type { JobWorker } from '../../server/jobs/job-worker';
+import { createTestApp } from '../support/test-app';
+import { signInAs, type SignedInAgent } from '../support/auth';
+import { createPlace, HOUR_MS, startTestWorker, stopTestWorker, useOwnJobQueues, waitUntilFinished, type Place } from '../jobs/support';
+
+useOwnJobQueues('plan_steady_days');
+const app = createTestApp();
+let planner: SignedInAgent;
+let worker: JobWorker | null = null;
+
+const monday = Date.parse('2026-03-02T00:00:00Z'); // a Monday; the test sites keep UTC
+const iso = (ms: number) => new Date(ms).toISOString();
+// Invented shapes: weekdays peak in the evening, weekends are flat with a midday dip.
+const weekdayDay = Array.from({ length: 24 }, (_, h) => (h < 6 ? 30 : h >= 17 && h < 21 ? 120 : 60));
+const weekendDay = Array.from({ length: 24 }, (_, h) => (h >= 11 && h < 15 ? 20 : 45));
+const days = (count: number, pick: (day: number) => number[]) => Array.from({ length: count }, (_, d) => pick(d)).flat();
+const isWeekend = (day: number) => day % 7 >= 5;
+const battery = {
+  energyKwh: 2000, powerChargeKw: 1000, powerDischargeKw: 1000, efficiencyCharge: 0.95, efficiencyDischarge: 0.95,
+  socMinPct: 10, socMaxPct: 90, socInitialPct: 50, selfDischargePctPerHour: 0, degradationCostPerMwh: 0, maxCyclesPerDay: null,
+};
+
+let mixed: Place;
+let weekdaysOnly: Place;
+
+async function plan(place: Place, extra: Record<string, unknown>): Promise<Plan> {
+  const created = await planner.post('/api/plans').send({
+    batteryId: place.batteryId, priceProfileId: place.priceProfileId,
+    // Tuesday 3 March (a weekday) until noon: the steady-value end prices the energy kept for the evening.
+    deliveryStart: iso(monday + 24 * HOUR_MS), deliveryEnd: iso(monday + 36 * HOUR_MS),
+    horizonHours: 12, terminalRule: 'steady-value', initialSocPct: 50, ...extra,
+  });
+  expect(created.status, JSON.stringify(created.body)).toBe(202);
+  return waitUntilFinished<Plan>(planner, `/api/plans/${(created.body as PlanCreated).plan.id}`);
+}
+
+const steadySoc = (p: Plan) => p.results!.steps.map((s) => s.steadySocKwh);
+
+beforeAll(async () => {
+  planner = await signInAs(app, 'planner');
+  worker = await startTestWorker();
+  mixed = await createPlace(planner, { prices: { values: days(14, (d) => (isWeekend(d) ? weekendDay : weekdayDay)), startMs: monday, stepMinutes: 60 }, battery });
+  weekdaysOnly = await createPlace(planner, { prices: { values: days(14, () => weekdayDay), startMs: monday, stepMinutes: 60 }, battery });
+});
+afterAll(async () => stopTestWorker(worker));
+
+describe('the steady cycle of a plan', () => {
+  it('from weekdays only is the steady cycle of the weekday shape alone; from every day it differs', async () => {
+    const weekday = await plan(mixed, { steadyDays: 'weekday' });
+    expect(weekday.job?.state, weekday.errorMessage ?? '').toBe('completed');
+    expect(weekday.inputs?.steadyDays).toBe('weekday');
+    expect(weekday.results!.notes).toContain('averaged over 10 weekday days by local clock slot');
+    // [D] Every weekday has the same prices, so the weekday average is that day's shape: the same
+    // steady cycle as a profile made of weekdays only, averaged over every day.
+    const reference = await plan(weekdaysOnly, {});
+    expect(reference.inputs?.steadyDays).toBe('all');
+    // (An average of ten equal prices may differ from the price in its last bit: compare to 1e-6 kWh.)
+    expect(steadySoc(weekday)).toEqual(steadySoc(reference).map((kwh) => expect.closeTo(kwh!, 6)));
+    expect(weekday.results!.steadyCycle!.costPerDay).toBeCloseTo(reference.results!.steadyCycle!.costPerDay, 9);
+    // ... and the plans, whose prices and steady-value end agree, too.
+    expect(weekday.results!.summary.cost).toBeCloseTo(reference.results!.summary.cost, 9);
+
+    const everyDay = await plan(mixed, {});
+    expect(everyDay.results!.notes).toContain('averaged over 14 days by local clock slot');
+    expect(steadySoc(everyDay)).not.toEqual(steadySoc(weekday));
+
+    // The horizon preview re-solves with the plan's own steady cycle: at the plan's horizon it
+    // gives the plan's cost, which the every-day cycle's steady-value end would not.
+    expect(Math.abs(everyDay.results!.summary.cost - weekday.results!.summary.cost)).toBeGreaterThan(1);
+    const preview = await planner.post(`/api/plans/${weekday.id}/horizon-preview`).send({ horizonHours: 12 });
+    expect(preview.status, JSON.stringify(preview.body)).toBe(200);
+    expect(preview.body.cost).toBeCloseTo(weekday.results!.summary.cost, 9);
+  });
+
+  it('from weekend days fails with the engine’s reason when the data hold no whole weekend day', async () => {
+    const friday = await createPlace(planner, { prices: { values: days(5, () => weekdayDay), startMs: monday, stepMinutes: 60 }, battery });
+    const failed = await plan(friday, { steadyDays: 'weekend' });
+    expect(failed.job?.state).toBe('failed');
+    expect(failed.errorMessage).toMatch(/the representative weekend day has no data for the 00:00 slot: the profile must cover at least one whole weekend day/);
+    expect(failed.results).toBeNull();
+  });
+
+  it('refuses an unknown choice with 422, naming the field and the choices', async () => {
+    const response = await planner.post('/api/plans').send({
+      batteryId: mixed.batteryId, priceProfileId: mixed.priceProfileId,
+      deliveryStart: iso(monday + 24 * HOUR_MS), deliveryEnd: iso(monday + 48 * HOUR_MS), horizonHours: 24, terminalRule: 'free', steadyDays: 'sundays',
+    });
+    expect(response.status).toBe(422);
+    expect(response.body.issues).toContainEqual(expect.objectContaining({ path: 'steadyDays', message: 'Choose which days the steady cycle averages: all, weekday or weekend.' }));
+  });
+});
