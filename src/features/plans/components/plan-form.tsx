@@ -121,7 +121,7 @@ export function PlanForm({ initial }: { initial?: PlanPrefill }) {
           <input id="initialSocPct" inputMode="decimal" className={inputClass} value={soc} placeholder={defaults.data ? String(defaults.data.initialSocPct) : ''}
             aria-invalid={!!errors.initialSocPct} aria-describedby={describedBy('initialSocPct', { error: errors.initialSocPct })} onChange={(e) => setSoc(e.target.value)} />
         </FormField>
-        <FormField id="steadyDays" label="Steady cycle from" error={errors.steadyDays}
+        <FormField id="steadyDays" label="Steady-cycle days" error={errors.steadyDays}
           hint="The days averaged into the representative day; pick the delivery window's kind of day when weekday and weekend prices differ.">
           <select id="steadyDays" className={inputClass} value={steadyDays} aria-invalid={!!errors.steadyDays}
             aria-describedby={describedBy('steadyDays', { error: errors.steadyDays })} onChange={(e) => setSteadyDays(steadyDaysOf(e.target.value))}>

@@ -35,7 +35,7 @@ function PlanFacts({ plan }: { plan: Plan }) {
     ['Horizon', `${plan.horizonHours} h`],
     ['Terminal rule', describeTerminalRule(plan.terminalRule)],
     ['Initial SoC', `${formatNumber(plan.initialSocPct, 1)} % (${socSource[plan.inputs?.initialSocSource ?? 'request'] ?? ''})`],
-    ['Steady cycle from', steadyDaysLabels[plan.inputs?.steadyDays ?? 'all']],
+    ['Steady-cycle days', steadyDaysLabels[plan.inputs?.steadyDays ?? 'all']],
     ['Method', plan.method === 'dp' ? 'exact dynamic program (fast path)' : plan.method === 'lp' ? 'linear program' : 'not computed yet'],
     ['Status', plan.status],
   ];
