@@ -43,6 +43,8 @@ export function CompareHorizonsForm({ base, existing }: { base: Plan; existing: 
           horizonHours: h,
           terminalRule: r,
           initialSocPct: base.initialSocPct,
+          // The same steady cycle, or the figures of the compared plans would not be comparable.
+          steadyDays: base.inputs?.steadyDays ?? 'all',
         });
       } catch (error) {
         failures.push(`${h} h, ${r}: ${error instanceof ApiError ? (error.issues[0]?.message ?? error.message) : String(error)}`);
