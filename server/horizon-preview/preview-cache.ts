@@ -6,7 +6,8 @@
  * Aligning a year of profiles and solving the steady cycle take far longer than
  * the exact re-plan itself (tenths of a second against milliseconds). Pure: no database.
  */
-import type { PlanInputs, SteadyDays } from '@shared/schemas/plan';
+import type { PlanInputs } from '@shared/schemas/plan';
+import type { SteadyDays } from '@shared/schemas/steady-days';
 import { solveSteadyCycle, type AlignedInputs, type ProfileSeries, type SteadyCycle } from '../engine';
 import { unprocessable } from '../http/app-error';
 import { alignSnapshot } from '../plans/plan-compute';

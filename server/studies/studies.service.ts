@@ -45,6 +45,7 @@ export async function createStudy(body: StudyCreate, actor: Actor, databaseUrl: 
     initialSocPct: soc.pct,
     initialSocSource: soc.source,
     bandPct: DEFAULT_BAND_PCT,
+    steadyDays: body.steadyDays ?? 'all',
   };
 
   const { entityId: studyId, jobId } = await createWithJob({
@@ -65,7 +66,10 @@ export async function createStudy(body: StudyCreate, actor: Actor, databaseUrl: 
         inputs,
         createdBy: actor.id,
       }),
-    auditDetails: { batteryId: run.battery.id, start: inputs.start, end: inputs.end, horizonsHours: inputs.horizonsHours, replanHours: body.replanHours, terminalRules: body.terminalRules },
+    auditDetails: {
+      batteryId: run.battery.id, start: inputs.start, end: inputs.end, horizonsHours: inputs.horizonsHours, replanHours: body.replanHours,
+      terminalRules: body.terminalRules, steadyDays: inputs.steadyDays,
+    },
   });
   const study = await getStudy(studyId);
   const job = await getJobProgress(db, jobId);

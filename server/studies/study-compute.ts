@@ -38,6 +38,7 @@ export async function computeStudy(input: StudyComputeInput, report: Report): Pr
     terminals,
     initialSocPct: inputs.initialSocPct,
     bandFraction: inputs.bandPct / 100,
+    steadyDays: inputs.steadyDays ?? 'all',
     workers: input.threads,
     onProgress: (done, all) => report(0.1 + (0.88 * done) / all, `${done} of ${all} runs finished.`),
   });

@@ -6,6 +6,7 @@
 import { z } from 'zod';
 import type { JobProgress } from './job';
 import { terminalRuleSchema, type TerminalRuleText } from './terminal-rule';
+import { steadyDaysSchema, type SteadyDays } from './steady-days';
 
 export const planStatuses = ['draft', 'submitted', 'approved', 'rejected', 'superseded'] as const;
 export type PlanStatusName = (typeof planStatuses)[number];
@@ -22,21 +23,6 @@ export const horizonHoursSchema = z
   .number({ error: 'Give the horizon in hours, e.g. 48.' })
   .gt(0, 'The horizon must be longer than 0 hours.')
   .max(8784, 'The horizon is at most 8784 hours (one year).');
-
-/**
- * Which local days the steady cycle averages (DESIGN section 3): every day, or only
- * weekdays (Mon–Fri) or weekend days (Sat–Sun), when the two price shapes differ.
- */
-export const steadyDaysValues = ['all', 'weekday', 'weekend'] as const;
-export type SteadyDays = (typeof steadyDaysValues)[number];
-export const steadyDaysSchema = z.enum(steadyDaysValues, {
-  error: 'Choose which days the steady cycle averages: all, weekday or weekend.',
-});
-export const steadyDaysLabels: Record<SteadyDays, string> = {
-  all: 'every day',
-  weekday: 'weekdays (Mon–Fri)',
-  weekend: 'weekend days (Sat–Sun)',
-};
 
 export const socPctSchema = z
   .number({ error: 'Give the SoC in % of nameplate energy.' })

@@ -8,6 +8,7 @@ import type { JobProgress, JobState } from './job';
 import type { BatterySnapshot, InitialSocSource, ProfileRef, SiteSnapshot } from './plan';
 import { horizonHoursSchema, socPctSchema } from './plan';
 import { terminalRuleSchema, type TerminalRuleText } from './terminal-rule';
+import { steadyDaysSchema, type SteadyDays } from './steady-days';
 
 const instant = (field: string) =>
   z.iso
@@ -37,6 +38,8 @@ export const studyCreateSchema = z
       .min(1, 'Give at least one terminal rule.')
       .max(4, 'At most 4 terminal rules per study.'),
     initialSocPct: socPctSchema.nullish(),
+    /** Days the steady cycle of the steady-value rule averages. */
+    steadyDays: steadyDaysSchema.optional(),
   })
   .superRefine((body, ctx) => {
     if (body.end.getTime() <= body.start.getTime()) {
@@ -81,6 +84,8 @@ export interface StudyInputs {
   initialSocPct: number;
   initialSocSource: InitialSocSource;
   bandPct: number;
+  /** Days the steady cycle averages; absent in studies made before the choice existed (then all). */
+  steadyDays?: SteadyDays;
   warnings: string[];
 }
 

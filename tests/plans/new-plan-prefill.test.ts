@@ -1,7 +1,8 @@
 /** Links that open the plan form preset with another horizon ("Make a plan with N h" on the horizon preview). */
 import { describe, expect, it } from 'vitest';
 import type { Plan } from '@shared/schemas/plan';
-import { newPlanUrl, prefillFromSearch, prefilledTerminal, prefilledWindow, runSourceOf, steadyDaysOf } from '../../src/features/plans/components/new-plan-prefill';
+import { newPlanUrl, prefillFromSearch, prefilledTerminal, prefilledWindow, runSourceOf } from '../../src/features/plans/components/new-plan-prefill';
+import { steadyDaysOf } from '../../src/components/steady-days-field';
 
 const plan = {
   siteId: 's-1', batteryId: 'b-1', priceProfileId: 'p-1', loadProfileId: 'l-1', generationProfileId: null,

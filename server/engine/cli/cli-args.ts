@@ -19,7 +19,7 @@ export const COMMAND_OPTIONS: Readonly<Record<string, readonly string[]>> = {
   steady: [...COMMON, 'days'],
   reference: [...COMMON, 'start', 'end', 'terminal', 'initial-soc'],
   plan: [...COMMON, 'start', 'end', 'horizon', 'terminal', 'initial-soc', 'band', 'days'],
-  study: [...COMMON, 'start', 'end', 'horizons', 'replan', 'terminal', 'initial-soc', 'gap-target', 'band', 'workers'],
+  study: [...COMMON, 'start', 'end', 'horizons', 'replan', 'terminal', 'initial-soc', 'gap-target', 'band', 'workers', 'days'],
 };
 
 export const USAGE = `usage: npm run --silent cli -- <command> [options]
@@ -27,7 +27,7 @@ commands:
   steady    --prices F --battery F [--load F] [--site F] [--days all|weekday|weekend]
   reference --prices F --battery F [--load F] [--site F] [--start ISO] [--end ISO] [--terminal free|cyclic|steady-value|target:PCT] [--initial-soc PCT]
   plan      --prices F --battery F [--load F] [--site F] --start ISO --end ISO --horizon HOURS --terminal RULE [--initial-soc PCT] [--days all|weekday|weekend]
-  study     --prices F --battery F [--load F] [--site F] [--start ISO] [--end ISO] --horizons 6,12,24,48 --replan HOURS --terminal free,steady-value
+  study     --prices F --battery F [--load F] [--site F] [--start ISO] [--end ISO] --horizons 6,12,24,48 --replan HOURS --terminal free,steady-value [--days all|weekday|weekend]
 common: [--generation F] [--export-prices F] [--price-unit currency/MWh|currency/kWh] [--load-unit kW|MW|kWh|MWh]
         [--generation-unit ...] [--interval-ending] [--fill-gaps] [--method auto|lp|dp]`;
 

@@ -157,6 +157,7 @@ export async function studyCommand(inputs: AlignedInputs, args: ParsedArgs, prog
     ...(gapTarget !== undefined ? { gapTargetPct: gapTarget } : {}),
     ...(band !== undefined ? { bandFraction: band / 100 } : {}),
     ...(workers !== undefined ? { workers } : {}),
+    steadyDays: steadyDays(args),
     method: method(args),
     onProgress: (done, total) => progress(`study: ${done}/${total} runs done`),
   });

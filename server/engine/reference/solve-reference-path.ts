@@ -9,6 +9,7 @@ import type { InputIssue } from '../model/validate-battery';
 import { problemFor, socPctToKwh } from '../inputs/problem-for';
 import { solveDispatch, type DispatchOptions } from '../dispatch/solve-dispatch';
 import { solveSteadyCycle, type SteadyCycle } from '../steady/solve-steady-cycle';
+import type { DaySelection } from '../steady/representative-day';
 import { terminalRuleFor, type TerminalChoice } from '../terminal/terminal-choice';
 
 export interface PathRequest {
@@ -32,11 +33,16 @@ export interface ReferencePath {
 
 export type PathResult = { ok: true; path: ReferencePath } | { ok: false; issue: InputIssue };
 
-/** The steady cycle when a terminal choice needs it; an issue when it cannot be had. */
-export function steadyFor(inputs: AlignedInputs, choices: readonly TerminalChoice[], given?: SteadyCycle): { ok: true; steady?: SteadyCycle } | { ok: false; issue: InputIssue } {
+/** The steady cycle (over the chosen local days) when a terminal choice needs it; an issue when it cannot be had. */
+export function steadyFor(
+  inputs: AlignedInputs,
+  choices: readonly TerminalChoice[],
+  given?: SteadyCycle,
+  days: DaySelection = 'all',
+): { ok: true; steady?: SteadyCycle } | { ok: false; issue: InputIssue } {
   if (!choices.some((c) => c.kind === 'steady-value')) return { ok: true, ...(given ? { steady: given } : {}) };
   if (given) return { ok: true, steady: given };
-  const result = solveSteadyCycle(inputs);
+  const result = solveSteadyCycle(inputs, { days });
   if (!result.ok) return result;
   if (result.cycle.status !== 'optimal') {
     return { ok: false, issue: { field: 'terminal', message: `the steady-value rule needs the steady cycle, which could not be solved: ${result.cycle.message ?? result.cycle.status}` } };

@@ -10,6 +10,7 @@ import { problemFor, socPctToKwh, stepIndexOf, usableEnergyKwh } from '../inputs
 import { checkDp } from '../dispatch/dp-bridge';
 import { solveReferencePath, steadyFor } from '../reference/solve-reference-path';
 import { terminalLabel, type TerminalChoice } from '../terminal/terminal-choice';
+import type { DaySelection } from '../steady/representative-day';
 import { DEFAULT_BAND_FRACTION } from '../turnpike/turnpike-figures';
 import { DEFAULT_GAP_TARGET_PCT, recommendHorizon, type Recommendation } from './recommend-horizon';
 import { runClosedLoopParallel } from './parallel-closed-loop';
@@ -24,6 +25,8 @@ export interface StudyRequest {
   readonly replanHours: number;
   readonly terminals: readonly TerminalChoice[];
   readonly initialSocPct?: number;
+  /** Which local days the steady cycle of the steady-value rule averages (default all). */
+  readonly steadyDays?: DaySelection;
   readonly gapTargetPct?: number;
   readonly bandFraction?: number;
   readonly method?: 'auto' | 'lp' | 'dp';
@@ -79,7 +82,7 @@ export async function runHorizonStudy(inputs: AlignedInputs, request: StudyReque
     if (steps < replanSteps) return fail('horizons', `the horizon ${hours} h is shorter than the re-plan interval ${request.replanHours} h`);
     for (const terminal of request.terminals) jobs.push({ horizonHours: hours, horizonSteps: steps, terminal });
   }
-  const steady = steadyFor(inputs, request.terminals);
+  const steady = steadyFor(inputs, request.terminals, undefined, request.steadyDays);
   if (!steady.ok) return steady;
   const reference = solveReferencePath(inputs, {
     from: start.index,

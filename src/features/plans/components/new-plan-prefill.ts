@@ -4,7 +4,7 @@
  * with another horizon. Instants travel as RFC 3339 text and become wall times
  * in the site's zone only in the form, once the zone is known.
  */
-import { steadyDaysSchema, type Plan, type SteadyDays } from '@shared/schemas/plan';
+import type { Plan } from '@shared/schemas/plan';
 import { emptyRunSource, type RunSource } from '@/components/run-source-fields';
 import { toWallTimeInput } from '@/lib/format';
 import type { TerminalKind } from './terminal-rule-field';
@@ -65,10 +65,4 @@ export function prefilledTerminal(text: string | undefined): { kind: TerminalKin
   if (text === 'free' || text === 'cyclic' || text === 'steady-value') return { kind: text, targetPct: '50' };
   const target = /^target:(.+)$/.exec(text ?? '');
   return target ? { kind: 'target', targetPct: target[1]! } : { kind: 'steady-value', targetPct: '50' };
-}
-
-/** The steady-cycle days of a link or a select, every day when absent or unknown. */
-export function steadyDaysOf(text: string | undefined): SteadyDays {
-  const parsed = steadyDaysSchema.safeParse(text);
-  return parsed.success ? parsed.data : 'all';
 }

@@ -5,15 +5,17 @@
  */
 import { useState, type FormEvent } from 'react';
 import { useNavigate } from 'react-router-dom';
-import { planCreateSchema, steadyDaysLabels, steadyDaysValues, type SteadyDays } from '@shared/schemas/plan';
+import { planCreateSchema } from '@shared/schemas/plan';
+import type { SteadyDays } from '@shared/schemas/steady-days';
 import { FormField, buttonClass, describedBy, inputClass } from '@/components/form-field';
 import { RunSourceFields, useRunSourceLists, type RunSource } from '@/components/run-source-fields';
+import { SteadyDaysField, steadyDaysOf } from '@/components/steady-days-field';
 import { fieldErrors, parseNumberInput } from '@/lib/form-values';
 import { formatNumber, fromWallTimeInput, toWallTimeInput } from '@/lib/format';
 import { useCreatePlan } from '../api/create-plan';
 import { usePlanDefaults } from '../api/get-plan-defaults';
 import { TerminalRuleField, terminalRuleText, type TerminalKind } from './terminal-rule-field';
-import { prefilledTerminal, prefilledWindow, runSourceOf, steadyDaysOf, type PlanPrefill } from './new-plan-prefill';
+import { prefilledTerminal, prefilledWindow, runSourceOf, type PlanPrefill } from './new-plan-prefill';
 
 const DAY_MS = 86_400_000;
 
@@ -121,15 +123,7 @@ export function PlanForm({ initial }: { initial?: PlanPrefill }) {
           <input id="initialSocPct" inputMode="decimal" className={inputClass} value={soc} placeholder={defaults.data ? String(defaults.data.initialSocPct) : ''}
             aria-invalid={!!errors.initialSocPct} aria-describedby={describedBy('initialSocPct', { error: errors.initialSocPct })} onChange={(e) => setSoc(e.target.value)} />
         </FormField>
-        <FormField id="steadyDays" label="Steady-cycle days" error={errors.steadyDays}
-          hint="The days averaged into the representative day; pick the delivery window's kind of day when weekday and weekend prices differ.">
-          <select id="steadyDays" className={inputClass} value={steadyDays} aria-invalid={!!errors.steadyDays}
-            aria-describedby={describedBy('steadyDays', { error: errors.steadyDays })} onChange={(e) => setSteadyDays(steadyDaysOf(e.target.value))}>
-            {steadyDaysValues.map((value) => (
-              <option key={value} value={value}>{steadyDaysLabels[value]}</option>
-            ))}
-          </select>
-        </FormField>
+        <SteadyDaysField value={steadyDays} onChange={setSteadyDays} error={errors.steadyDays} />
       </div>
       <TerminalRuleField kind={terminal.kind} targetPct={terminal.targetPct} error={errors.terminalRule} onChange={(kind, targetPct) => setTerminal({ kind, targetPct })} />
       {errors[''] && <p role="alert" className="text-sm text-brick-700">{errors['']}</p>}

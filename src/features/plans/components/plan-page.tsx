@@ -6,7 +6,8 @@
  */
 import type { ReactNode } from 'react';
 import { Link, useParams } from 'react-router-dom';
-import { steadyDaysLabels, type Plan } from '@shared/schemas/plan';
+import type { Plan } from '@shared/schemas/plan';
+import { steadyDaysLabels } from '@shared/schemas/steady-days';
 import { describeTerminalRule } from '@shared/schemas/terminal-rule';
 import { ErrorState, LoadingState } from '@/components/query-state';
 import { JobProgressBar, isJobActive } from '@/components/job-progress';

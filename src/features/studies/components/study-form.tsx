@@ -5,8 +5,10 @@
 import { useState, type FormEvent } from 'react';
 import { useNavigate } from 'react-router-dom';
 import { studyCreateSchema } from '@shared/schemas/study';
+import type { SteadyDays } from '@shared/schemas/steady-days';
 import { FormField, buttonClass, describedBy, inputClass } from '@/components/form-field';
 import { RunSourceFields, emptyRunSource, useRunSourceLists, type RunSource } from '@/components/run-source-fields';
+import { SteadyDaysField } from '@/components/steady-days-field';
 import { fieldErrors, parseNumberInput } from '@/lib/form-values';
 import { fromWallTimeInput } from '@/lib/format';
 import { useCreateStudy } from '../api/create-study';
@@ -21,6 +23,7 @@ export function StudyForm({ initial }: { initial?: Partial<RunSource> }) {
   const [replan, setReplan] = useState('1');
   const [rules, setRules] = useState<string[]>(['free', 'steady-value']);
   const [soc, setSoc] = useState('');
+  const [steadyDays, setSteadyDays] = useState<SteadyDays>('all');
   const [errors, setErrors] = useState<Record<string, string>>({});
   const create = useCreateStudy();
   const { sites, profiles } = useRunSourceLists(source.siteId);
@@ -43,6 +46,7 @@ export function StudyForm({ initial }: { initial?: Partial<RunSource> }) {
       replanHours: parseNumberInput(replan),
       terminalRules: rules,
       initialSocPct: parseNumberInput(soc),
+      steadyDays,
     };
     const parsed = studyCreateSchema.safeParse(body);
     if (!parsed.success) {
@@ -78,6 +82,9 @@ export function StudyForm({ initial }: { initial?: Partial<RunSource> }) {
         {field('horizonsHours', 'Horizons', horizons, setHorizons, 'h', 'Separated by commas; each at least the re-plan interval.')}
         {field('replanHours', 'Re-plan every', replan, setReplan, 'h')}
         {field('initialSocPct', 'Initial SoC', soc, setSoc, '%', 'Empty: as for a new plan.')}
+      </div>
+      <div className="grid gap-4 sm:grid-cols-3">
+        <SteadyDaysField value={steadyDays} onChange={setSteadyDays} error={errors.steadyDays} />
       </div>
       <fieldset className="text-sm">
         <legend className="mb-1 font-semibold text-ink-800">Terminal rules</legend>

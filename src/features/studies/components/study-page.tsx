@@ -1,5 +1,6 @@
 /** A horizon study: its progress while it runs, then the charts, the runs and the recommendation. */
 import { Link, useParams } from 'react-router-dom';
+import { steadyDaysLabels } from '@shared/schemas/steady-days';
 import { ErrorState, LoadingState } from '@/components/query-state';
 import { JobProgressBar } from '@/components/job-progress';
 import { formatDuration, formatLocalTime } from '@/lib/format';
@@ -26,7 +27,8 @@ export function StudyPage() {
         <h1 className="text-2xl font-semibold text-ink-900">Horizon study for {study.batteryName} at {study.siteName}</h1>
         <p className="text-ink-700">
           {formatLocalTime(Date.parse(study.start), tz)} – {formatLocalTime(Date.parse(study.end), tz)}; horizons {study.horizonsHours.join(', ')} h;
-          re-planning every {study.replanHours} h; terminal rules {study.terminalRules.join(', ')}; initial SoC {study.initialSocPct} %.
+          re-planning every {study.replanHours} h; terminal rules {study.terminalRules.join(', ')}; initial SoC {study.initialSocPct} %;
+          steady cycle from {steadyDaysLabels[study.inputs?.steadyDays ?? 'all']}.
           {study.method && ` Method: ${study.method === 'dp' ? 'exact dynamic program (fast path)' : study.method === 'lp' ? 'linear program' : 'both'}.`}
           {results && ` Computed in ${formatDuration(results.seconds)}.`}
         </p>

@@ -1,16 +1,17 @@
 /**
  * The steady cycle from weekdays or weekend days only (DESIGN section 3: "Offer
- * weekday/weekend representative days as an option"), through POST /api/plans,
- * the job and the stored results.
+ * weekday/weekend representative days as an option"), through POST /api/plans and
+ * POST /api/studies, the jobs and the stored results.
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Plan, PlanCreated } from '@shared/schemas/plan';
+import type { Study, StudyCreated } from '@shared/schemas/study';
 import type { JobWorker } from '../../server/jobs/job-worker';
 import { createTestApp } from '../support/test-app';
 import { signInAs, type SignedInAgent } from '../support/auth';
 import { createPlace, HOUR_MS, startTestWorker, stopTestWorker, useOwnJobQueues, waitUntilFinished, type Place } from '../jobs/support';
 
-useOwnJobQueues('plan_steady_days');
+useOwnJobQueues('steady_days');
 const app = createTestApp();
 let planner: SignedInAgent;
 let worker: JobWorker | null = null;
@@ -94,5 +95,30 @@ describe('the steady cycle of a plan', () => {
     });
     expect(response.status).toBe(422);
     expect(response.body.issues).toContainEqual(expect.objectContaining({ path: 'steadyDays', message: 'Choose which days the steady cycle averages: all, weekday or weekend.' }));
+  });
+
+  it('of a horizon study from weekdays only prices the steady-value end as the weekday shape alone would', async () => {
+    // Tuesday and Wednesday, re-planned hourly with lookaheads of 1 to 6 h: every window ends on a weekday, and
+    // with short lookaheads the value of the energy at the end decides what is done now.
+    const study = async (place: Place, extra: Record<string, unknown>) => {
+      const created = await planner.post('/api/studies').send({
+        batteryId: place.batteryId, priceProfileId: place.priceProfileId,
+        start: iso(monday + 24 * HOUR_MS), end: iso(monday + 72 * HOUR_MS),
+        horizonsHours: [1, 3, 6], replanHours: 1, terminalRules: ['steady-value'], initialSocPct: 50, ...extra,
+      });
+      expect(created.status, JSON.stringify(created.body)).toBe(202);
+      const done = await waitUntilFinished<Study>(planner, `/api/studies/${(created.body as StudyCreated).study.id}`);
+      expect(done.job?.state, done.errorMessage ?? '').toBe('completed');
+      return done;
+    };
+    const costs = (s: Study) => s.results!.runs.map((r) => r.cost!);
+    const weekday = await study(mixed, { steadyDays: 'weekday' });
+    expect(weekday.inputs?.steadyDays).toBe('weekday');
+    // [D] Same prices over the period and the same steady cycle (see above): the same realised costs.
+    const reference = await study(weekdaysOnly, {});
+    expect(costs(weekday)).toEqual(costs(reference).map((c) => expect.closeTo(c, 6)));
+    // The every-day cycle values the end energy otherwise, so at least one run differs.
+    const everyDay = await study(mixed, {});
+    expect(costs(everyDay).some((c, i) => Math.abs(c - costs(weekday)[i]!) > 1e-3)).toBe(true);
   });
 });
