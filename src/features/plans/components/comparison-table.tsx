@@ -1,10 +1,22 @@
 import { Link } from 'react-router-dom';
 import type { Plan } from '@shared/schemas/plan';
 import { formatMoney, formatNumber, formatPercent, formatSteps } from '@/lib/format';
+import { ruleLabel } from './comparison-labels';
 
-/** Largest SoC difference over the delivery window against the longest horizon with the same rule, % of nameplate. */
+/**
+ * The plan the others are measured against: the longest horizon computed, the same rule preferred
+ * among equally long ones. Far enough ahead the terminal rule hardly matters (the turnpike property),
+ * so the longest plan stands for "what more lookahead would do", whatever its rule.
+ */
+function longestFor(plan: Plan, plans: Plan[]): Plan | undefined {
+  return plans
+    .filter((p) => p.results)
+    .sort((a, b) => b.horizonHours - a.horizonHours || Number(b.terminalRule === plan.terminalRule) - Number(a.terminalRule === plan.terminalRule))[0];
+}
+
+/** Largest SoC difference over the delivery window against the longest plan, % of nameplate. */
 function differenceToLongest(plan: Plan, plans: Plan[]): number | null {
-  const longest = plans.filter((p) => p.terminalRule === plan.terminalRule && p.results).sort((a, b) => b.horizonHours - a.horizonHours)[0];
+  const longest = longestFor(plan, plans);
   if (!longest?.results || !plan.results || longest.id === plan.id) return null;
   const n = Math.min(plan.results.deliverySteps, longest.results.deliverySteps);
   let max = 0;
@@ -20,7 +32,7 @@ export function ComparisonTable({ plans }: { plans: Plan[] }) {
         <caption className="sr-only">Plans of this delivery window by horizon and terminal rule</caption>
         <thead className="bg-ink-100 text-ink-700">
           <tr>
-            {['Horizon', 'Terminal rule', 'Method', 'Cost', 'Earnings', 'Near-steady', 'Entry arc', 'Leaving arc', 'Commit window', 'Max SoC gap to longest', 'Flags'].map((h) => (
+            {['Horizon', 'Terminal rule', 'Method', 'Cost', 'Earnings', 'Near-steady', 'Entry arc', 'Leaving arc', 'Commit window', 'Max SoC gap to longest plan', 'Flags'].map((h) => (
               <th key={h} scope="col" className="whitespace-nowrap px-2 py-1.5">{h}</th>
             ))}
           </tr>
@@ -33,7 +45,7 @@ export function ComparisonTable({ plans }: { plans: Plan[] }) {
             return (
               <tr key={p.id} className="border-t border-ink-100 tabular-nums">
                 <td className="px-2 py-1"><Link to={`/plans/${p.id}`} className="font-semibold text-seaglass-700 underline">{p.horizonHours} h</Link></td>
-                <td className="px-2 py-1">{p.terminalRule}</td>
+                <td className="px-2 py-1">{ruleLabel(p)}</td>
                 <td className="px-2 py-1">{p.method ?? p.job?.state ?? ''}</td>
                 <td className="px-2 py-1">{formatMoney(r?.summary.cost, currency)}</td>
                 <td className="px-2 py-1">{formatMoney(r?.summary.earnings, currency)}</td>

@@ -5,6 +5,7 @@ import { ChartFigure, ChartPlot } from '@/components/charts/chart-frame';
 import { seriesPalette as palette } from '@/components/charts/chart-theme';
 import { formatNumber } from '@/lib/format';
 import { timeTick } from './chart-data';
+import { planLabels } from '../comparison-labels';
 
 export interface ComparisonChartProps {
   plans: Plan[];
@@ -12,18 +13,18 @@ export interface ComparisonChartProps {
 }
 
 export default function ComparisonChart({ plans, timeZone }: ComparisonChartProps) {
-  const label = (p: Plan) => `${p.horizonHours} h, ${p.terminalRule}`;
+  const labels = planLabels(plans);
   return (
     <ChartFigure
       caption="SoC over the delivery window, by horizon and terminal rule"
-      legend={plans.map((p, i) => ({ colour: palette[i % palette.length]!, label: label(p), dashed: p.terminalRule === 'free' }))}
+      legend={plans.map((p, i) => ({ colour: palette[i % palette.length]!, label: labels[i]!, dashed: p.terminalRule === 'free' }))}
     >
       <ChartPlot height={280} gridTicks={5} xScale={{ type: 'time' }} yScale={{ type: 'linear', domain: [0, 100] }}
         accessibilityLabel="SoC curves of the compared plans; the figures are in the table above">
         <Axis orientation="bottom" numTicks={6} tickFormat={timeTick(timeZone)} />
         <Axis orientation="left" numTicks={5} label="SoC %" />
         {plans.map((p, i) => (
-          <LineSeries key={p.id} dataKey={label(p)} data={p.results!.steps.slice(0, p.results!.deliverySteps)}
+          <LineSeries key={p.id} dataKey={labels[i]!} data={p.results!.steps.slice(0, p.results!.deliverySteps)}
             xAccessor={(s: PlanStep) => new Date(Date.parse(s.time) + p.results!.stepMinutes * 60_000)} yAccessor={(s: PlanStep) => s.socPct} stroke={palette[i % palette.length]} strokeWidth={2}
             strokeDasharray={p.terminalRule === 'free' ? '6 3' : undefined} />
         ))}
