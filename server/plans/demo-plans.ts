@@ -105,8 +105,8 @@ export async function seedDemoPlans(log: (m: string) => void, databaseUrl: strin
     await approvePlan(signOffActor('approver'), approved.id, { version: submitted.version, comment: 'Checked against the site limits and the operator’s instructions.' });
 
     // Saturday's plan starts where the approved one ends, and waits for the approver. Sunday has
-    // four horizons side by side: the short free-end plan sells off the energy that the longer
-    // ones keep for Monday morning (the leaving arc).
+    // four horizons side by side: both 24 h plans sell off at night what the 48 h and 168 h plans
+    // keep for Monday morning (the one-day steady cycle values energy at midnight too low for that).
     const saturdayId = await queuePlan({ deliveryStart: day('2026-12-05'), deliveryEnd: day('2026-12-06'), horizonHours: 48, terminalRule: 'steady-value' });
     const sunday: [number, 'free' | 'steady-value'][] = [[24, 'free'], [24, 'steady-value'], [48, 'steady-value'], [168, 'steady-value']];
     const sundayIds = await Promise.all(
