@@ -54,7 +54,7 @@ export const compactSelect = 'rounded border border-ink-300 bg-white px-2 py-1 t
 
 export const buttonClass = {
   primary:
-    'rounded bg-seaglass-700 px-4 py-2 text-sm font-semibold text-white hover:bg-seaglass-600 disabled:cursor-not-allowed disabled:opacity-50',
+    'rounded bg-seaglass-700 px-4 py-2 text-sm font-semibold text-white hover:bg-seaglass-800 disabled:cursor-not-allowed disabled:opacity-50',
   secondary: 'rounded border border-ink-300 bg-white px-4 py-2 text-sm font-medium text-ink-800 hover:bg-ink-50 disabled:opacity-50',
   danger: 'rounded border border-brick-600 bg-white px-3 py-1.5 text-sm font-medium text-brick-700 hover:bg-brick-100 disabled:opacity-50',
 };
@@ -63,7 +63,7 @@ export const buttonClass = {
 export function WarningNote({ message, id }: { message: string; id?: string }) {
   return (
     <p id={id} className="rounded bg-amber-100 px-2 py-1 text-sm text-ink-900">
-      <span className="font-semibold text-amber-600">Check: </span>
+      <span className="font-semibold text-amber-700">Check: </span>
       {message}
     </p>
   );

@@ -42,7 +42,7 @@ export function JobProgressBar({ job, label }: { job: JobProgress; label: string
       </div>
       {job.message && !failed && <p className="text-xs text-ink-500">{job.message}</p>}
       {job.error && job.state !== 'completed' && (
-        <p className={`text-sm ${failed ? 'text-brick-700' : 'text-amber-600'}`} role={failed ? 'alert' : undefined}>
+        <p className={`text-sm ${failed ? 'text-brick-700' : 'text-amber-700'}`} role={failed ? 'alert' : undefined}>
           {job.error}
         </p>
       )}

@@ -83,7 +83,7 @@ describe('approving a schedule', () => {
         await approverPage.getByRole('navigation', { name: 'On this page' }).getByRole('link', { name: 'Cautions' }).click();
         await approverPage.waitForURL(/#cautions-heading$/);
         expect(await approverPage.getByRole('heading', { name: 'Cautions' }).isVisible()).toBe(true);
-        const cautions = approverPage.getByRole('complementary', { name: 'Before you sign off' });
+        const cautions = approverPage.getByRole('note', { name: 'Before you sign off' });
         expect(await cautions.innerText()).toMatch(/interconnection agreement[\s\S]*operating limits[\s\S]*fire and safety/);
         await expect
           .poll(() => approverPage.getByRole('region', { name: 'Cautions' }).innerText())

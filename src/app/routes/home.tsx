@@ -20,7 +20,7 @@ export function HomeRoute() {
         </div>
         {canPlan && (
           <div className="flex gap-2">
-            <Link to="/plans/new" className="rounded bg-seaglass-700 px-4 py-2 text-sm font-semibold text-white hover:bg-seaglass-600">New plan</Link>
+            <Link to="/plans/new" className="rounded bg-seaglass-700 px-4 py-2 text-sm font-semibold text-white hover:bg-seaglass-800">New plan</Link>
             <Link to="/studies/new" className="rounded border border-ink-300 bg-white px-4 py-2 text-sm font-medium text-ink-800 hover:bg-ink-50">New horizon study</Link>
           </div>
         )}

@@ -53,7 +53,7 @@ export function AccountMenu({ user }: { user: AuthUser }) {
       >
         <span
           aria-hidden="true"
-          className="grid h-8 w-8 place-items-center rounded-full bg-seaglass-600 text-xs font-bold text-white"
+          className="grid h-8 w-8 place-items-center rounded-full bg-seaglass-700 text-xs font-bold text-white"
         >
           {initials(user.name)}
         </span>

@@ -5,7 +5,7 @@ import { TideIllustration } from './tide-illustration';
 
 /** The full-width submit button of the pages seen before signing in. */
 export const wideButton =
-  'w-full rounded bg-seaglass-700 px-4 py-2.5 text-base font-semibold text-white hover:bg-seaglass-600 disabled:cursor-not-allowed disabled:opacity-50';
+  'w-full rounded bg-seaglass-700 px-4 py-2.5 text-base font-semibold text-white hover:bg-seaglass-800 disabled:cursor-not-allowed disabled:opacity-50';
 
 /** A link between the pages seen before signing in. */
 export function FrameLink({ to, children }: { to: string; children: ReactNode }) {

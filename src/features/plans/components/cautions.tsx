@@ -19,7 +19,7 @@ export function Cautions({ warnings }: { warnings: readonly string[] }) {
       </ul>
       {warnings.length > 0 && (
         <>
-          <h3 className="mt-3 font-semibold text-amber-600">Settings outside common practice</h3>
+          <h3 className="mt-3 font-semibold text-amber-700">Settings outside common practice</h3>
           <ul className="mt-1 list-disc space-y-1 pl-5">
             {warnings.map((text) => (
               <li key={text}>{text}</li>

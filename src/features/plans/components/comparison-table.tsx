@@ -2,6 +2,7 @@ import { Link } from 'react-router-dom';
 import type { Plan } from '@shared/schemas/plan';
 import { formatMoney, formatNumber, formatPercent, formatSteps } from '@/lib/format';
 import { ruleLabel } from './comparison-labels';
+import { ScrollRegion } from '@/components/scroll-region';
 
 /**
  * The plan the others are measured against: the longest horizon computed, the same rule preferred
@@ -27,7 +28,7 @@ function differenceToLongest(plan: Plan, plans: Plan[]): number | null {
 export function ComparisonTable({ plans }: { plans: Plan[] }) {
   const currency = plans[0]?.inputs?.site.currency ?? '';
   return (
-    <div className="overflow-x-auto">
+    <ScrollRegion label="Comparison table (scrolls sideways)">
       <table className="w-full rounded bg-white text-left text-sm shadow-sm">
         <caption className="sr-only">Plans of this delivery window by horizon and terminal rule</caption>
         <thead className="bg-ink-100 text-ink-700">
@@ -57,7 +58,7 @@ export function ComparisonTable({ plans }: { plans: Plan[] }) {
                 <td className="px-2 py-1">
                   {/* Flagged plans stand out in amber (DESIGN section 7); the flags' words are on the plan page. */}
                   {r && r.turnpike.flags.length > 0 ? (
-                    <span className="rounded bg-amber-100 px-1.5 py-0.5 font-semibold text-amber-600" title={r.turnpike.flags.join('\n')}>
+                    <span className="rounded bg-amber-100 px-1.5 py-0.5 font-semibold text-amber-700" title={r.turnpike.flags.join('\n')}>
                       {r.turnpike.flags.length} {r.turnpike.flags.length === 1 ? 'flag' : 'flags'}
                     </span>
                   ) : r ? (
@@ -71,6 +72,6 @@ export function ComparisonTable({ plans }: { plans: Plan[] }) {
           })}
         </tbody>
       </table>
-    </div>
+    </ScrollRegion>
   );
 }

@@ -1,5 +1,6 @@
 import { useSearchParams } from 'react-router-dom';
 import { useCan } from '@/lib/authorization';
+import { NotForRole } from '@/components/not-for-role';
 import { PlanForm } from './plan-form';
 import { prefillFromSearch } from './new-plan-prefill';
 
@@ -7,7 +8,7 @@ import { prefillFromSearch } from './new-plan-prefill';
 export function NewPlanPage() {
   const [params] = useSearchParams();
   const canEdit = useCan('data.edit');
-  if (!canEdit) return <p role="alert" className="rounded bg-white p-6 text-ink-700">Your role can read plans but not start them; ask a planner.</p>;
+  if (!canEdit) return <NotForRole title="New plan">Your role can read plans but not start them; ask a planner.</NotForRole>;
   return (
     <section className="max-w-4xl space-y-4">
       <h1 className="text-2xl font-semibold text-ink-900">New plan</h1>

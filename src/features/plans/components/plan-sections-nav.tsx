@@ -20,7 +20,7 @@ export function PlanSectionsNav({ sections }: { sections: readonly PlanSection[]
               href={`#${section.id}`}
               className={
                 section.tone === 'caution'
-                  ? 'font-semibold text-amber-600 underline-offset-2 hover:underline'
+                  ? 'font-semibold text-amber-700 underline-offset-2 hover:underline'
                   : 'font-medium text-ink-700 underline-offset-2 hover:text-ink-900 hover:underline'
               }
             >

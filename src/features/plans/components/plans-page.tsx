@@ -31,7 +31,7 @@ export function PlansPage() {
       <div className="flex flex-wrap items-center justify-between gap-3">
         <h1 className="text-2xl font-semibold text-ink-900">Plans</h1>
         {canPlan && (
-          <Link to="/plans/new" className="rounded bg-seaglass-700 px-4 py-2 text-sm font-semibold text-white hover:bg-seaglass-600">
+          <Link to="/plans/new" className="rounded bg-seaglass-700 px-4 py-2 text-sm font-semibold text-white hover:bg-seaglass-800">
             New plan
           </Link>
         )}

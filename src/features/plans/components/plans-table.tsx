@@ -2,13 +2,14 @@ import { Link } from 'react-router-dom';
 import type { Plan } from '@shared/schemas/plan';
 import { useSiteTime } from '@/components/use-site-time';
 import { formatMoney, formatPercent } from '@/lib/format';
+import { ScrollRegion } from '@/components/scroll-region';
 
 /** One row per plan: window, horizon, status, the job and the headline figures. */
 export function PlansTable({ plans }: { plans: Plan[] }) {
   // Windows in each site's own local time: planners think in the site's clock, and sites may differ.
   const { local } = useSiteTime();
   return (
-    <div className="overflow-x-auto">
+    <ScrollRegion label="Plans table (scrolls sideways)">
       <table className="w-full rounded bg-white text-left text-sm shadow-sm">
         <thead className="bg-ink-100 text-ink-700">
           <tr>
@@ -34,11 +35,11 @@ export function PlansTable({ plans }: { plans: Plan[] }) {
               </td>
               <td className="px-2 py-1">{formatMoney(p.headline?.cost, '')}</td>
               <td className="px-2 py-1">{formatPercent(p.headline?.nearSteadyShare)}</td>
-              <td className={`px-2 py-1 ${p.headline?.flags ? 'font-semibold text-amber-600' : ''}`}>{p.headline ? p.headline.flags : '–'}</td>
+              <td className={`px-2 py-1 ${p.headline?.flags ? 'font-semibold text-amber-700' : ''}`}>{p.headline ? p.headline.flags : '–'}</td>
             </tr>
           ))}
         </tbody>
       </table>
-    </div>
+    </ScrollRegion>
   );
 }

@@ -7,6 +7,7 @@ import { createColumnHelper, createPaginatedRowModel, rowPaginationFeature, tabl
 import type { PlanResults, PlanStep } from '@shared/schemas/plan';
 import { buttonClass } from '@/components/form-field';
 import { formatLocalTime, formatNumber } from '@/lib/format';
+import { ScrollRegion } from '@/components/scroll-region';
 
 const features = tableFeatures({ rowPaginationFeature, paginatedRowModel: createPaginatedRowModel() });
 const helper = createColumnHelper<typeof features, PlanStep>();
@@ -37,7 +38,7 @@ export function ScheduleTable({ results, timeZone, currency, energyKwh }: { resu
   const { pageIndex } = table.state.pagination;
   return (
     <div className="space-y-2">
-      <div className="overflow-x-auto">
+      <ScrollRegion label="Schedule table (scrolls sideways)">
         <table className="w-full rounded bg-white text-left text-sm shadow-sm">
           <caption className="sr-only">Schedule, one row per step; page {pageIndex + 1} of {table.getPageCount()}</caption>
           <thead className="bg-ink-100 text-ink-700">
@@ -66,7 +67,7 @@ export function ScheduleTable({ results, timeZone, currency, energyKwh }: { resu
             ))}
           </tbody>
         </table>
-      </div>
+      </ScrollRegion>
       <nav aria-label="Pages of the schedule" className="flex items-center gap-2 text-sm">
         <button type="button" className={buttonClass.secondary} onClick={() => table.previousPage()} disabled={!table.getCanPreviousPage()}>
           Previous

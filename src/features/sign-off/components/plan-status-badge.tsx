@@ -4,7 +4,7 @@ const LOOK: Record<PlanStatus, { label: string; className: string }> = {
   draft: { label: 'Draft: not approved', className: 'bg-ink-100 text-ink-800' },
   submitted: { label: 'Submitted: awaiting sign-off', className: 'bg-amber-100 text-ink-900' },
   approved: { label: 'Approved', className: 'bg-seaglass-100 text-seaglass-700' },
-  rejected: { label: 'Rejected', className: 'bg-amber-100 text-amber-600' },
+  rejected: { label: 'Rejected', className: 'bg-amber-100 text-amber-700' },
   superseded: { label: 'Superseded: not current', className: 'bg-ink-100 text-ink-500' },
 };
 

@@ -83,7 +83,7 @@ export function SignOffActions({ record }: { record: SignOffRecord }) {
             type="button"
             disabled={busy || comment.trim() === ''}
             onClick={() => reject.mutate({ planId: record.planId, version: record.version, comment: comment.trim() })}
-            className={`${button} border border-amber-600 bg-white text-amber-600`}
+            className={`${button} border border-amber-600 bg-white text-amber-700`}
           >
             Reject
           </button>

@@ -4,7 +4,7 @@ import { SIGN_OFF_CAUTIONS } from '@shared/schemas/sign-off';
 export function SignOffCautions() {
   return (
     <aside aria-label="Before you sign off" className="rounded border border-amber-500 bg-amber-100 p-4 text-sm text-ink-900">
-      <p className="font-semibold text-amber-600">Before you sign off</p>
+      <p className="font-semibold text-amber-700">Before you sign off</p>
       <ul className="mt-2 list-disc space-y-1 pl-5">
         {SIGN_OFF_CAUTIONS.map((line) => (
           <li key={line}>{line}</li>
@@ -20,14 +20,15 @@ export function SignOffCautions() {
  */
 export function SignOffCautionsReminder({ cautionsId }: { cautionsId: string }) {
   return (
-    <aside aria-label="Before you sign off" className="rounded border border-amber-500 bg-amber-100 p-3 text-sm text-ink-900">
-      <span className="font-semibold text-amber-600">Before you sign off</span>, read the{' '}
+    // A note, not an aside: it sits inside the sign-off region (complementary landmarks stay top level).
+    <div role="note" aria-label="Before you sign off" className="rounded border border-amber-500 bg-amber-100 p-3 text-sm text-ink-900">
+      <span className="font-semibold text-amber-700">Before you sign off</span>, read the{' '}
       <a href={`#${cautionsId}`} className="font-semibold underline">
         cautions
       </a>{' '}
       above: the interconnection agreement, the grid code and the system operator&rsquo;s instructions, the battery maker&rsquo;s
       operating limits and the site&rsquo;s fire and safety requirements come before this schedule; qualified personnel decide
       dispatch.
-    </aside>
+    </div>
   );
 }

@@ -36,7 +36,7 @@ export function SignOffPanel({ planId }: { planId: string }) {
           <a href={exportPlanUrl(planId)} download className="font-semibold text-seaglass-700 underline">
             Export the schedule as CSV
           </a>
-          {notApproved && <span className="ml-2 font-semibold text-amber-600">The file will be marked NOT APPROVED.</span>}
+          {notApproved && <span className="ml-2 font-semibold text-amber-700">The file will be marked NOT APPROVED.</span>}
         </p>
       )}
       <div>

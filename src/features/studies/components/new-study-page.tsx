@@ -1,11 +1,12 @@
 import { useSearchParams } from 'react-router-dom';
 import { useCan } from '@/lib/authorization';
+import { NotForRole } from '@/components/not-for-role';
 import { StudyForm } from './study-form';
 
 export function NewStudyPage() {
   const [params] = useSearchParams();
   const canEdit = useCan('data.edit');
-  if (!canEdit) return <p role="alert" className="rounded bg-white p-6 text-ink-700">Your role can read horizon studies but not start them; ask a planner.</p>;
+  if (!canEdit) return <NotForRole title="New horizon study">Your role can read horizon studies but not start them; ask a planner.</NotForRole>;
   return (
     <section className="max-w-4xl space-y-4">
       <h1 className="text-2xl font-semibold text-ink-900">New horizon study</h1>

@@ -28,7 +28,7 @@ export function StudiesPage() {
     <section className="space-y-4">
       <div className="flex flex-wrap items-center justify-between gap-3">
         <h1 className="text-2xl font-semibold text-ink-900">Horizon studies</h1>
-        {canRun && <Link to="/studies/new" className="rounded bg-seaglass-700 px-4 py-2 text-sm font-semibold text-white hover:bg-seaglass-600">New study</Link>}
+        {canRun && <Link to="/studies/new" className="rounded bg-seaglass-700 px-4 py-2 text-sm font-semibold text-white hover:bg-seaglass-800">New study</Link>}
       </div>
       <div className="grid gap-3 sm:grid-cols-2" role="search">
         <SiteFilter value={siteId ?? ''} onChange={(id) => setFilter('siteId', id)} />

@@ -43,7 +43,7 @@ function ByHorizon({ runs, title, label, value, extra }: { runs: StudyRun[]; tit
             <span className="inline-block h-1 w-4" style={{ background: palette[i % palette.length] }} /> {rule}
           </li>
         ))}
-        {extra && <li className="text-amber-600">dashed: {extra.text}</li>}
+        {extra && <li className="text-amber-700">dashed: {extra.text}</li>}
       </ul>
     </ChartFigure>
   );

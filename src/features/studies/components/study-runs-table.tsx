@@ -1,12 +1,13 @@
 import type { StudyResults } from '@shared/schemas/study';
 import { formatDuration, formatMoney, formatNumber, formatPercent } from '@/lib/format';
+import { ScrollRegion } from '@/components/scroll-region';
 
 /** Every closed-loop run: the numbers behind the charts. */
 export function StudyRunsTable({ results, currency }: { results: StudyResults; currency: string }) {
   const runs = [...results.runs].sort((a, b) => a.horizonHours - b.horizonHours || a.terminal.localeCompare(b.terminal));
   const rec = results.recommendation;
   return (
-    <div className="overflow-x-auto">
+    <ScrollRegion label="Runs table (scrolls sideways)">
       <table className="w-full rounded bg-white text-left text-sm shadow-sm">
         <caption className="px-2 py-1 text-left text-xs text-ink-500">
           Reference path over the period: {formatMoney(results.referenceCost, currency)} ({formatNumber(results.referenceEquivalentCycles, 1)} equivalent cycles)
@@ -39,6 +40,6 @@ export function StudyRunsTable({ results, currency }: { results: StudyResults; c
           })}
         </tbody>
       </table>
-    </div>
+    </ScrollRegion>
   );
 }

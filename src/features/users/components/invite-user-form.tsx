@@ -78,7 +78,7 @@ export function InviteUserForm() {
       <div aria-live="polite" className="mt-3 text-sm">
         {general && <p className="text-brick-700">{general}</p>}
         {invite.data && (
-          <p className={invite.data.mail === 'sent' ? 'text-seaglass-700' : 'text-amber-600'}>
+          <p className={invite.data.mail === 'sent' ? 'text-seaglass-700' : 'text-amber-700'}>
             {invite.data.mail === 'sent'
               ? `Invitation sent to ${invite.data.user.email}. The link works once, for 72 hours.`
               : `${invite.data.user.email} was added, but the e-mail could not be sent. Use "Send a new link" once mail works.`}

@@ -33,7 +33,7 @@ const helper = createColumnHelper<typeof features, User>();
 
 const statusStyle: Record<User['status'], string> = {
   active: 'bg-seaglass-100 text-seaglass-700',
-  invited: 'bg-amber-100 text-amber-600',
+  invited: 'bg-amber-100 text-amber-700',
   disabled: 'bg-ink-100 text-ink-500',
 };
 

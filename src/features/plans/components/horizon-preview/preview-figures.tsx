@@ -46,7 +46,7 @@ export function PreviewFigures({ preview, planHorizonHours, currency, makePlanUr
         </ul>
       )}
       {makePlanUrl && (
-        <Link to={makePlanUrl} className="inline-block rounded bg-seaglass-700 px-4 py-2 text-sm font-semibold text-white hover:bg-seaglass-600">
+        <Link to={makePlanUrl} className="inline-block rounded bg-seaglass-700 px-4 py-2 text-sm font-semibold text-white hover:bg-seaglass-800">
           Make a plan with {h}
         </Link>
       )}
