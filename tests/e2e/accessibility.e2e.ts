@@ -5,9 +5,9 @@
  * keyboard use and labels are also checked in the journeys.
  */
 import { createRequire } from 'node:module';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Browser, Page } from 'playwright-core';
-import { launchBrowser, newLocalContext } from './support/browser';
+import { describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { newLocalContext, useBrowser } from './support/browser';
 import { apiGet, appUrl, signInByApi, type DemoRole } from './support/session';
 
 const axeScript = createRequire(import.meta.url).resolve('axe-core/axe.min.js');
@@ -35,17 +35,11 @@ async function violationsOn(page: Page, pathname: string): Promise<string[]> {
 }
 
 describe('accessibility of the main screens', () => {
-  let browser: Browser;
-  beforeAll(async () => {
-    browser = await launchBrowser();
-  });
-  afterAll(async () => {
-    await browser?.close();
-  });
+  const browser = useBrowser();
 
   async function scan(role: DemoRole, paths: (page: Page) => Promise<string[]>): Promise<void> {
     // axe is injected as a script tag, which the app's Content-Security-Policy rightly refuses: bypassed for the test only.
-    const { context, offsite } = await newLocalContext(browser, { bypassCSP: true });
+    const { context, offsite } = await newLocalContext(browser(), { bypassCSP: true });
     await signInByApi(context, role);
     const page = await context.newPage();
     await page.goto(appUrl('/'));
