@@ -22,9 +22,17 @@ interface Violation {
 async function violationsOn(page: Page, pathname: string): Promise<string[]> {
   await page.goto(appUrl(pathname));
   await page.getByRole('heading', { level: 1 }).first().waitFor({ timeout: 30_000 });
-  await page.waitForLoadState('networkidle');
-  // Lazily loaded charts draw once they have measured their box.
-  await page.waitForTimeout(500);
+  // Scan the page as it settles, not a loading state: no "Loading…" left (queries, lazy charts), and
+  // every chart drawn (they draw once they have measured their box). Pages may keep polling, so no
+  // wait for an idle network.
+  await page.waitForFunction(
+    () =>
+      [...document.querySelectorAll('[role="status"]')].every((el) => !el.textContent?.startsWith('Loading')) &&
+      [...document.querySelectorAll('figure')].every((figure) => figure.querySelector('svg path') !== null),
+    undefined,
+    { timeout: 30_000 },
+  );
+  await page.waitForTimeout(300);
   await page.addScriptTag({ path: axeScript });
   const violations = await page.evaluate(async () => {
     const axe = (window as unknown as { axe: { run: (ctx: Document, options: object) => Promise<{ violations: Violation[] }> } }).axe;
