@@ -3,37 +3,28 @@
  * shared test database holds admins made by other test files running at the same time.
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import pg from 'pg';
 import { eq } from 'drizzle-orm';
 import { closeDb, getDb, initDb } from '../../server/db/client';
 import { users } from '../../server/users/users.schema';
 import { ensureDatabase, migrateDatabase } from '../../scripts/lib/database';
-import { testDatabaseUrl } from '../support/database-url';
+import { scratchDatabase } from '../support/scratch-database';
 import { createTestApp } from '../support/test-app';
 import { createUser, signInAs } from '../support/auth';
 
-const scratchName = `slackwater_last_admin_${process.pid}_${Date.now()}`;
-const urlFor = (database: string) => {
-  const url = new URL(testDatabaseUrl());
-  url.pathname = `/${database}`;
-  return url.toString();
-};
+const scratch = scratchDatabase('last_admin');
 
 let app: ReturnType<typeof createTestApp>;
 
 beforeAll(async () => {
-  await ensureDatabase(urlFor(scratchName));
-  await migrateDatabase(urlFor(scratchName));
-  initDb(urlFor(scratchName), 5); // createTestApp and the helpers reuse this pool
+  await ensureDatabase(scratch.url);
+  await migrateDatabase(scratch.url);
+  initDb(scratch.url, 5); // createTestApp and the helpers reuse this pool
   app = createTestApp();
 });
 
 afterAll(async () => {
   await closeDb();
-  const client = new pg.Client({ connectionString: urlFor('postgres') });
-  await client.connect();
-  await client.query(`drop database if exists "${scratchName}" with (force)`);
-  await client.end();
+  await scratch.drop();
 });
 
 describe('the last active admin', () => {

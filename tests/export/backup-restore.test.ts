@@ -11,11 +11,11 @@ import { mkdtempSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import canonicalize from 'canonicalize';
-import pg from 'pg';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createTestApp } from '../support/test-app';
 import { signInAs, type SignedInAgent } from '../support/auth';
 import { testDatabaseUrl } from '../support/database-url';
+import { databaseUrlFor, dropDatabase, sqlAt } from '../support/scratch-database';
 import { createPlace, insertDraftPlan, type Place } from '../sign-off/support';
 
 const app = createTestApp();
@@ -24,7 +24,6 @@ const tsx = path.join(root, 'node_modules', '.bin', 'tsx');
 const dir = mkdtempSync(path.join(os.tmpdir(), 'slackwater-backup-'));
 const archive = path.join(dir, 'slackwater.dump');
 const restoredName = `slackwater_restored_${process.pid}_${Date.now()}`;
-const urlOf = (name: string) => Object.assign(new URL(testDatabaseUrl()), { pathname: `/${name}` }).toString();
 
 let planner: SignedInAgent;
 let approver: SignedInAgent;
@@ -41,19 +40,10 @@ function script(name: string, args: string[]) {
   });
 }
 
-async function query<T extends pg.QueryResultRow>(url: string, text: string, params: unknown[] = []): Promise<T[]> {
-  const client = new pg.Client({ connectionString: url });
-  await client.connect();
-  try {
-    return (await client.query<T>(text, params)).rows;
-  } finally {
-    await client.end();
-  }
-}
 
 /** Plans whose stored checksum does not match their stored content, computed outside the app. */
 async function mismatching(url: string): Promise<Set<string>> {
-  const rows = await query<{ id: string; checksum: string; inputs: unknown; results: unknown }>(
+  const rows = await sqlAt<{ id: string; checksum: string; inputs: unknown; results: unknown }>(
     url,
     "select id, checksum, inputs, results from plans where status in ('approved', 'superseded')",
   );
@@ -82,7 +72,7 @@ beforeAll(async () => {
 });
 
 afterAll(async () => {
-  await query(urlOf('postgres'), `drop database if exists "${restoredName}" with (force)`);
+  await dropDatabase(restoredName);
   rmSync(dir, { recursive: true, force: true });
 });
 
@@ -97,7 +87,7 @@ describe('backup and restore', () => {
 
   it('npm run db:restore loads it into a fresh database where every approved plan still verifies', async () => {
     const run = script('db-restore.ts', [archive, '--into', restoredName]);
-    const restoredUrl = urlOf(restoredName);
+    const restoredUrl = databaseUrlFor(restoredName);
     // Other test files may have tampered plans on purpose before the dump; the script
     // reports those (and only those) and exits 1 then. Tampering is never undone, so
     // whatever mismatches in the copy must also mismatch in the source now.
@@ -107,7 +97,7 @@ describe('backup and restore', () => {
     expect(run.stdout).toMatch(new RegExp(`Restored .* into "${restoredName}"`));
     expect(run.stdout).toMatch(/Signed-off plans checked: \d+; checksums verified: \d+/);
 
-    const rows = await query<{ id: string; status: string; checksum: string }>(
+    const rows = await sqlAt<{ id: string; status: string; checksum: string }>(
       restoredUrl,
       'select id, status, checksum from plans where id = any($1)',
       [[...approved.keys()]],
@@ -122,18 +112,18 @@ describe('backup and restore', () => {
 
   it('restores the guards too: the copy refuses changes to an approved plan', async () => {
     const [id] = [...approved.keys()].slice(-1);
-    await expect(query(urlOf(restoredName), 'delete from plans where id = $1', [id])).rejects.toThrow(
+    await expect(sqlAt(databaseUrlFor(restoredName), 'delete from plans where id = $1', [id])).rejects.toThrow(
       /signed-off plan cannot be deleted/,
     );
-    await expect(query(urlOf(restoredName), "update plan_events set comment = 'x'")).rejects.toThrow(/append-only/);
+    await expect(sqlAt(databaseUrlFor(restoredName), "update plan_events set comment = 'x'")).rejects.toThrow(/append-only/);
   });
 
   it('refuses to restore into a database that is not empty, and changes nothing there', async () => {
-    const before = await query<{ n: number }>(urlOf(restoredName), 'select count(*)::int as n from plans');
+    const before = await sqlAt<{ n: number }>(databaseUrlFor(restoredName), 'select count(*)::int as n from plans');
     const run = script('db-restore.ts', [archive, '--into', restoredName]);
     expect(run.status).toBe(1);
     expect(run.stderr).toMatch(new RegExp(`The database "${restoredName}" is not empty .* so nothing was restored`));
-    expect(await query<{ n: number }>(urlOf(restoredName), 'select count(*)::int as n from plans')).toEqual(before);
+    expect(await sqlAt<{ n: number }>(databaseUrlFor(restoredName), 'select count(*)::int as n from plans')).toEqual(before);
   });
 
   it('refuses a file that is not a pg_dump archive, naming it', () => {

@@ -6,26 +6,12 @@
  */
 import { spawn } from 'node:child_process';
 import { afterAll, describe, expect, it } from 'vitest';
-import pg from 'pg';
-import { testDatabaseUrl } from '../support/database-url';
+import type pg from 'pg';
+import { scratchDatabase, sqlAt } from '../support/scratch-database';
 
-const scratchName = `slackwater_demo_${process.pid}_${Date.now()}`;
-const urlFor = (name: string) => {
-  const url = new URL(testDatabaseUrl());
-  url.pathname = `/${name}`;
-  return url.toString();
-};
-const scratchUrl = urlFor(scratchName);
-
-async function query<T extends pg.QueryResultRow>(text: string, url = scratchUrl) {
-  const client = new pg.Client({ connectionString: url });
-  await client.connect();
-  try {
-    return (await client.query<T>(text)).rows;
-  } finally {
-    await client.end();
-  }
-}
+const scratch = scratchDatabase('demo');
+const scratchUrl = scratch.url;
+const query = <T extends pg.QueryResultRow>(text: string) => sqlAt<T>(scratchUrl, text);
 
 interface PlanRow {
   id: string;
@@ -73,7 +59,7 @@ function prepareDemo(limitMs = 150_000): Promise<string> {
 
 describe('the demo scenario', () => {
   afterAll(async () => {
-    await query(`drop database if exists "${scratchName}" with (force)`, urlFor('postgres'));
+    await scratch.drop();
   });
 
   it('holds an approved plan, the next day awaiting sign-off from its end SoC, four horizons of one Sunday and a finished study; the process exits; a second load adds nothing', async () => {

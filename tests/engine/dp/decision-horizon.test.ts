@@ -12,6 +12,19 @@ function truncate(p: DispatchProblem, steps: number): DispatchProblem {
   };
 }
 
+/**
+ * The certificate checked at one lookahead: the DP with that lookahead takes the same first decisions,
+ * bit for bit, and ([S] GLPK on the truncated problem) fixing the first SoCs to them costs nothing,
+ * i.e. those decisions are optimal at this depth too.
+ */
+function expectSameFirstDecisions(cut: DispatchProblem, first: number[], label: string) {
+  expect(solveDispatchDp(cut).socKwh.slice(1, first.length + 1), label).toEqual(first);
+  const free = solveWithGlpk(cut);
+  const fixed = solveWithGlpk(cut, { fixSocKwh: first });
+  expect(fixed.status, label).toBe('optimal');
+  expect(Math.abs(fixed.objective - free.objective), label).toBeLessThanOrEqual(1e-9 * Math.max(1, Math.abs(free.objective)));
+}
+
 describe('decision horizon', () => {
   it('certifies first decisions that stay optimal for every lookahead at least that deep', () => {
     let checked = 0;
@@ -31,16 +44,7 @@ describe('decision horizon', () => {
       const full = solveDispatchDp(p);
       const first = full.socKwh.slice(1, steps + 1);
       for (const depth of [dh.depthSteps, dh.depthSteps + Math.floor(r() * (n - dh.depthSteps + 1))]) {
-        const cut = truncate(p, depth);
-        // The DP with the shorter lookahead takes the same first decisions, bit for bit.
-        const short = solveDispatchDp(cut);
-        expect(short.socKwh.slice(1, steps + 1)).toEqual(first);
-        // [S] GLPK on the truncated problem: fixing the first SoCs to the full
-        // lookahead's costs nothing, i.e. those decisions are optimal at this depth too.
-        const free = solveWithGlpk(cut);
-        const fixed = solveWithGlpk(cut, { fixSocKwh: first });
-        expect(fixed.status, `seed ${seed} depth ${depth}`).toBe('optimal');
-        expect(Math.abs(fixed.objective - free.objective)).toBeLessThanOrEqual(1e-9 * Math.max(1, Math.abs(free.objective)));
+        expectSameFirstDecisions(truncate(p, depth), first, `seed ${seed} depth ${depth}`);
         checked++;
       }
     }
@@ -71,13 +75,8 @@ describe('decision horizon', () => {
       if (!dh.ok) continue;
       const first = solveDispatchDp(p).socKwh.slice(1, steps + 1);
       for (let depth = dh.depthSteps; depth <= n; depth += 1 + Math.floor(r() * 6)) {
-        const cut = { ...truncate(p, depth), terminal: ruleAt(depth) };
-        expect(solveDispatchDp(cut).socKwh.slice(1, steps + 1), `seed ${seed} depth ${depth}`).toEqual(first);
-        // [S] GLPK on the truncated problem with its own end value: the certified first SoCs cost nothing extra.
-        const free = solveWithGlpk(cut);
-        const fixed = solveWithGlpk(cut, { fixSocKwh: first });
-        expect(fixed.status, `seed ${seed} depth ${depth}`).toBe('optimal');
-        expect(Math.abs(fixed.objective - free.objective)).toBeLessThanOrEqual(1e-9 * Math.max(1, Math.abs(free.objective)));
+        // Each shorter lookahead with its own end value.
+        expectSameFirstDecisions({ ...truncate(p, depth), terminal: ruleAt(depth) }, first, `seed ${seed} depth ${depth}`);
         checked++;
       }
     }
