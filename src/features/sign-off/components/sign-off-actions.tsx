@@ -54,7 +54,7 @@ export function SignOffActions({ record }: { record: SignOffRecord }) {
       {can.approve && (
         <label className="flex items-start gap-2 text-sm text-ink-800">
           <input type="checkbox" checked={checked} onChange={(e) => setChecked(e.target.checked)} className="mt-1" />I have
-          checked this schedule against the points listed under "Before you sign off".
+          checked this schedule against the cautions above.
         </label>
       )}
       <div className="flex flex-wrap gap-2">
