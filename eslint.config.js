@@ -4,7 +4,18 @@ import tseslint from 'typescript-eslint';
 import { importX } from 'eslint-plugin-import-x';
 
 export default tseslint.config(
-  { ignores: ['dist/**', 'node_modules/**', '.data/**', 'drizzle/**', 'test-results/**', 'coverage/**', 'scripts/*.mjs', 'eslint.config.js'] },
+  {
+    ignores: [
+      'dist/**',
+      'node_modules/**',
+      '.data/**',
+      'drizzle/**',
+      'test-results/**',
+      'coverage/**',
+      'scripts/*.mjs',
+      'eslint.config.js',
+    ],
+  },
   js.configs.recommended,
   ...tseslint.configs.recommendedTypeChecked,
   {
@@ -35,7 +46,10 @@ export default tseslint.config(
     // A feature does not import another feature (STYLE.md §1).
     files: ['src/features/**'],
     rules: {
-      'no-restricted-imports': ['error', { patterns: [{ group: ['@/features/*'], message: 'Features do not import each other; compose them in src/app.' }] }],
+      'no-restricted-imports': [
+        'error',
+        { patterns: [{ group: ['@/features/*'], message: 'Features do not import each other; compose them in src/app.' }] },
+      ],
     },
   },
 );

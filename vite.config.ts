@@ -21,7 +21,8 @@ export default defineConfig({
       output: {
         // Charts are heavy: keep them (and React) out of the first chunk.
         manualChunks(id: string) {
-          if (id.includes('node_modules/@visx') || id.includes('node_modules/d3-') || id.includes('@react-spring')) return 'charts';
+          if (id.includes('node_modules/@visx') || id.includes('node_modules/d3-') || id.includes('@react-spring'))
+            return 'charts';
           if (id.includes('node_modules/react') || id.includes('node_modules/scheduler')) return 'react';
           return undefined;
         },

@@ -9,7 +9,13 @@ export default defineConfig({
     },
   },
   test: {
-    include: ['tests/**/*.test.ts', 'tests/**/*.test.tsx', 'server/**/*.test.ts', 'shared/**/*.test.ts', 'src/**/*.test.{ts,tsx}'],
+    include: [
+      'tests/**/*.test.ts',
+      'tests/**/*.test.tsx',
+      'server/**/*.test.ts',
+      'shared/**/*.test.ts',
+      'src/**/*.test.{ts,tsx}',
+    ],
     exclude: ['tests/e2e/**', 'node_modules/**'],
     globalSetup: ['tests/support/global-setup.ts'],
     testTimeout: 60_000,

@@ -52,7 +52,9 @@ function prices(count: number, stepMinutes: number): number[] {
 }
 
 function csv(values: number[], stepMinutes: number): string {
-  return ['time,price', ...values.map((v, i) => `${new Date(START + i * stepMinutes * 60_000).toISOString()},${v}`)].join('\n') + '\n';
+  return (
+    ['time,price', ...values.map((v, i) => `${new Date(START + i * stepMinutes * 60_000).toISOString()},${v}`)].join('\n') + '\n'
+  );
 }
 
 class Client {
@@ -62,7 +64,11 @@ class Client {
   async call(method: string, path: string, body?: unknown, form?: FormData): Promise<{ status: number; body: any }> {
     const headers: Record<string, string> = { Origin: this.base, Cookie: this.cookie };
     if (body !== undefined) headers['Content-Type'] = 'application/json';
-    const res = await fetch(`${this.base}${path}`, { method, headers, body: form ?? (body === undefined ? undefined : JSON.stringify(body)) });
+    const res = await fetch(`${this.base}${path}`, {
+      method,
+      headers,
+      body: form ?? (body === undefined ? undefined : JSON.stringify(body)),
+    });
     const setCookie = res.headers.getSetCookie();
     if (setCookie.length) this.cookie = setCookie.map((c) => c.split(';')[0]).join('; ');
     const text = await res.text();
@@ -111,7 +117,13 @@ async function studyUntilDone(client: Client, body: unknown, measure = false) {
   };
   const [, samples] = await Promise.all([poll(), measure ? hammer(client, planPath, () => finished) : Promise.resolve([])]);
   if (study.status !== 'completed') throw new Error(`study failed: ${study.errorMessage}`);
-  return { wallSeconds: (performance.now() - t0) / 1000, engineSeconds: study.results.seconds as number, method: study.method as string, runs: study.results.runs.length as number, samples };
+  return {
+    wallSeconds: (performance.now() - t0) / 1000,
+    engineSeconds: study.results.seconds as number,
+    method: study.method as string,
+    runs: study.results.runs.length as number,
+    samples,
+  };
 }
 
 let planPath = '';
@@ -128,7 +140,9 @@ async function main() {
   initDb(url, 10);
   const password = 'bench-password-tide-47';
   const email = `planner-${randomUUID().slice(0, 8)}@bench.slackwater.example`;
-  await getDb().insert(users).values({ id: randomUUID(), email, name: 'Bench planner', role: 'planner', passwordHash: await hashPassword(password) });
+  await getDb()
+    .insert(users)
+    .values({ id: randomUUID(), email, name: 'Bench planner', role: 'planner', passwordHash: await hashPassword(password) });
 
   // The origin check compares with APP_ORIGIN, so find a free port first.
   const probe = net.createServer().listen(0, '127.0.0.1');
@@ -136,17 +150,36 @@ async function main() {
   const port = (probe.address() as AddressInfo).port;
   await new Promise((r) => probe.close(r));
   const base = `http://127.0.0.1:${port}`;
-  const app = createApp(loadConfig({ NODE_ENV: 'production', DATABASE_URL: url, LOG_LEVEL: 'error', FAKE_SMTP: 'false', APP_ORIGIN: base }));
+  const app = createApp(
+    loadConfig({ NODE_ENV: 'production', DATABASE_URL: url, LOG_LEVEL: 'error', FAKE_SMTP: 'false', APP_ORIGIN: base }),
+  );
   const server = app.listen(port, '127.0.0.1');
   await new Promise((r) => server.once('listening', r));
   const client = new Client(base);
   await client.ok('POST', '/api/auth/sign-in', { email, password });
 
-  const site = await client.ok('POST', '/api/sites', { name: `Bench ${randomUUID().slice(0, 6)}`, timezone: 'UTC', importLimitKw: null, exportLimitKw: null, currency: 'EUR' });
+  const site = await client.ok('POST', '/api/sites', {
+    name: `Bench ${randomUUID().slice(0, 6)}`,
+    timezone: 'UTC',
+    importLimitKw: null,
+    exportLimitKw: null,
+    currency: 'EUR',
+  });
   // Lithium-ion defaults include a daily cycle cap, which couples the steps of a day: the engine takes the LP path.
-  const battery = await client.ok('POST', `/api/sites/${site.id}/batteries`, { name: 'Unit LP', energyKwh: 2000, powerChargeKw: 1000, powerDischargeKw: 1000 });
+  const battery = await client.ok('POST', `/api/sites/${site.id}/batteries`, {
+    name: 'Unit LP',
+    energyKwh: 2000,
+    powerChargeKw: 1000,
+    powerDischargeKw: 1000,
+  });
   // Without the cap every window is exact for the dynamic program: the fast path.
-  const dpBattery = await client.ok('POST', `/api/sites/${site.id}/batteries`, { name: 'Unit DP', energyKwh: 2000, powerChargeKw: 1000, powerDischargeKw: 1000, maxCyclesPerDay: null });
+  const dpBattery = await client.ok('POST', `/api/sites/${site.id}/batteries`, {
+    name: 'Unit DP',
+    energyKwh: 2000,
+    powerChargeKw: 1000,
+    powerDischargeKw: 1000,
+    maxCyclesPerDay: null,
+  });
   const upload = async (values: number[], step: number, name: string) => {
     const form = new FormData();
     form.set('kind', 'price');
@@ -160,8 +193,12 @@ async function main() {
 
   const worker = await startJobWorker(url);
   const plan = await client.ok('POST', '/api/plans', {
-    batteryId: battery.id, priceProfileId: year, deliveryStart: new Date(START + 24 * HOUR_MS).toISOString(),
-    deliveryEnd: new Date(START + 48 * HOUR_MS).toISOString(), horizonHours: 48, terminalRule: 'steady-value',
+    batteryId: battery.id,
+    priceProfileId: year,
+    deliveryStart: new Date(START + 24 * HOUR_MS).toISOString(),
+    deliveryEnd: new Date(START + 48 * HOUR_MS).toISOString(),
+    horizonHours: 48,
+    terminalRule: 'steady-value',
   });
   planPath = `/api/plans/${plan.plan.id}`;
   while ((await client.ok('GET', planPath)).job.state !== 'completed') await new Promise((r) => setTimeout(r, 200));
@@ -169,10 +206,15 @@ async function main() {
   // The preview re-plans a one-day plan of the fast-path battery with other horizons, on the web process's preview
   // thread (the first preview also starts that thread, which loads the engine: under tsx most of its time).
   const dpPlan = await client.ok('POST', '/api/plans', {
-    batteryId: dpBattery.id, priceProfileId: year, deliveryStart: new Date(START + 24 * HOUR_MS).toISOString(),
-    deliveryEnd: new Date(START + 48 * HOUR_MS).toISOString(), horizonHours: 24, terminalRule: 'steady-value',
+    batteryId: dpBattery.id,
+    priceProfileId: year,
+    deliveryStart: new Date(START + 24 * HOUR_MS).toISOString(),
+    deliveryEnd: new Date(START + 48 * HOUR_MS).toISOString(),
+    horizonHours: 24,
+    terminalRule: 'steady-value',
   });
-  while ((await client.ok('GET', `/api/plans/${dpPlan.plan.id}`)).job.state !== 'completed') await new Promise((r) => setTimeout(r, 200));
+  while ((await client.ok('GET', `/api/plans/${dpPlan.plan.id}`)).job.state !== 'completed')
+    await new Promise((r) => setTimeout(r, 200));
   const horizonPreview = await measurePreview(client, dpPlan.plan.id, [24, 168]);
   if (process.env.BENCH_PREVIEW_ONLY === '1') {
     console.log(JSON.stringify({ machine: machineInfo(), horizonPreview }, null, 2));
@@ -188,10 +230,23 @@ async function main() {
   const idle = percentiles(await hammer(client, planPath, () => true, 400));
   const horizons = [6, 12, 24, 48, 96, 168];
   const terminalRules = ['free', 'steady-value'];
-  const period = (days: number) => ({ start: new Date(START).toISOString(), end: new Date(START + days * 24 * HOUR_MS).toISOString() });
+  const period = (days: number) => ({
+    start: new Date(START).toISOString(),
+    end: new Date(START + days * 24 * HOUR_MS).toISOString(),
+  });
   const study = async (batteryId: string, profileId: string, days: number, measure: boolean) => {
-    const r = await studyUntilDone(client, { batteryId, priceProfileId: profileId, ...period(days), horizonsHours: horizons, replanHours: 1, terminalRules }, measure);
-    return { wallSeconds: round(r.wallSeconds), engineSeconds: round(r.engineSeconds), method: r.method, runs: r.runs, ...(measure ? { getPlanLatencyWhileRunning: percentiles(r.samples) } : {}) };
+    const r = await studyUntilDone(
+      client,
+      { batteryId, priceProfileId: profileId, ...period(days), horizonsHours: horizons, replanHours: 1, terminalRules },
+      measure,
+    );
+    return {
+      wallSeconds: round(r.wallSeconds),
+      engineSeconds: round(r.engineSeconds),
+      method: r.method,
+      runs: r.runs,
+      ...(measure ? { getPlanLatencyWhileRunning: percentiles(r.samples) } : {}),
+    };
   };
   const results = {
     yearStudyDp: await study(dpBattery.id, year, 365, true),

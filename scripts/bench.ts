@@ -37,7 +37,7 @@ const SEED = 20261201;
 const STEPS = 8760;
 function seededPrices(seed: number, steps: number): number[] {
   let x = seed >>> 0;
-  const next = () => ((x = (Math.imul(x, 1664525) + 1013904223) >>> 0) / 4294967296);
+  const next = () => (x = (Math.imul(x, 1664525) + 1013904223) >>> 0) / 4294967296;
   return Array.from({ length: steps }, (_, t) => {
     const h = t % 24;
     const daily = 22 * Math.sin((2 * Math.PI * (h - 8)) / 24) + 12 * Math.sin((4 * Math.PI * h) / 24);
@@ -47,8 +47,17 @@ function seededPrices(seed: number, steps: number): number[] {
   });
 }
 const BATTERY: BatteryParams = {
-  powerChargeKw: 1000, powerDischargeKw: 1000, energyKwh: 2000, socMinPct: 10, socMaxPct: 90, socInitialPct: 50,
-  efficiencyCharge: Math.sqrt(0.85), efficiencyDischarge: Math.sqrt(0.85), selfDischargePctPerHour: 0, degradationCostPerMwh: 0, maxCyclesPerDay: null,
+  powerChargeKw: 1000,
+  powerDischargeKw: 1000,
+  energyKwh: 2000,
+  socMinPct: 10,
+  socMaxPct: 90,
+  socInitialPct: 50,
+  efficiencyCharge: Math.sqrt(0.85),
+  efficiencyDischarge: Math.sqrt(0.85),
+  selfDischargePctPerHour: 0,
+  degradationCostPerMwh: 0,
+  maxCyclesPerDay: null,
 };
 const prices = seededPrices(SEED, STEPS);
 const aligned = alignInputs({
@@ -61,7 +70,11 @@ const inputs: AlignedInputs = aligned.inputs;
 const e0 = socPctToKwh(inputs, BATTERY.socInitialPct);
 
 // ---------- timing ----------
-interface Timed<T> { readonly value: T; readonly seconds: number; readonly cpuSeconds: number }
+interface Timed<T> {
+  readonly value: T;
+  readonly seconds: number;
+  readonly cpuSeconds: number;
+}
 function timed<T>(f: () => T): Timed<T> {
   const cpu = process.cpuUsage();
   const start = performance.now();
@@ -89,7 +102,11 @@ function plainGlpkWindow(s: number, n: number, start: number) {
   const bounds = [];
   for (let t = 0; t < n; t++) {
     vars.push({ name: `c${t}`, coef: prices[s + t]! / 1000 }, { name: `d${t}`, coef: -prices[s + t]! / 1000 });
-    const row = [{ name: `e${t + 1}`, coef: 1 }, { name: `c${t}`, coef: -etaC }, { name: `d${t}`, coef: 1 / etaD }];
+    const row = [
+      { name: `e${t + 1}`, coef: 1 },
+      { name: `c${t}`, coef: -etaC },
+      { name: `d${t}`, coef: 1 / etaD },
+    ];
     if (t > 0) row.push({ name: `e${t}`, coef: -1 });
     const rhs = t === 0 ? start : 0;
     subjectTo.push({ name: `soc${t}`, vars: row, bnds: { type: glpk.GLP_FX, lb: rhs, ub: rhs } });
@@ -99,7 +116,10 @@ function plainGlpkWindow(s: number, n: number, start: number) {
       { name: `e${t + 1}`, type: glpk.GLP_DB, lb: eMin, ub: eMax },
     );
   }
-  const result = glpk.solve({ name: 'window', objective: { direction: glpk.GLP_MIN, name: 'cost', vars }, subjectTo, bounds }, { msglev: glpk.GLP_MSG_OFF });
+  const result = glpk.solve(
+    { name: 'window', objective: { direction: glpk.GLP_MIN, name: 'cost', vars }, subjectTo, bounds },
+    { msglev: glpk.GLP_MSG_OFF },
+  );
   return [result.result.vars.c0!, result.result.vars.d0!] as const;
 }
 
@@ -120,7 +140,11 @@ function plainJsLpWindow(s: number, n: number, start: number) {
 }
 
 /** Closed loop with a plain per-window solver: apply the first hour, re-plan. Returns the realised cost. */
-function plainLoop(window: (s: number, n: number, start: number) => readonly [number, number], horizon: number, steps = STEPS): number {
+function plainLoop(
+  window: (s: number, n: number, start: number) => readonly [number, number],
+  horizon: number,
+  steps = STEPS,
+): number {
   let e = e0;
   let cost = 0;
   for (let s = 0; s < steps; s++) {
@@ -135,12 +159,23 @@ function plainLoop(window: (s: number, n: number, start: number) => readonly [nu
 function warmUp(): void {
   plainLoop(plainGlpkWindow, 24, 1500);
   plainLoop(plainJsLpWindow, 24, 300);
-  runClosedLoop(inputs, { from: 0, to: 1500, horizonSteps: 24, replanSteps: 1, terminal: { kind: 'free' }, initialEnergyKwh: e0, method: 'lp' });
+  runClosedLoop(inputs, {
+    from: 0,
+    to: 1500,
+    horizonSteps: 24,
+    replanSteps: 1,
+    terminal: { kind: 'free' },
+    initialEnergyKwh: e0,
+    method: 'lp',
+  });
   highs.solve(writeLpText(buildDispatchModel(problemFor(inputs, 0, 500, e0, { kind: 'free' })).lp), { output_flag: false });
 }
 
 // ---------- sections ----------
-interface Section { readonly name: string; readonly run: () => unknown }
+interface Section {
+  readonly name: string;
+  readonly run: () => unknown;
+}
 
 /** CPU ms per solve by backend and window length: warm-up, then the best of three rounds. */
 function backendCrossover() {
@@ -155,7 +190,12 @@ function backendCrossover() {
       const rounds = [0, 1, 2].map(() => timed(() => models.forEach((m) => solve(m, { backend }))).cpuSeconds);
       return round((Math.min(...rounds) * 1000) / count, 3);
     };
-    return { steps, modelSize: models[0]!.values.length + models[0]!.numCols, glpkCpuMsPerSolve: best('glpk'), highsCpuMsPerSolve: best('highs') };
+    return {
+      steps,
+      modelSize: models[0]!.values.length + models[0]!.numCols,
+      glpkCpuMsPerSolve: best('glpk'),
+      highsCpuMsPerSolve: best('highs'),
+    };
   });
 }
 
@@ -171,10 +211,16 @@ function referencePath() {
   if (!engine.value.ok) throw new Error(engine.value.issue.message);
   const solution = engine.value.path.solution;
   return {
-    engineSeconds: round(engine.seconds), engineCpuSeconds: round(engine.cpuSeconds), engineBackend: solution.backend, tieBreakSolve: solution.tieBroken,
-    directHighsLpTextSeconds: round(direct.seconds), directHighsCpuSeconds: round(direct.cpuSeconds), lpTextBuildSeconds: round(text.seconds),
+    engineSeconds: round(engine.seconds),
+    engineCpuSeconds: round(engine.cpuSeconds),
+    engineBackend: solution.backend,
+    tieBreakSolve: solution.tieBroken,
+    directHighsLpTextSeconds: round(direct.seconds),
+    directHighsCpuSeconds: round(direct.cpuSeconds),
+    lpTextBuildSeconds: round(text.seconds),
     speedupVsDirectHighs: ratio(direct.cpuSeconds, engine.cpuSeconds),
-    engineObjective: solution.objective, directObjective: direct.value.ObjectiveValue,
+    engineObjective: solution.objective,
+    directObjective: direct.value.ObjectiveValue,
   };
 }
 
@@ -182,26 +228,54 @@ function referencePath() {
 function bestOfTwo<T>(runs: (() => T)[]): Timed<T>[] {
   const results: Timed<T>[][] = runs.map(() => []);
   for (let round = 0; round < 2; round++) runs.forEach((run, i) => results[i]!.push(timed(run)));
-  return results.map(([a, b]) => ({ value: a!.value, seconds: Math.min(a!.seconds, b!.seconds), cpuSeconds: Math.min(a!.cpuSeconds, b!.cpuSeconds) }));
+  return results.map(([a, b]) => ({
+    value: a!.value,
+    seconds: Math.min(a!.seconds, b!.seconds),
+    cpuSeconds: Math.min(a!.cpuSeconds, b!.cpuSeconds),
+  }));
 }
 
 async function closedLoop24h() {
   const [engine, glpkLoop] = bestOfTwo<{ cost: number; solves?: number }>([
-    () => runClosedLoop(inputs, { from: 0, to: STEPS, horizonSteps: 24, replanSteps: 1, terminal: { kind: 'free' }, initialEnergyKwh: e0, method: 'lp' }),
+    () =>
+      runClosedLoop(inputs, {
+        from: 0,
+        to: STEPS,
+        horizonSteps: 24,
+        replanSteps: 1,
+        terminal: { kind: 'free' },
+        initialEnergyKwh: e0,
+        method: 'lp',
+      }),
     () => ({ cost: plainLoop(plainGlpkWindow, 24) }),
   ]) as [Timed<{ cost: number; solves?: number }>, Timed<{ cost: number }>];
   const jsLpLoop = timed(() => plainLoop(plainJsLpWindow, 24));
   const context = { inputs, from: 0, to: STEPS, replanSteps: 1, initialEnergyKwh: e0, bandFraction: 0.05, method: 'lp' as const };
-  const parallel = await timedAsync(() => runClosedLoopParallel(context, { horizonHours: 24, horizonSteps: 24, terminal: { kind: 'free' } }, 2));
+  const parallel = await timedAsync(() =>
+    runClosedLoopParallel(context, { horizonHours: 24, horizonSteps: 24, terminal: { kind: 'free' } }, 2),
+  );
   return {
     solves: engine.value.solves,
     method: 'engine and plain GLPK loop: best of two alternating rounds',
     engine: { seconds: round(engine.seconds), cpuSeconds: round(engine.cpuSeconds), cost: engine.value.cost },
-    engineTwoCores: { seconds: round(parallel.seconds), cpuSecondsAllThreads: round(parallel.cpuSeconds), cost: parallel.value.cost, parallel: parallel.value.parallel },
+    engineTwoCores: {
+      seconds: round(parallel.seconds),
+      cpuSecondsAllThreads: round(parallel.cpuSeconds),
+      cost: parallel.value.cost,
+      parallel: parallel.value.parallel,
+    },
     plainGlpkLoop: { seconds: round(glpkLoop.seconds), cpuSeconds: round(glpkLoop.cpuSeconds), cost: glpkLoop.value.cost },
     plainJsLpSolverLoop: { seconds: round(jsLpLoop.seconds), cpuSeconds: round(jsLpLoop.cpuSeconds), cost: jsLpLoop.value },
-    speedupVsGlpk: { wall: ratio(glpkLoop.seconds, engine.seconds), cpu: ratio(glpkLoop.cpuSeconds, engine.cpuSeconds), twoCoresWall: ratio(glpkLoop.seconds, parallel.seconds) },
-    speedupVsJsLpSolver: { wall: ratio(jsLpLoop.seconds, engine.seconds), cpu: ratio(jsLpLoop.cpuSeconds, engine.cpuSeconds), twoCoresWall: ratio(jsLpLoop.seconds, parallel.seconds) },
+    speedupVsGlpk: {
+      wall: ratio(glpkLoop.seconds, engine.seconds),
+      cpu: ratio(glpkLoop.cpuSeconds, engine.cpuSeconds),
+      twoCoresWall: ratio(glpkLoop.seconds, parallel.seconds),
+    },
+    speedupVsJsLpSolver: {
+      wall: ratio(jsLpLoop.seconds, engine.seconds),
+      cpu: ratio(jsLpLoop.cpuSeconds, engine.cpuSeconds),
+      twoCoresWall: ratio(jsLpLoop.seconds, parallel.seconds),
+    },
   };
 }
 
@@ -218,8 +292,17 @@ async function sixHorizonStudy() {
   if (!study.value.ok) throw new Error(study.value.issue.message);
   const s = study.value.study;
   return {
-    seconds: round(study.seconds), workers: s.workers, referenceCost: s.referenceCost, recommendation: s.recommendation,
-    runs: s.runs.map((r) => ({ horizonHours: r.horizonHours, terminal: r.terminal, seconds: round(r.seconds), gapPct: round(r.gapPct, 4), solves: r.solves })),
+    seconds: round(study.seconds),
+    workers: s.workers,
+    referenceCost: s.referenceCost,
+    recommendation: s.recommendation,
+    runs: s.runs.map((r) => ({
+      horizonHours: r.horizonHours,
+      terminal: r.terminal,
+      seconds: round(r.seconds),
+      gapPct: round(r.gapPct, 4),
+      solves: r.solves,
+    })),
   };
 }
 
@@ -238,14 +321,36 @@ async function dynamicProgram() {
   });
   const horizonsHours = [6, 12, 24, 48, 96, 168];
   const terminals = [{ kind: 'free' }, { kind: 'steady-value' }] as const;
-  const study = await timedAsync(() => runHorizonStudy(inputs, { horizonsHours, replanHours: 1, terminals: [...terminals], method: 'auto' }));
+  const study = await timedAsync(() =>
+    runHorizonStudy(inputs, { horizonsHours, replanHours: 1, terminals: [...terminals], method: 'auto' }),
+  );
   if (!study.value.ok) throw new Error(study.value.issue.message);
   log('cli study on the sample data (npm run cli, bundle and tsx sources)…');
-  const cli = benchCliCommand(['study', '--prices', 'sample-data/prices-2026-hourly.csv', '--battery', 'sample-data/demo-battery.json',
-    '--site', 'sample-data/demo-site.json', '--horizons', horizonsHours.join(','), '--replan', '1', '--terminal', 'free,steady-value'], 3);
+  const cli = benchCliCommand(
+    [
+      'study',
+      '--prices',
+      'sample-data/prices-2026-hourly.csv',
+      '--battery',
+      'sample-data/demo-battery.json',
+      '--site',
+      'sample-data/demo-site.json',
+      '--horizons',
+      horizonsHours.join(','),
+      '--replan',
+      '1',
+      '--terminal',
+      'free,steady-value',
+    ],
+    3,
+  );
   return {
     ...figures,
-    sixHorizonStudyOnDp: { seconds: round(study.seconds), cpuSeconds: round(study.cpuSeconds), workers: study.value.study.workers },
+    sixHorizonStudyOnDp: {
+      seconds: round(study.seconds),
+      cpuSeconds: round(study.cpuSeconds),
+      workers: study.value.study.workers,
+    },
     cliStudyOnSampleData: cli,
   };
 }
@@ -261,7 +366,12 @@ const SECTIONS: Section[] = [
 const only = process.argv.slice(2);
 const report: Record<string, unknown> = {
   machine: { cpus: availableParallelism(), model: cpus()[0]?.model ?? 'unknown', node: process.version },
-  data: { seed: SEED, steps: STEPS, battery: '1 MW / 2 MWh, 85 % round trip, SoC 10–90 %', priceRange: [Math.min(...prices), Math.max(...prices)] },
+  data: {
+    seed: SEED,
+    steps: STEPS,
+    battery: '1 MW / 2 MWh, 85 % round trip, SoC 10–90 %',
+    priceRange: [Math.min(...prices), Math.max(...prices)],
+  },
 };
 const warm = timed(warmUp);
 report.warmUpSeconds = round(warm.seconds);

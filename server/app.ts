@@ -30,7 +30,22 @@ const clientDir = path.resolve(import.meta.dirname, '..', 'dist', 'client');
 
 /** Routers mounted under /api, in order. Each module adds its router here. */
 function apiRouters(): Router[] {
-  return [healthRouter, authRouter, usersRouter, auditRouter, mailRouter, sitesRouter, batteriesRouter, profilesRouter, signOffRouter, exportRouter, plansRouter, horizonPreviewRouter, studiesRouter, jobsRouter];
+  return [
+    healthRouter,
+    authRouter,
+    usersRouter,
+    auditRouter,
+    mailRouter,
+    sitesRouter,
+    batteriesRouter,
+    profilesRouter,
+    signOffRouter,
+    exportRouter,
+    plansRouter,
+    horizonPreviewRouter,
+    studiesRouter,
+    jobsRouter,
+  ];
 }
 
 export function createApp(config: AppConfig) {

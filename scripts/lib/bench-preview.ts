@@ -24,7 +24,12 @@ async function previewOnce(client: BenchClient, planId: string, horizonHours: nu
   const r = await client.call('POST', `/api/plans/${planId}/horizon-preview`, { horizonHours });
   const ms = performance.now() - t;
   if (r.status !== 200) throw new Error(`horizon preview ${horizonHours} h → ${r.status}: ${JSON.stringify(r.body)}`);
-  return { ms, computeMs: r.body.computeMs as number, method: r.body.method as string, steps: (r.body.steps as unknown[]).length };
+  return {
+    ms,
+    computeMs: r.body.computeMs as number,
+    method: r.body.method as string,
+    steps: (r.body.steps as unknown[]).length,
+  };
 }
 
 /** The first preview of a plan reads and aligns its profiles and solves its steady cycle; later ones only re-plan. */

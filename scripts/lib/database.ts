@@ -31,7 +31,9 @@ export async function migrateDatabase(url: string): Promise<void> {
   try {
     await migrate(drizzle(client), { migrationsFolder });
   } catch (error) {
-    throw new SetupError(`A migration failed: ${(error as Error).message}\nNothing of that migration was applied; fix it and run again.`);
+    throw new SetupError(
+      `A migration failed: ${(error as Error).message}\nNothing of that migration was applied; fix it and run again.`,
+    );
   } finally {
     await client.end();
   }

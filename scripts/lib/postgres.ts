@@ -110,7 +110,9 @@ export async function ensureCluster(log: (m: string) => void): Promise<void> {
   const configured = readFileSync(path.join(dataDir, 'postgresql.conf'), 'utf8').match(/^port = (\d+)/m)?.[1];
   const start = runPg(bin, 'pg_ctl', ['-D', dataDir, '-l', logFile, '-o', `-p ${clusterPort}`, '-w', '-t', '60', 'start']);
   if (!start.ok) {
-    throw new SetupError(`PostgreSQL failed to start (configured port ${configured ?? '?'}). See the log: ${logFile}\n${start.output}`);
+    throw new SetupError(
+      `PostgreSQL failed to start (configured port ${configured ?? '?'}). See the log: ${logFile}\n${start.output}`,
+    );
   }
 }
 

@@ -99,7 +99,10 @@ export function sessionStore(options: SessionOptions): SessionStore {
       }
       let refreshed = session.fresh;
       if (!refreshed && session.expiresAt.getTime() < Date.now() + idleMs - slideStepMs) {
-        await db.update(sessions).set({ expiresAt: new Date(Date.now() + idleMs) }).where(eq(sessions.id, session.id));
+        await db
+          .update(sessions)
+          .set({ expiresAt: new Date(Date.now() + idleMs) })
+          .where(eq(sessions.id, session.id));
         refreshed = true;
       }
       return {

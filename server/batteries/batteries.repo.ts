@@ -5,7 +5,11 @@ import { batteries, type BatteryRow } from './batteries.schema';
 export type BatteryValues = Omit<typeof batteries.$inferInsert, 'id' | 'version' | 'createdAt' | 'updatedAt'>;
 
 export async function listBatteries(db: DbOrTx, siteId: string): Promise<BatteryRow[]> {
-  return db.select().from(batteries).where(eq(batteries.siteId, siteId)).orderBy(asc(sql`lower(${batteries.name})`));
+  return db
+    .select()
+    .from(batteries)
+    .where(eq(batteries.siteId, siteId))
+    .orderBy(asc(sql`lower(${batteries.name})`));
 }
 
 export async function findBattery(db: DbOrTx, id: string): Promise<BatteryRow | undefined> {

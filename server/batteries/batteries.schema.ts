@@ -39,8 +39,14 @@ export const batteries = pgTable(
       'batteries_soc_window',
       sql`0 <= ${t.socMinPct} and ${t.socMinPct} < ${t.socMaxPct} and ${t.socMaxPct} <= 100 and ${t.socInitialPct} between ${t.socMinPct} and ${t.socMaxPct}`,
     ),
-    check('batteries_efficiency_range', sql`${t.efficiencyCharge} > 0 and ${t.efficiencyCharge} <= 1 and ${t.efficiencyDischarge} > 0 and ${t.efficiencyDischarge} <= 1`),
-    check('batteries_costs_non_negative', sql`${t.selfDischargePctPerHour} >= 0 and ${t.selfDischargePctPerHour} < 100 and ${t.degradationCostPerMwh} >= 0`),
+    check(
+      'batteries_efficiency_range',
+      sql`${t.efficiencyCharge} > 0 and ${t.efficiencyCharge} <= 1 and ${t.efficiencyDischarge} > 0 and ${t.efficiencyDischarge} <= 1`,
+    ),
+    check(
+      'batteries_costs_non_negative',
+      sql`${t.selfDischargePctPerHour} >= 0 and ${t.selfDischargePctPerHour} < 100 and ${t.degradationCostPerMwh} >= 0`,
+    ),
     check('batteries_cycles_positive', sql`${t.maxCyclesPerDay} is null or ${t.maxCyclesPerDay} > 0`),
   ],
 );

@@ -32,7 +32,9 @@ const previewLimit = rateLimit({
   legacyHeaders: false,
   handler: (_req, res, next) => {
     const wait = res.getHeader('Retry-After') ?? Math.ceil(PREVIEW_LIMIT.windowMs / 1000);
-    next(new AppError('rate_limited', `Too many previews in a short time; wait ${String(wait)} s and move the slider again.`, 429));
+    next(
+      new AppError('rate_limited', `Too many previews in a short time; wait ${String(wait)} s and move the slider again.`, 429),
+    );
   },
 });
 

@@ -4,7 +4,13 @@
  * plan, its job and the audit trail stay as they are; a planner who likes the
  * horizon makes a full plan with it.
  */
-import { horizonPreviewLimits, MAX_PREVIEW_STEPS, type HorizonPreview, type HorizonPreviewLimits, type HorizonPreviewRequest } from '@shared/schemas/horizon-preview';
+import {
+  horizonPreviewLimits,
+  MAX_PREVIEW_STEPS,
+  type HorizonPreview,
+  type HorizonPreviewLimits,
+  type HorizonPreviewRequest,
+} from '@shared/schemas/horizon-preview';
 import { getDb } from '../db/client';
 import { notFound, unprocessable } from '../http/app-error';
 import { checkWholeSteps } from '../plans/run-inputs';
@@ -17,7 +23,10 @@ function checkRange(horizonHours: number, limits: HorizonPreviewLimits, dataEnd:
   const path = 'horizonHours';
   if (horizonHours < limits.minHours - 1e-9) {
     throw unprocessable('The horizon cannot be previewed: see issues.', [
-      { path, message: `The horizon (${hours(horizonHours)}) is shorter than the delivery window (${hours(limits.minHours)}): it must at least cover the window. Choose ${hours(limits.minHours)} or more.` },
+      {
+        path,
+        message: `The horizon (${hours(horizonHours)}) is shorter than the delivery window (${hours(limits.minHours)}): it must at least cover the window. Choose ${hours(limits.minHours)} or more.`,
+      },
     ]);
   }
   if (horizonHours > limits.maxHours + 1e-9) {
@@ -39,12 +48,21 @@ export async function previewHorizon(planId: string, body: HorizonPreviewRequest
   const { inputs } = row;
   const limits = horizonPreviewLimits(inputs);
   checkWholeSteps([{ hours: body.horizonHours, path: 'horizonHours', what: 'horizon' }], limits.stepHours * 60);
-  const dataEnd = [inputs.profiles.price, inputs.profiles.load, inputs.profiles.generation].filter((p) => p !== null).map((p) => p.end).sort()[0] ?? '';
+  const dataEnd =
+    [inputs.profiles.price, inputs.profiles.load, inputs.profiles.generation]
+      .filter((p) => p !== null)
+      .map((p) => p.end)
+      .sort()[0] ?? '';
   checkRange(body.horizonHours, limits, dataEnd);
 
   // The solve runs on the preview thread: the event loop stays free for every other request meanwhile.
   const key = `${row.id}:${row.inputVersion}`;
-  const preview = await previewThread.run({ key, inputs, horizonHours: body.horizonHours, loadSeries: () => loadPreviewSeries(key, inputs) });
+  const preview = await previewThread.run({
+    key,
+    inputs,
+    horizonHours: body.horizonHours,
+    loadSeries: () => loadPreviewSeries(key, inputs),
+  });
   return {
     planId: row.id,
     ...preview,

@@ -5,7 +5,16 @@
  */
 import type { HorizonPreview, HorizonPreviewStep } from '@shared/schemas/horizon-preview';
 import type { PlanInputs } from '@shared/schemas/plan';
-import { canSolveWithDp, parseTerminal, problemFor, solvePlan, stepIndexOf, type AlignedInputs, type DpEligibility, type SteadyCycle } from '../engine';
+import {
+  canSolveWithDp,
+  parseTerminal,
+  problemFor,
+  solvePlan,
+  stepIndexOf,
+  type AlignedInputs,
+  type DpEligibility,
+  type SteadyCycle,
+} from '../engine';
 import { AppError } from '../http/app-error';
 import { summarisePlan } from '../plans/plan-summary';
 

@@ -24,7 +24,10 @@ import type { PreviewFigures } from './preview-solve';
 
 /** A busy thread answers this rather than letting previews pile up behind a slow one. */
 export class PreviewBusyError extends AppError {
-  constructor(readonly retryAfterSeconds: number, message: string) {
+  constructor(
+    readonly retryAfterSeconds: number,
+    message: string,
+  ) {
     super('preview_busy', message, 503);
   }
 }
@@ -35,7 +38,10 @@ function spawnPreviewThread(): Worker {
   if (extension !== '.ts') return new Worker(entry);
   const tsxDir = dirname(createRequire(import.meta.url).resolve('tsx/package.json'));
   const tsxApi = pathToFileURL(join(tsxDir, 'dist/esm/api/index.mjs')).href;
-  return new Worker(`import(${JSON.stringify(tsxApi)}).then((api) => { api.register(); return import(${JSON.stringify(entry.href)}); });`, { eval: true });
+  return new Worker(
+    `import(${JSON.stringify(tsxApi)}).then((api) => { api.register(); return import(${JSON.stringify(entry.href)}); });`,
+    { eval: true },
+  );
 }
 
 type Answer = PreviewFigures | 'miss';
@@ -87,7 +93,10 @@ export class PreviewThread {
 
   async run(job: PreviewJob): Promise<PreviewFigures> {
     if (this.active >= this.maxPending) {
-      throw new PreviewBusyError(1, `The preview is busy: ${this.active} previews are being computed or wait their turn. Wait a second and move the slider again.`);
+      throw new PreviewBusyError(
+        1,
+        `The preview is busy: ${this.active} previews are being computed or wait their turn. Wait a second and move the slider again.`,
+      );
     }
     const pauseMs = this.worker ? 0 : this.restartAt - Date.now();
     if (pauseMs > 0) {
@@ -153,7 +162,11 @@ export class PreviewThread {
     } else {
       logger.error('The horizon preview failed in its thread', reply.message);
       waiting.reject(
-        new AppError('preview_failed', 'The horizon preview could not be computed for this plan (the problem was logged). Make a full plan with this horizon instead: it runs in the background.', 500),
+        new AppError(
+          'preview_failed',
+          'The horizon preview could not be computed for this plan (the problem was logged). Make a full plan with this horizon instead: it runs in the background.',
+          500,
+        ),
       );
     }
   }
@@ -166,11 +179,15 @@ export class PreviewThread {
       this.crashes++;
       const pauseMs = Math.min(LONGEST_PAUSE_MS, FIRST_PAUSE_MS * 2 ** (this.crashes - 1));
       this.restartAt = Date.now() + pauseMs;
-      logger.error(`The horizon preview thread stopped (${this.crashes} in a row); a new one starts with a preview after ${pauseMs / 1000} s`, error);
+      logger.error(
+        `The horizon preview thread stopped (${this.crashes} in a row); a new one starts with a preview after ${pauseMs / 1000} s`,
+        error,
+      );
     }
     const held = [...this.waiting.values()];
     this.waiting.clear();
-    for (const w of held) w.reject(new PreviewBusyError(1, 'The horizon preview stopped while computing. Move the slider again in a second.'));
+    for (const w of held)
+      w.reject(new PreviewBusyError(1, 'The horizon preview stopped while computing. Move the slider again in a second.'));
   }
 }
 

@@ -35,7 +35,11 @@ parentPort?.on('message', (request: PreviewRequest) => {
   } catch (error) {
     reply =
       error instanceof AppError
-        ? { id: request.id, type: 'refused', refusal: { code: error.code, message: error.message, status: error.status, issues: error.issues, extra: error.extra } }
+        ? {
+            id: request.id,
+            type: 'refused',
+            refusal: { code: error.code, message: error.message, status: error.status, issues: error.issues, extra: error.extra },
+          }
         : { id: request.id, type: 'failed', message: error instanceof Error ? (error.stack ?? error.message) : String(error) };
   }
   parentPort?.postMessage(reply);

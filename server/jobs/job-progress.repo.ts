@@ -23,7 +23,13 @@ export async function markJobRunning(db: DbOrTx, jobId: string, attempt: number,
       startedAt: sql`coalesce(${jobProgress.startedAt}, now())`,
       updatedAt: sql`now()`,
     })
-    .where(and(eq(jobProgress.jobId, jobId), lt(jobProgress.attempt, attempt), inArray(jobProgress.state, ['queued', 'running', 'retrying'])))
+    .where(
+      and(
+        eq(jobProgress.jobId, jobId),
+        lt(jobProgress.attempt, attempt),
+        inArray(jobProgress.state, ['queued', 'running', 'retrying']),
+      ),
+    )
     .returning({ jobId: jobProgress.jobId });
   return rows.length === 1;
 }
@@ -80,7 +86,13 @@ export async function finishJob(
 export async function markJobRetrying(db: DbOrTx, jobId: string, attempt: number, error: string): Promise<boolean> {
   const rows = await db
     .update(jobProgress)
-    .set({ state: 'retrying', error, message: 'This attempt failed; the job will be tried again.', etaSeconds: null, updatedAt: sql`now()` })
+    .set({
+      state: 'retrying',
+      error,
+      message: 'This attempt failed; the job will be tried again.',
+      etaSeconds: null,
+      updatedAt: sql`now()`,
+    })
     .where(and(eq(jobProgress.jobId, jobId), eq(jobProgress.attempt, attempt), eq(jobProgress.state, 'running')))
     .returning({ jobId: jobProgress.jobId });
   return rows.length === 1;
@@ -91,7 +103,12 @@ export async function findStaleJobs(db: DbOrTx, staleSeconds: number): Promise<J
   return db
     .select()
     .from(jobProgress)
-    .where(and(inArray(jobProgress.state, ['running', 'retrying']), lt(jobProgress.heartbeatAt, sql`now() - make_interval(secs => ${staleSeconds})`)));
+    .where(
+      and(
+        inArray(jobProgress.state, ['running', 'retrying']),
+        lt(jobProgress.heartbeatAt, sql`now() - make_interval(secs => ${staleSeconds})`),
+      ),
+    );
 }
 
 export async function getJobProgress(db: DbOrTx, jobId: string): Promise<JobProgressRow | undefined> {

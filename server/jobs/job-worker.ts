@@ -42,13 +42,19 @@ export async function startJobWorker(databaseUrl: string, config: JobsConfig = l
       }
     };
     for (let slot = 0; slot < config.WORKER_CONCURRENCY; slot++) {
-      workIds.push(await boss.work<JobData>(handler.queue, { includeMetadata: true, batchSize: 1, pollingIntervalSeconds: 1 }, onJobs));
+      workIds.push(
+        await boss.work<JobData>(handler.queue, { includeMetadata: true, batchSize: 1, pollingIntervalSeconds: 1 }, onJobs),
+      );
     }
   }
   workIds.push(
-    await boss.work<JobData>(queues.deadLetter, { includeMetadata: true, batchSize: 1, pollingIntervalSeconds: 2 }, async (jobs) => {
-      for (const job of jobs) await failDeadJob(getDb(), job);
-    }),
+    await boss.work<JobData>(
+      queues.deadLetter,
+      { includeMetadata: true, batchSize: 1, pollingIntervalSeconds: 2 },
+      async (jobs) => {
+        for (const job of jobs) await failDeadJob(getDb(), job);
+      },
+    ),
   );
   const reaper = startStaleJobReaper(boss, config);
   // One thread per job slot, started now so the first job does not wait for the engine to load.

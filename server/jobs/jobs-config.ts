@@ -14,7 +14,12 @@ const envSchema = z.object({
   /** Retries after the first attempt before a job goes to the dead-letter queue. */
   JOB_RETRY_LIMIT: z.coerce.number().int().min(0).max(10).default(2),
   /** Hard ceiling of one attempt (pg-boss expiry); heartbeats catch dead workers much sooner. */
-  JOB_EXPIRE_MINUTES: z.coerce.number().int().min(1).max(23 * 60).default(180),
+  JOB_EXPIRE_MINUTES: z.coerce
+    .number()
+    .int()
+    .min(1)
+    .max(23 * 60)
+    .default(180),
   /** PostgreSQL schema of pg-boss's tables; every process of one installation must use the same. */
   PGBOSS_SCHEMA: z
     .string()

@@ -12,11 +12,19 @@ const day = (value: string | null) => (value ? new Date(value).toISOString().sli
 jobsRouter.get('/jobs', async (req, res) => {
   const q = jobListQuerySchema.parse(req.query);
   const states = q.state === 'active' ? activeJobStates : q.state ? [q.state] : undefined;
-  const rows = await listJobsWithSubjects(getDb(), { ...(states ? { states } : {}), ...(q.kind ? { kind: q.kind } : {}), limit: q.limit });
+  const rows = await listJobsWithSubjects(getDb(), {
+    ...(states ? { states } : {}),
+    ...(q.kind ? { kind: q.kind } : {}),
+    limit: q.limit,
+  });
   const items: JobListItem[] = rows.map((row) => {
     const what = row.job.kind === 'plan' ? 'Plan' : 'Horizon study';
     const battery = row.batteryName ? ` for ${row.batteryName}` : '';
-    return { ...toJobProgress(row.job), siteId: row.siteId, label: `${what}${battery}, ${day(row.periodStart)} – ${day(row.periodEnd)} UTC` };
+    return {
+      ...toJobProgress(row.job),
+      siteId: row.siteId,
+      label: `${what}${battery}, ${day(row.periodStart)} – ${day(row.periodEnd)} UTC`,
+    };
   });
   res.json(items);
 });

@@ -97,8 +97,10 @@ export function runInThread<O>(request: ThreadRequest, options: ThreadOptions = 
       else if (message.type === 'done') settle(true, () => resolve(message.output as O));
       else settle(false, () => reject(new ThreadTaskError(message.message)));
     };
-    const onError = (error: Error) => settle(false, () => reject(new ThreadTaskError(`The computation stopped: ${error.message}`)));
-    const onExit = (code: number) => settle(false, () => reject(new ThreadTaskError(`The computation thread ended without a result (exit code ${code}).`)));
+    const onError = (error: Error) =>
+      settle(false, () => reject(new ThreadTaskError(`The computation stopped: ${error.message}`)));
+    const onExit = (code: number) =>
+      settle(false, () => reject(new ThreadTaskError(`The computation thread ended without a result (exit code ${code}).`)));
     options.signal?.addEventListener('abort', onAbort);
     worker.on('message', onMessage);
     worker.on('error', onError);

@@ -26,7 +26,11 @@ export async function failJobFinally(handler: JobHandler, data: JobData, attempt
   });
 }
 
-export async function runClaimedJob(handler: JobHandler, job: PgBoss.JobWithMetadata<JobData>, options: AttemptOptions): Promise<void> {
+export async function runClaimedJob(
+  handler: JobHandler,
+  job: PgBoss.JobWithMetadata<JobData>,
+  options: AttemptOptions,
+): Promise<void> {
   const attempt = job.retryCount + 1;
   const data = { ...job.data, jobId: job.id };
   const db = getDb();

@@ -18,7 +18,10 @@ export async function storeResultsOnce(
   await ctx.flush();
   await getDb().transaction(async (tx) => {
     const stored = await what.store(tx);
-    await finishJob(tx, data.jobId, ctx.attempt, { state: 'completed', message: stored ? `${what.label} computed.` : `${what.label} was already computed.` });
+    await finishJob(tx, data.jobId, ctx.attempt, {
+      state: 'completed',
+      message: stored ? `${what.label} computed.` : `${what.label} was already computed.`,
+    });
     if (!stored) return;
     await insertAuditEvent(tx, {
       action: `${data.kind}.computed`,

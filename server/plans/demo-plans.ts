@@ -39,7 +39,10 @@ function account(role: Role) {
   return { id: demoUserId(role), email: found.email, name: found.name, role };
 }
 
-async function settled<T extends { job?: { state: string } | null; errorMessage?: string | null }>(read: () => Promise<T>, what: string): Promise<T> {
+async function settled<T extends { job?: { state: string } | null; errorMessage?: string | null }>(
+  read: () => Promise<T>,
+  what: string,
+): Promise<T> {
   const deadline = Date.now() + JOB_TIMEOUT_MS;
   for (;;) {
     const item = await read();
@@ -59,7 +62,10 @@ export async function seedDemoPlans(log: (m: string) => void, databaseUrl: strin
     log('Demo plans present.');
     return;
   }
-  const siteProfiles = await db.select({ id: profiles.id, name: profiles.name }).from(profiles).where(eq(profiles.siteId, site.id));
+  const siteProfiles = await db
+    .select({ id: profiles.id, name: profiles.name })
+    .from(profiles)
+    .where(eq(profiles.siteId, site.id));
   const profileId = (name: string) => {
     const found = siteProfiles.find((p) => p.name === name);
     if (!found) throw new Error(`the demo profile "${name}" is missing`);
@@ -99,18 +105,42 @@ export async function seedDemoPlans(log: (m: string) => void, databaseUrl: strin
 
     // Friday's schedule, signed off.
     const approved = await computed(
-      await queuePlan({ deliveryStart: day('2026-12-04'), deliveryEnd: day('2026-12-05'), horizonHours: 48, terminalRule: 'steady-value', initialSocPct: 50 }),
+      await queuePlan({
+        deliveryStart: day('2026-12-04'),
+        deliveryEnd: day('2026-12-05'),
+        horizonHours: 48,
+        terminalRule: 'steady-value',
+        initialSocPct: 50,
+      }),
     );
-    const submitted = await submitPlan(signOffActor('planner'), approved.id, { version: approved.version, comment: 'Steady-value end, two days ahead.' });
-    await approvePlan(signOffActor('approver'), approved.id, { version: submitted.version, comment: 'Checked against the site limits and the operator’s instructions.' });
+    const submitted = await submitPlan(signOffActor('planner'), approved.id, {
+      version: approved.version,
+      comment: 'Steady-value end, two days ahead.',
+    });
+    await approvePlan(signOffActor('approver'), approved.id, {
+      version: submitted.version,
+      comment: 'Checked against the site limits and the operator’s instructions.',
+    });
 
     // Saturday's plan starts where the approved one ends, and waits for the approver. Sunday has
     // four horizons side by side: both 24 h plans sell off at night what the 48 h and 168 h plans
     // keep for Monday morning (the one-day steady cycle values energy at midnight too low for that).
-    const saturdayId = await queuePlan({ deliveryStart: day('2026-12-05'), deliveryEnd: day('2026-12-06'), horizonHours: 48, terminalRule: 'steady-value' });
-    const sunday: [number, 'free' | 'steady-value'][] = [[24, 'free'], [24, 'steady-value'], [48, 'steady-value'], [168, 'steady-value']];
+    const saturdayId = await queuePlan({
+      deliveryStart: day('2026-12-05'),
+      deliveryEnd: day('2026-12-06'),
+      horizonHours: 48,
+      terminalRule: 'steady-value',
+    });
+    const sunday: [number, 'free' | 'steady-value'][] = [
+      [24, 'free'],
+      [24, 'steady-value'],
+      [48, 'steady-value'],
+      [168, 'steady-value'],
+    ];
     const sundayIds = await Promise.all(
-      sunday.map(([horizonHours, terminalRule]) => queuePlan({ deliveryStart: day('2026-12-06'), deliveryEnd: day('2026-12-07'), horizonHours, terminalRule })),
+      sunday.map(([horizonHours, terminalRule]) =>
+        queuePlan({ deliveryStart: day('2026-12-06'), deliveryEnd: day('2026-12-07'), horizonHours, terminalRule }),
+      ),
     );
     const saturday = await computed(saturdayId);
     await submitPlan(signOffActor('planner'), saturday.id, { version: saturday.version, comment: 'Same settings as yesterday.' });

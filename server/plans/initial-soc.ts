@@ -16,7 +16,12 @@ export interface InitialSoc {
 
 const inWindow = (b: BatterySnapshot, pct: number) => pct >= b.socMinPct - 1e-9 && pct <= b.socMaxPct + 1e-9;
 
-export async function resolveInitialSoc(db: DbOrTx, battery: BatterySnapshot, requested: number | null | undefined, start: Date): Promise<InitialSoc> {
+export async function resolveInitialSoc(
+  db: DbOrTx,
+  battery: BatterySnapshot,
+  requested: number | null | undefined,
+  start: Date,
+): Promise<InitialSoc> {
   if (requested !== null && requested !== undefined) {
     if (!inWindow(battery, requested)) {
       throw unprocessable('The initial SoC is outside the battery’s SoC window.', [

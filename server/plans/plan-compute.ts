@@ -4,7 +4,15 @@
  * store, or the engine's message when the model cannot be solved.
  */
 import type { PlanInputs, PlanResults, PlanStep } from '@shared/schemas/plan';
-import { alignInputs, parseTerminal, solvePlan, steadySocAt, steadyValueAt, type AlignedInputs, type ProfileSeries } from '../engine';
+import {
+  alignInputs,
+  parseTerminal,
+  solvePlan,
+  steadySocAt,
+  steadyValueAt,
+  type AlignedInputs,
+  type ProfileSeries,
+} from '../engine';
 import { summarisePlan } from './plan-summary';
 import { turnpikeSentence } from './plan-words';
 
@@ -83,7 +91,14 @@ export async function computePlan(input: PlanComputeInput, report: Report): Prom
     const minute = minuteOfDayAt(a, g + 1);
     const socKwh = sol.socKwh[t + 1]!;
     const distance = finiteOrNull(tp.distance[t]);
-    const arc = t < tp.entryArcSteps ? 'entry' : t >= n - tp.leavingArcSteps ? 'leaving' : distance !== null && distance <= tp.band ? 'near' : 'outside';
+    const arc =
+      t < tp.entryArcSteps
+        ? 'entry'
+        : t >= n - tp.leavingArcSteps
+          ? 'leaving'
+          : distance !== null && distance <= tp.band
+            ? 'near'
+            : 'outside';
     steps.push({
       time: new Date(a.timesMs[g]!).toISOString(),
       delivery: t < deliverySteps,
@@ -105,7 +120,9 @@ export async function computePlan(input: PlanComputeInput, report: Report): Prom
   // The engine compares with a lookahead of max(4·H, H + 168 h), cut where the data end.
   const longerSteps = Math.floor((Math.max(4 * inputs.horizonHours, inputs.horizonHours + 168) * 60) / a.stepMinutes);
   const longerLookaheadHours =
-    tp.commitWindowSteps === null ? null : ((Math.min(a.timesMs.length, plan.from + longerSteps) - plan.from) * a.stepMinutes) / 60;
+    tp.commitWindowSteps === null
+      ? null
+      : ((Math.min(a.timesMs.length, plan.from + longerSteps) - plan.from) * a.stepMinutes) / 60;
   const turnpike = {
     bandPct: inputs.bandPct,
     bandKwh: tp.bandKwh,
@@ -134,11 +151,16 @@ export async function computePlan(input: PlanComputeInput, report: Report): Prom
       turnpike: { ...turnpike, summary: turnpikeSentence(turnpike, a.stepMinutes, inputs.terminalRule) },
       steadyCycle: { costPerDay: plan.steady.costPerDay, equivalentCyclesPerDay: plan.steady.equivalentCyclesPerDay },
       decisionHorizonHours: plan.dpInsights?.decisionHorizonHours ?? null,
-      valueCurves: evenlySpaced(plan.dpInsights?.valueCurves ?? [], MAX_VALUE_CURVES).map((c) => ({ time: c.time, points: [...c.points] })),
+      valueCurves: evenlySpaced(plan.dpInsights?.valueCurves ?? [], MAX_VALUE_CURVES).map((c) => ({
+        time: c.time,
+        points: [...c.points],
+      })),
       notes: [
         ...a.notes,
         ...plan.steady.notes,
-        ...(plan.dpInsights?.limitedByData ? ['The decision horizon reaches the end of the lookahead: prices beyond it might still change the delivery decisions.'] : []),
+        ...(plan.dpInsights?.limitedByData
+          ? ['The decision horizon reaches the end of the lookahead: prices beyond it might still change the delivery decisions.']
+          : []),
       ],
       solveSeconds: (performance.now() - started) / 1000,
     },

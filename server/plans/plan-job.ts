@@ -23,7 +23,8 @@ export const planJobHandler: JobHandler = {
     const row = await findPlan(db, data.entityId);
     if (!row) throw new JobFailure('The plan no longer exists.');
     const plan = row.plan;
-    if (plan.inputVersion !== data.inputVersion) throw new JobFailure('The plan’s inputs changed after this job was queued; a newer job computes them.');
+    if (plan.inputVersion !== data.inputVersion)
+      throw new JobFailure('The plan’s inputs changed after this job was queued; a newer job computes them.');
 
     if (plan.results === null) {
       ctx.report(0.02, 'Reading the profiles.', true);

@@ -20,9 +20,13 @@ function leavingReason(terminalRule: string): string {
 }
 
 export function turnpikeSentence(tp: Omit<PlanTurnpike, 'summary'>, stepMinutes: number, terminalRule: string): string {
-  const parts = [`Stays near the steady cycle ${Math.round(tp.nearSteadyShare * 100)} % of the time (within ${tp.bandPct} % of usable energy)`];
-  if (tp.entryArcSteps > 0) parts.push(`the first ${durationWords(tp.entryArcSteps, stepMinutes)} approach it from the starting SoC`);
-  if (tp.leavingArcSteps > 0) parts.push(`the last ${durationWords(tp.leavingArcSteps, stepMinutes)} leave it: ${leavingReason(terminalRule)}`);
+  const parts = [
+    `Stays near the steady cycle ${Math.round(tp.nearSteadyShare * 100)} % of the time (within ${tp.bandPct} % of usable energy)`,
+  ];
+  if (tp.entryArcSteps > 0)
+    parts.push(`the first ${durationWords(tp.entryArcSteps, stepMinutes)} approach it from the starting SoC`);
+  if (tp.leavingArcSteps > 0)
+    parts.push(`the last ${durationWords(tp.leavingArcSteps, stepMinutes)} leave it: ${leavingReason(terminalRule)}`);
   else parts.push('it does not leave the steady cycle before the end of the horizon');
   let sentence = `${parts.join('; ')}.`;
   if (tp.commitWindowSteps !== null && tp.longerLookaheadHours !== null) {

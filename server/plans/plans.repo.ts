@@ -55,7 +55,8 @@ export async function listPlans(db: DbOrTx, q: PlanListQuery) {
   if (q.deliveryStart) where.push(eq(plans.deliveryStart, q.deliveryStart));
   if (q.deliveryEnd) where.push(eq(plans.deliveryEnd, q.deliveryEnd));
   if (q.flagged === 'true') where.push(sql`jsonb_array_length(coalesce(${plans.results}->'turnpike'->'flags', '[]'::jsonb)) > 0`);
-  if (q.flagged === 'false') where.push(sql`jsonb_array_length(coalesce(${plans.results}->'turnpike'->'flags', '[]'::jsonb)) = 0`);
+  if (q.flagged === 'false')
+    where.push(sql`jsonb_array_length(coalesce(${plans.results}->'turnpike'->'flags', '[]'::jsonb)) = 0`);
   // Lists never carry the series: only the headline figures are read from results.
   return db
     .select({
@@ -93,7 +94,14 @@ const { results: _results, inputs: _inputs, ...plansWithoutResults } = getTableC
 export async function storePlanResults(db: DbOrTx, id: string, inputVersion: number, results: PlanResults): Promise<boolean> {
   const rows = await db
     .update(plans)
-    .set({ results, resultsInputVersion: inputVersion, resultsAt: sql`now()`, method: results.method, errorMessage: null, updatedAt: sql`now()` })
+    .set({
+      results,
+      resultsInputVersion: inputVersion,
+      resultsAt: sql`now()`,
+      method: results.method,
+      errorMessage: null,
+      updatedAt: sql`now()`,
+    })
     .where(and(eq(plans.id, id), eq(plans.inputVersion, inputVersion), sql`${plans.results} is null`))
     .returning({ id: plans.id });
   return rows.length === 1;

@@ -66,7 +66,10 @@ function checkPeriod(ref: ProfileRef, request: RunRequest, field: string, issues
     return;
   }
   const stepMs = ref.stepMinutes * MINUTE_MS;
-  for (const [ms, name] of [[startMs, request.startField], [endMs, request.endField]] as const) {
+  for (const [ms, name] of [
+    [startMs, request.startField],
+    [endMs, request.endField],
+  ] as const) {
     if ((ms - from) % stepMs !== 0) {
       issues.push({
         path: name,
@@ -79,7 +82,10 @@ function checkPeriod(ref: ProfileRef, request: RunRequest, field: string, issues
 export async function resolveRunInputs(db: DbOrTx, request: RunRequest): Promise<RunInputs> {
   const issues: ErrorIssue[] = [];
   const battery = await findBattery(db, request.batteryId);
-  if (!battery) throw unprocessable('The battery was not found.', [{ path: 'batteryId', message: `No battery has the id ${request.batteryId}. Choose one from the site's list.` }]);
+  if (!battery)
+    throw unprocessable('The battery was not found.', [
+      { path: 'batteryId', message: `No battery has the id ${request.batteryId}. Choose one from the site's list.` },
+    ]);
   const site = await findSite(db, battery.siteId);
   if (!site) throw new Error(`battery ${battery.id} has no site`);
 
@@ -100,13 +106,17 @@ export async function resolveRunInputs(db: DbOrTx, request: RunRequest): Promise
         message: `The profile "${row.name}" belongs to another site, not to "${site.name}" where the battery "${battery.name}" is. Choose a ${kind} profile of "${site.name}".`,
       });
     } else if (row.kind !== kind) {
-      issues.push({ path: field, message: `The profile "${row.name}" is a ${row.kind} profile; ${field} needs a ${kind} profile.` });
+      issues.push({
+        path: field,
+        message: `The profile "${row.name}" is a ${row.kind} profile; ${field} needs a ${kind} profile.`,
+      });
     } else {
       refs[kind] = profileRef(row);
       checkPeriod(refs[kind], request, field, issues);
     }
   }
-  if (issues.length > 0 || !refs.price) throw unprocessable(`The ${request.what} cannot be computed with these inputs: see issues.`, issues);
+  if (issues.length > 0 || !refs.price)
+    throw unprocessable(`The ${request.what} cannot be computed with these inputs: see issues.`, issues);
 
   const params = {
     powerChargeKw: battery.powerChargeKw,
@@ -124,7 +134,14 @@ export async function resolveRunInputs(db: DbOrTx, request: RunRequest): Promise
   const limits = { importLimitKw: site.importLimitKw, exportLimitKw: site.exportLimitKw };
   return {
     battery: { id: battery.id, name: battery.name, version: battery.version, ...params },
-    site: { id: site.id, name: site.name, timezone: site.timezone, currency: site.currency, ...limits, demandChargePerKw: site.demandChargePerKw },
+    site: {
+      id: site.id,
+      name: site.name,
+      timezone: site.timezone,
+      currency: site.currency,
+      ...limits,
+      demandChargePerKw: site.demandChargePerKw,
+    },
     profiles: { price: refs.price, load: refs.load, generation: refs.generation },
     warnings: batteryWarnings(params, limits).map((w) => w.message),
   };
@@ -141,7 +158,10 @@ export function checkWholeSteps(entries: readonly { hours: number; path: string;
   for (const { hours, path, what } of entries) {
     const steps = (hours * 60) / stepMinutes;
     if (Math.abs(steps - Math.round(steps)) > 1e-9) {
-      issues.push({ path, message: `The ${what} of ${hours} h is not a whole number of ${stepMinutes}-minute steps of the profiles; use a multiple of ${stepMinutes} minutes.` });
+      issues.push({
+        path,
+        message: `The ${what} of ${hours} h is not a whole number of ${stepMinutes}-minute steps of the profiles; use a multiple of ${stepMinutes} minutes.`,
+      });
     }
   }
   if (issues.length > 0) throw unprocessable('A duration does not fit the profiles’ time step.', issues);

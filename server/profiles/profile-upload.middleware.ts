@@ -24,14 +24,22 @@ function translate(error: unknown): AppError {
   if (error instanceof multer.MulterError) {
     switch (error.code) {
       case 'LIMIT_FILE_SIZE':
-        return new AppError('too_large', `The file is larger than ${megabytes} MB, the most an upload may hold.`, 413, undefined, {
-          hint: `Nothing was stored. Split the data into files under ${megabytes} MB (a year of 5-minute rows takes about 3 MB).`,
-        });
+        return new AppError(
+          'too_large',
+          `The file is larger than ${megabytes} MB, the most an upload may hold.`,
+          413,
+          undefined,
+          {
+            hint: `Nothing was stored. Split the data into files under ${megabytes} MB (a year of 5-minute rows takes about 3 MB).`,
+          },
+        );
       case 'LIMIT_UNEXPECTED_FILE':
       case 'LIMIT_FILE_COUNT':
         return rejected(`Send exactly one file, in the form field "file" (got a file in "${error.field ?? '?'}").`);
       default:
-        return rejected(`The upload form was refused: ${error.message}. Send only the fields file, kind, unit, name, intervalEnding and fillGaps.`);
+        return rejected(
+          `The upload form was refused: ${error.message}. Send only the fields file, kind, unit, name, intervalEnding and fillGaps.`,
+        );
     }
   }
   // busboy's own errors (malformed multipart body, request cut off) carry no status.

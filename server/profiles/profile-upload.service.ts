@@ -25,7 +25,10 @@ const ACCEPTED_EXTENSIONS = ['csv', 'txt'];
 /** The file's own name without any client path, control characters or excess length. */
 export function safeFilename(original: string): string {
   const base = original.split(/[\\/]/).pop() ?? '';
-  const clean = base.replace(/[\u0000-\u001f\u007f"]/g, '').trim().slice(-200);
+  const clean = base
+    .replace(/[\u0000-\u001f\u007f"]/g, '')
+    .trim()
+    .slice(-200);
   return clean === '' ? 'profile.csv' : clean;
 }
 
@@ -37,7 +40,11 @@ function checkExtension(filename: string) {
   const extension = /\.([^.]+)$/.exec(filename)?.[1]?.toLowerCase();
   if (extension === undefined || !ACCEPTED_EXTENSIONS.includes(extension)) {
     const message = `"${filename}" is not a CSV file: only .csv (or .txt) text files are accepted.`;
-    throw rejectUpload(message, [{ line: 0, message }], 'Nothing was stored. Export the data from your spreadsheet or system as CSV (UTF-8) and upload that file.');
+    throw rejectUpload(
+      message,
+      [{ line: 0, message }],
+      'Nothing was stored. Export the data from your spreadsheet or system as CSV (UTF-8) and upload that file.',
+    );
   }
 }
 
@@ -76,7 +83,11 @@ export async function uploadProfile(
   });
   if (!parsed.ok) {
     const count = parsed.issues.length;
-    throw rejectUpload(`The file "${filename}" was not accepted: ${count} problem${count === 1 ? '' : 's'} listed by line.`, parsed.issues, parsed.hint);
+    throw rejectUpload(
+      `The file "${filename}" was not accepted: ${count} problem${count === 1 ? '' : 's'} listed by line.`,
+      parsed.issues,
+      parsed.hint,
+    );
   }
 
   const { profile } = parsed;

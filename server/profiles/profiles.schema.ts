@@ -26,11 +26,17 @@ export const profiles = pgTable(
     stepMinutes: integer('step_minutes').notNull(),
     valueCount: integer('value_count').notNull(),
     values: doublePrecision('values').array().notNull(),
-    filledIndexes: integer('filled_indexes').array().notNull().default(sql`'{}'::integer[]`),
+    filledIndexes: integer('filled_indexes')
+      .array()
+      .notNull()
+      .default(sql`'{}'::integer[]`),
     minValue: doublePrecision('min_value').notNull(),
     maxValue: doublePrecision('max_value').notNull(),
     meanValue: doublePrecision('mean_value').notNull(),
-    notes: text('notes').array().notNull().default(sql`'{}'::text[]`),
+    notes: text('notes')
+      .array()
+      .notNull()
+      .default(sql`'{}'::text[]`),
     originalFile: bytea('original_file').notNull(),
     originalFilename: text('original_filename').notNull(),
     originalSha256: text('original_sha256').notNull(),

@@ -73,7 +73,11 @@ export async function getProfile(id: string, query: ProfileWindowQuery): Promise
   if (!series) throw notFound(`The profile ${id}`);
   return {
     ...summary,
-    window: { offset: first, start: new Date(Date.parse(summary.start) + first * summary.stepMinutes * MINUTE_MS).toISOString(), count: series.values.length },
+    window: {
+      offset: first,
+      start: new Date(Date.parse(summary.start) + first * summary.stepMinutes * MINUTE_MS).toISOString(),
+      count: series.values.length,
+    },
     values: series.values,
     filledIndexes: series.filledIndexes,
   };
@@ -92,8 +96,10 @@ export async function getOriginalFile(id: string) {
 export async function requireSiteProfile(siteId: string, profileId: string, kind?: ProfileKind): Promise<ProfileSummary> {
   const row = await repo.findProfileSummary(getDb(), profileId);
   if (!row) throw notFound(`The profile ${profileId}`);
-  if (row.siteId !== siteId) throw unprocessable(`The profile "${row.name}" belongs to another site; choose a profile uploaded for this site.`);
-  if (kind && row.kind !== kind) throw unprocessable(`The profile "${row.name}" is a ${row.kind} profile; choose a ${kind} profile.`);
+  if (row.siteId !== siteId)
+    throw unprocessable(`The profile "${row.name}" belongs to another site; choose a profile uploaded for this site.`);
+  if (kind && row.kind !== kind)
+    throw unprocessable(`The profile "${row.name}" is a ${row.kind} profile; choose a ${kind} profile.`);
   return toSummary(row);
 }
 
@@ -119,7 +125,13 @@ export async function deleteProfile(id: string, actor: Actor): Promise<void> {
         action: 'profile.delete',
         entityType: 'profile',
         entityId: id,
-        details: { siteId: row.siteId, kind: row.kind, name: row.name, sha256: row.originalSha256, filename: row.originalFilename },
+        details: {
+          siteId: row.siteId,
+          kind: row.kind,
+          name: row.name,
+          sha256: row.originalSha256,
+          filename: row.originalFilename,
+        },
       });
     });
   } catch (error) {

@@ -32,11 +32,18 @@ const DEMO_PROFILES: { file: string; kind: ProfileKind; unit: string; name: stri
   { file: 'pv-generation-2026-hourly.csv', kind: 'generation', unit: 'kW', name: 'Rooftop PV 2026 (hourly)' },
   { file: 'prices-week-2026-05-04-15min.csv', kind: 'price', unit: 'currency/MWh', name: 'Prices week of 4 May 2026 (15 min)' },
   { file: 'site-load-week-2026-05-04-15min.csv', kind: 'load', unit: 'kW', name: 'Site load week of 4 May 2026 (15 min)' },
-  { file: 'pv-generation-week-2026-05-04-15min.csv', kind: 'generation', unit: 'kW', name: 'Rooftop PV week of 4 May 2026 (15 min)' },
+  {
+    file: 'pv-generation-week-2026-05-04-15min.csv',
+    kind: 'generation',
+    unit: 'kW',
+    name: 'Rooftop PV week of 4 May 2026 (15 min)',
+  },
 ];
 
 const readJson = (file: string): Record<string, unknown> =>
-  existsSync(path.join(sampleDir, file)) ? (JSON.parse(readFileSync(path.join(sampleDir, file), 'utf8')) as Record<string, unknown>) : {};
+  existsSync(path.join(sampleDir, file))
+    ? (JSON.parse(readFileSync(path.join(sampleDir, file), 'utf8')) as Record<string, unknown>)
+    : {};
 
 export async function seedDemoSite(log: (m: string) => void): Promise<void> {
   const db = getDb();
@@ -46,8 +53,21 @@ export async function seedDemoSite(log: (m: string) => void): Promise<void> {
   let site = await findSiteByName(db, DEMO_SITE_NAME);
   if (!site) {
     // Limits from sample-data/demo-site.json (shared with the engine's command line), with fallbacks.
-    const { timezone = 'Europe/Berlin', importLimitKw = 4000, exportLimitKw = 2500, demandChargePerKw = null } = readJson('demo-site.json');
-    const fields = siteCreateSchema.parse({ name: DEMO_SITE_NAME, timezone, importLimitKw, exportLimitKw, demandChargePerKw, currency: 'EUR', defaultHorizonHours: 48 });
+    const {
+      timezone = 'Europe/Berlin',
+      importLimitKw = 4000,
+      exportLimitKw = 2500,
+      demandChargePerKw = null,
+    } = readJson('demo-site.json');
+    const fields = siteCreateSchema.parse({
+      name: DEMO_SITE_NAME,
+      timezone,
+      importLimitKw,
+      exportLimitKw,
+      demandChargePerKw,
+      currency: 'EUR',
+      defaultHorizonHours: 48,
+    });
     await createSite(fields, actor);
     site = await findSiteByName(db, DEMO_SITE_NAME);
     log(`Demo site "${DEMO_SITE_NAME}" created.`);
@@ -56,7 +76,13 @@ export async function seedDemoSite(log: (m: string) => void): Promise<void> {
 
   if (!(await listBatteries(db, site.id)).some((b) => b.name === DEMO_BATTERY_NAME)) {
     // 2 MW / 4 MWh mirroring sample-data/demo-battery.json; omitted keys take the lithium-ion defaults.
-    const input = batteryCreateSchema.parse({ energyKwh: 4000, powerChargeKw: 2000, powerDischargeKw: 2000, ...readJson('demo-battery.json'), name: DEMO_BATTERY_NAME });
+    const input = batteryCreateSchema.parse({
+      energyKwh: 4000,
+      powerChargeKw: 2000,
+      powerDischargeKw: 2000,
+      ...readJson('demo-battery.json'),
+      name: DEMO_BATTERY_NAME,
+    });
     await createBattery(site.id, input, actor);
     log(`Demo battery "${DEMO_BATTERY_NAME}" created.`);
   }
@@ -70,7 +96,12 @@ export async function seedDemoSite(log: (m: string) => void): Promise<void> {
       .from(profiles)
       .where(and(eq(profiles.siteId, site.id), eq(profiles.kind, p.kind), eq(profiles.originalSha256, sha256)));
     if (present) continue;
-    await uploadProfile(site.id, { originalname: p.file, buffer: bytes }, { kind: p.kind, unit: p.unit, name: p.name, intervalEnding: false, fillGaps: false }, actor);
+    await uploadProfile(
+      site.id,
+      { originalname: p.file, buffer: bytes },
+      { kind: p.kind, unit: p.unit, name: p.name, intervalEnding: false, fillGaps: false },
+      actor,
+    );
     uploaded += 1;
   }
   log(uploaded ? `Demo profiles uploaded: ${uploaded}.` : 'Demo site, battery and profiles present.');

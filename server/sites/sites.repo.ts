@@ -24,12 +24,18 @@ export async function listSites(db: DbOrTx): Promise<SiteWithCounts[]> {
 }
 
 export async function findSite(db: DbOrTx, id: string): Promise<SiteWithCounts | undefined> {
-  const [row] = await db.select({ site: sites, ...counts }).from(sites).where(eq(sites.id, id));
+  const [row] = await db
+    .select({ site: sites, ...counts })
+    .from(sites)
+    .where(eq(sites.id, id));
   return row && { ...row.site, batteryCount: row.batteryCount, profileCount: row.profileCount };
 }
 
 export async function findSiteByName(db: DbOrTx, name: string): Promise<SiteRow | undefined> {
-  const [row] = await db.select().from(sites).where(eq(sql`lower(${sites.name})`, name.toLowerCase()));
+  const [row] = await db
+    .select()
+    .from(sites)
+    .where(eq(sql`lower(${sites.name})`, name.toLowerCase()));
   return row;
 }
 

@@ -40,7 +40,11 @@ export async function listStudies(db: DbOrTx, q: StudyListQuery) {
     where.push(inArray(jobProgress.state, [...states]));
   }
   return db
-    .select({ study: withoutResults, ...names, recommendation: sql<StudyRecommendation | null>`${horizonStudies.results}->'recommendation'` })
+    .select({
+      study: withoutResults,
+      ...names,
+      recommendation: sql<StudyRecommendation | null>`${horizonStudies.results}->'recommendation'`,
+    })
     .from(horizonStudies)
     .leftJoin(sites, eq(sites.id, horizonStudies.siteId))
     .leftJoin(batteries, eq(batteries.id, horizonStudies.batteryId))

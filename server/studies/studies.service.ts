@@ -67,8 +67,13 @@ export async function createStudy(body: StudyCreate, actor: Actor, databaseUrl: 
         createdBy: actor.id,
       }),
     auditDetails: {
-      batteryId: run.battery.id, start: inputs.start, end: inputs.end, horizonsHours: inputs.horizonsHours, replanHours: body.replanHours,
-      terminalRules: body.terminalRules, steadyDays: inputs.steadyDays,
+      batteryId: run.battery.id,
+      start: inputs.start,
+      end: inputs.end,
+      horizonsHours: inputs.horizonsHours,
+      replanHours: body.replanHours,
+      terminalRules: body.terminalRules,
+      steadyDays: inputs.steadyDays,
     },
   });
   const study = await getStudy(studyId);

@@ -34,7 +34,10 @@ export const studyJobHandler: JobHandler = {
     ctx.report(0.01, 'Reading the profiles.', true);
     const profiles = await loadSnapshotProfiles(db, study.inputs.profiles);
     const input: StudyComputeInput = { inputs: study.inputs, ...profiles, threads: loadJobsConfig().STUDY_THREADS };
-    const outcome = await runInThread<ComputeOutcome<StudyResults>>({ task: 'study', input }, { signal: ctx.signal, onProgress: (s, m) => ctx.report(s, m) });
+    const outcome = await runInThread<ComputeOutcome<StudyResults>>(
+      { task: 'study', input },
+      { signal: ctx.signal, onProgress: (s, m) => ctx.report(s, m) },
+    );
     if (!outcome.ok) throw new JobFailure(`The study could not be computed: ${outcome.message}`);
     await storeResultsOnce(ctx, data, {
       label: 'The study',

@@ -35,40 +35,73 @@ export function batteryWarnings(b: Omit<BatteryFields, 'name'>, site?: SiteLimit
   const add = (field: BatteryWarning['field'], message: string) => warnings.push({ field, message });
 
   if (b.socMinPct < SOC_LOW_PCT) {
-    add('socMinPct', `A minimum state of charge of ${fmt(b.socMinPct)} % is below common practice (10–90 %); check the maker's operating limits.`);
+    add(
+      'socMinPct',
+      `A minimum state of charge of ${fmt(b.socMinPct)} % is below common practice (10–90 %); check the maker's operating limits.`,
+    );
   }
   if (b.socMaxPct > SOC_HIGH_PCT) {
-    add('socMaxPct', `A maximum state of charge of ${fmt(b.socMaxPct)} % is above common practice (10–90 %); check the maker's operating limits.`);
+    add(
+      'socMaxPct',
+      `A maximum state of charge of ${fmt(b.socMaxPct)} % is above common practice (10–90 %); check the maker's operating limits.`,
+    );
   }
   if (b.efficiencyCharge > MAX_EFFICIENCY) {
-    add('efficiencyCharge', `A charging efficiency of ${fmt(b.efficiencyCharge, 3)} is above ${MAX_EFFICIENCY}: higher than batteries achieve in practice.`);
+    add(
+      'efficiencyCharge',
+      `A charging efficiency of ${fmt(b.efficiencyCharge, 3)} is above ${MAX_EFFICIENCY}: higher than batteries achieve in practice.`,
+    );
   }
   if (b.efficiencyDischarge > MAX_EFFICIENCY) {
-    add('efficiencyDischarge', `A discharging efficiency of ${fmt(b.efficiencyDischarge, 3)} is above ${MAX_EFFICIENCY}: higher than batteries achieve in practice.`);
+    add(
+      'efficiencyDischarge',
+      `A discharging efficiency of ${fmt(b.efficiencyDischarge, 3)} is above ${MAX_EFFICIENCY}: higher than batteries achieve in practice.`,
+    );
   }
   const roundTrip = b.efficiencyCharge * b.efficiencyDischarge;
   if (roundTrip < MIN_ROUND_TRIP) {
-    add(null, `The round-trip efficiency is ${fmt(roundTrip * 100, 1)} % (charging × discharging), far below the 82–85 % typical of lithium-ion; check both values.`);
+    add(
+      null,
+      `The round-trip efficiency is ${fmt(roundTrip * 100, 1)} % (charging × discharging), far below the 82–85 % typical of lithium-ion; check both values.`,
+    );
   }
   const chargeRate = b.powerChargeKw / b.energyKwh;
   if (chargeRate > MAX_C_RATE) {
-    add('powerChargeKw', `The charge power is ${fmt(chargeRate)} C (above 1 C: a full charge in under an hour); check the maker's rating.`);
+    add(
+      'powerChargeKw',
+      `The charge power is ${fmt(chargeRate)} C (above 1 C: a full charge in under an hour); check the maker's rating.`,
+    );
   }
   const dischargeRate = b.powerDischargeKw / b.energyKwh;
   if (dischargeRate > MAX_C_RATE) {
-    add('powerDischargeKw', `The discharge power is ${fmt(dischargeRate)} C (above 1 C: a full discharge in under an hour); check the maker's rating.`);
+    add(
+      'powerDischargeKw',
+      `The discharge power is ${fmt(dischargeRate)} C (above 1 C: a full discharge in under an hour); check the maker's rating.`,
+    );
   }
   if (b.selfDischargePctPerHour > MAX_SELF_DISCHARGE_PCT_PER_HOUR) {
-    add('selfDischargePctPerHour', `Self-discharge of ${fmt(b.selfDischargePctPerHour, 3)} % per hour is far above lithium-ion's few % per month.`);
+    add(
+      'selfDischargePctPerHour',
+      `Self-discharge of ${fmt(b.selfDischargePctPerHour, 3)} % per hour is far above lithium-ion's few % per month.`,
+    );
   }
   if (b.maxCyclesPerDay !== null && b.maxCyclesPerDay > MAX_CYCLES_PER_DAY) {
-    add('maxCyclesPerDay', `${fmt(b.maxCyclesPerDay)} cycles per day is well above the one cycle per day planning studies assume; check the warranty.`);
+    add(
+      'maxCyclesPerDay',
+      `${fmt(b.maxCyclesPerDay)} cycles per day is well above the one cycle per day planning studies assume; check the warranty.`,
+    );
   }
   if (site?.importLimitKw != null && b.powerChargeKw > site.importLimitKw) {
-    add('powerChargeKw', `The charge power is above the site's import limit of ${fmt(site.importLimitKw)} kW: charging from the grid will be capped by the connection.`);
+    add(
+      'powerChargeKw',
+      `The charge power is above the site's import limit of ${fmt(site.importLimitKw)} kW: charging from the grid will be capped by the connection.`,
+    );
   }
   if (site?.exportLimitKw != null && b.powerDischargeKw > site.exportLimitKw) {
-    add('powerDischargeKw', `The discharge power is above the site's export limit of ${fmt(site.exportLimitKw)} kW: discharging to the grid will be capped by the connection.`);
+    add(
+      'powerDischargeKw',
+      `The discharge power is above the site's export limit of ${fmt(site.exportLimitKw)} kW: discharging to the grid will be capped by the connection.`,
+    );
   }
   return warnings;
 }

@@ -9,9 +9,12 @@ import { z } from 'zod';
 const num = (message: string) => z.number({ error: message });
 
 const positiveKw = (what: string) =>
-  num(`Enter the ${what} in kW.`).gt(0, `The ${what} must be above 0 kW.`).max(10_000_000, `The ${what} is above 10 GW: enter it in kW.`);
+  num(`Enter the ${what} in kW.`)
+    .gt(0, `The ${what} must be above 0 kW.`)
+    .max(10_000_000, `The ${what} is above 10 GW: enter it in kW.`);
 
-const pct = (what: string) => num(`Enter the ${what} in %.`).min(0, `The ${what} is at least 0 %.`).max(100, `The ${what} is at most 100 %.`);
+const pct = (what: string) =>
+  num(`Enter the ${what} in %.`).min(0, `The ${what} is at least 0 %.`).max(100, `The ${what} is at most 100 %.`);
 
 const efficiency = (what: string) =>
   num(`Enter the ${what} as a fraction, e.g. 0.92.`)
@@ -22,16 +25,23 @@ export const batteryFieldsSchema = z.strictObject({
   name: z.string().trim().min(1, 'Give the battery a name.').max(120, 'Use at most 120 characters.'),
   powerChargeKw: positiveKw('charge power'),
   powerDischargeKw: positiveKw('discharge power'),
-  energyKwh: num('Enter the nameplate energy in kWh.').gt(0, 'The energy must be above 0 kWh.').max(100_000_000, 'The energy is above 100 GWh: enter it in kWh.'),
+  energyKwh: num('Enter the nameplate energy in kWh.')
+    .gt(0, 'The energy must be above 0 kWh.')
+    .max(100_000_000, 'The energy is above 100 GWh: enter it in kWh.'),
   socMinPct: pct('minimum state of charge'),
   socMaxPct: pct('maximum state of charge'),
   socInitialPct: pct('initial state of charge'),
   efficiencyCharge: efficiency('charging efficiency'),
   efficiencyDischarge: efficiency('discharging efficiency'),
-  selfDischargePctPerHour: num('Enter the self-discharge in % per hour.').min(0, 'Self-discharge cannot be negative.').lt(100, 'Self-discharge must be below 100 % per hour.'),
+  selfDischargePctPerHour: num('Enter the self-discharge in % per hour.')
+    .min(0, 'Self-discharge cannot be negative.')
+    .lt(100, 'Self-discharge must be below 100 % per hour.'),
   degradationCostPerMwh: num('Enter the degradation cost per MWh discharged.').min(0, 'The degradation cost cannot be negative.'),
   /** Daily cap on equivalent full cycles; null = none. */
-  maxCyclesPerDay: num('Enter the cycle limit per day, or leave it empty for none.').gt(0, 'The cycle limit must be above 0, or empty for none.').max(48, 'At most 48 cycles per day.').nullable(),
+  maxCyclesPerDay: num('Enter the cycle limit per day, or leave it empty for none.')
+    .gt(0, 'The cycle limit must be above 0, or empty for none.')
+    .max(48, 'At most 48 cycles per day.')
+    .nullable(),
 });
 
 export type BatteryParams = Omit<z.infer<typeof batteryFieldsSchema>, 'name'>;

@@ -33,7 +33,9 @@ export interface HorizonPreviewLimits {
 }
 
 /** The horizons a preview of this snapshot accepts (the profiles' common period bounds the data). */
-export function horizonPreviewLimits(inputs: Pick<PlanInputs, 'deliveryStart' | 'deliveryEnd' | 'profiles'>): HorizonPreviewLimits {
+export function horizonPreviewLimits(
+  inputs: Pick<PlanInputs, 'deliveryStart' | 'deliveryEnd' | 'profiles'>,
+): HorizonPreviewLimits {
   const refs = [inputs.profiles.price, inputs.profiles.load, inputs.profiles.generation].filter((p) => p !== null);
   const stepMinutes = Math.min(...refs.map((p) => p.stepMinutes));
   const startMs = Date.parse(inputs.deliveryStart);

@@ -30,10 +30,17 @@ export const profileListQuerySchema = z.strictObject({ kind: profileKindSchema.o
  */
 export const profileWindowQuerySchema = z
   .strictObject({
-    from: z.iso.datetime({ offset: true, error: 'Give "from" as an RFC 3339 time with offset, e.g. 2026-01-05T00:00:00+01:00.' }).optional(),
-    to: z.iso.datetime({ offset: true, error: 'Give "to" as an RFC 3339 time with offset, e.g. 2026-01-12T00:00:00+01:00.' }).optional(),
+    from: z.iso
+      .datetime({ offset: true, error: 'Give "from" as an RFC 3339 time with offset, e.g. 2026-01-05T00:00:00+01:00.' })
+      .optional(),
+    to: z.iso
+      .datetime({ offset: true, error: 'Give "to" as an RFC 3339 time with offset, e.g. 2026-01-12T00:00:00+01:00.' })
+      .optional(),
   })
-  .refine((q) => !q.from || !q.to || Date.parse(q.from) < Date.parse(q.to), { path: ['to'], message: '"to" must be after "from".' });
+  .refine((q) => !q.from || !q.to || Date.parse(q.from) < Date.parse(q.to), {
+    path: ['to'],
+    message: '"to" must be after "from".',
+  });
 
 export type ProfileWindowQuery = z.infer<typeof profileWindowQuerySchema>;
 

@@ -35,10 +35,7 @@ const optionalKw = (what: string) =>
 
 export const siteFieldsSchema = z.strictObject({
   name: z.string().trim().min(1, 'Give the site a name.').max(120, 'Use at most 120 characters.'),
-  timezone: z
-    .string()
-    .trim()
-    .refine(isIanaTimeZone, 'Choose an IANA time zone name from the list, such as Europe/Berlin.'),
+  timezone: z.string().trim().refine(isIanaTimeZone, 'Choose an IANA time zone name from the list, such as Europe/Berlin.'),
   /** Largest grid import in kW; null = no limit. */
   importLimitKw: optionalKw('import limit'),
   /** Largest grid export in kW; null = no limit. */
@@ -72,7 +69,9 @@ export const siteCreateSchema = siteFieldsSchema.extend({
 });
 
 /** PATCH: any subset of the fields; unknown keys (id, createdBy…) are refused, not ignored. */
-export const sitePatchSchema = siteFieldsSchema.partial().refine((v) => Object.keys(v).length > 0, 'Send at least one field to change.');
+export const sitePatchSchema = siteFieldsSchema
+  .partial()
+  .refine((v) => Object.keys(v).length > 0, 'Send at least one field to change.');
 
 export type SiteFields = z.infer<typeof siteFieldsSchema>;
 export type SiteCreateInput = z.input<typeof siteCreateSchema>;

@@ -83,7 +83,10 @@ const router = createBrowserRouter([
       { path: 'plans/compare', ...lazyPage(() => import('@/features/plans/components/compare-page').then((m) => m.ComparePage)) },
       { path: 'plans/:id', ...lazyPage(() => import('./routes/plan').then((m) => m.PlanRoute)) },
       { path: 'studies', ...lazyPage(() => import('@/features/studies/components/studies-page').then((m) => m.StudiesPage)) },
-      { path: 'studies/new', ...lazyPage(() => import('@/features/studies/components/new-study-page').then((m) => m.NewStudyPage)) },
+      {
+        path: 'studies/new',
+        ...lazyPage(() => import('@/features/studies/components/new-study-page').then((m) => m.NewStudyPage)),
+      },
       { path: 'studies/:id', ...lazyPage(() => import('@/features/studies/components/study-page').then((m) => m.StudyPage)) },
       { path: '*', element: <NotFoundRoute /> },
     ],

@@ -41,8 +41,13 @@ export function FormField({ id, label, unit, error, warning, hint, children }: F
 }
 
 /** aria-describedby for a control inside FormField, naming whichever messages are shown. */
-export function describedBy(id: string, f: { error?: string | undefined; warning?: string | undefined; hint?: string | undefined }) {
-  const ids = [f.error && `${id}-error`, f.warning && !f.error && `${id}-warning`, f.hint && !f.error && `${id}-hint`].filter(Boolean);
+export function describedBy(
+  id: string,
+  f: { error?: string | undefined; warning?: string | undefined; hint?: string | undefined },
+) {
+  const ids = [f.error && `${id}-error`, f.warning && !f.error && `${id}-warning`, f.hint && !f.error && `${id}-hint`].filter(
+    Boolean,
+  );
   return ids.length > 0 ? ids.join(' ') : undefined;
 }
 
@@ -55,8 +60,10 @@ export const compactSelect = 'rounded border border-ink-300 bg-white px-2 py-1 t
 export const buttonClass = {
   primary:
     'rounded bg-seaglass-700 px-4 py-2 text-sm font-semibold text-white hover:bg-seaglass-800 disabled:cursor-not-allowed disabled:opacity-50',
-  secondary: 'rounded border border-ink-300 bg-white px-4 py-2 text-sm font-medium text-ink-800 hover:bg-ink-50 disabled:opacity-50',
-  danger: 'rounded border border-brick-600 bg-white px-3 py-1.5 text-sm font-medium text-brick-700 hover:bg-brick-100 disabled:opacity-50',
+  secondary:
+    'rounded border border-ink-300 bg-white px-4 py-2 text-sm font-medium text-ink-800 hover:bg-ink-50 disabled:opacity-50',
+  danger:
+    'rounded border border-brick-600 bg-white px-3 py-1.5 text-sm font-medium text-brick-700 hover:bg-brick-100 disabled:opacity-50',
 };
 
 /** A setting outside common practice: accepted, shown in amber with what to check. */

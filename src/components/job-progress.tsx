@@ -38,7 +38,10 @@ export function JobProgressBar({ job, label }: { job: JobProgress; label: string
         aria-valuenow={Math.round(share * 100)}
         className="h-2.5 w-full overflow-hidden rounded-full bg-ink-100"
       >
-        <div className={`h-full rounded-full transition-[width] duration-500 ${barColour}`} style={{ width: `${Math.round(share * 100)}%` }} />
+        <div
+          className={`h-full rounded-full transition-[width] duration-500 ${barColour}`}
+          style={{ width: `${Math.round(share * 100)}%` }}
+        />
       </div>
       {job.message && !failed && <p className="text-xs text-ink-500">{job.message}</p>}
       {job.error && job.state !== 'completed' && (
@@ -51,4 +54,5 @@ export function JobProgressBar({ job, label }: { job: JobProgress; label: string
 }
 
 /** True while the job may still change (poll it). */
-export const isJobActive = (job: JobProgress | null | undefined) => !!job && (job.state === 'queued' || job.state === 'running' || job.state === 'retrying');
+export const isJobActive = (job: JobProgress | null | undefined) =>
+  !!job && (job.state === 'queued' || job.state === 'running' || job.state === 'retrying');

@@ -10,7 +10,15 @@ export function LoadingState({ label = 'Loading…' }: { label?: string }) {
 }
 
 /** A failed request, said plainly, with the server's issues when it sent any and a retry. */
-export function ErrorState({ error, onRetry, title = 'This could not be loaded.' }: { error: unknown; onRetry?: () => void; title?: string }) {
+export function ErrorState({
+  error,
+  onRetry,
+  title = 'This could not be loaded.',
+}: {
+  error: unknown;
+  onRetry?: () => void;
+  title?: string;
+}) {
   const message = error instanceof Error ? error.message : String(error);
   const signIn = error instanceof ApiError && error.status === 401;
   return (

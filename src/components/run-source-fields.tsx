@@ -20,12 +20,26 @@ export interface RunSource {
   generationProfileId: string;
 }
 
-export const emptyRunSource: RunSource = { siteId: '', batteryId: '', priceProfileId: '', loadProfileId: '', generationProfileId: '' };
+export const emptyRunSource: RunSource = {
+  siteId: '',
+  batteryId: '',
+  priceProfileId: '',
+  loadProfileId: '',
+  generationProfileId: '',
+};
 
 export function useRunSourceLists(siteId: string) {
   const sites = useQuery({ queryKey: ['sites', 'list'], queryFn: () => api.get<Site[]>('/api/sites') });
-  const batteries = useQuery({ queryKey: ['batteries', 'list', siteId], queryFn: () => api.get<Battery[]>(`/api/sites/${siteId}/batteries`), enabled: !!siteId });
-  const profiles = useQuery({ queryKey: ['profiles', 'list', siteId], queryFn: () => api.get<ProfileSummary[]>(`/api/sites/${siteId}/profiles`), enabled: !!siteId });
+  const batteries = useQuery({
+    queryKey: ['batteries', 'list', siteId],
+    queryFn: () => api.get<Battery[]>(`/api/sites/${siteId}/batteries`),
+    enabled: !!siteId,
+  });
+  const profiles = useQuery({
+    queryKey: ['profiles', 'list', siteId],
+    queryFn: () => api.get<ProfileSummary[]>(`/api/sites/${siteId}/profiles`),
+    enabled: !!siteId,
+  });
   return { sites, batteries, profiles };
 }
 
@@ -43,7 +57,13 @@ export function RunSourceFields({ value, onChange, errors }: Props) {
   const { sites, batteries, profiles } = useRunSourceLists(value.siteId);
   const byKind = (kind: ProfileSummary['kind']) => (profiles.data ?? []).filter((p) => p.kind === kind);
   const timeZone = sites.data?.find((s) => s.id === value.siteId)?.timezone ?? 'UTC';
-  const select = (id: keyof RunSource, label: string, options: { id: string; label: string }[], optional: boolean, hint?: string) => (
+  const select = (
+    id: keyof RunSource,
+    label: string,
+    options: { id: string; label: string }[],
+    optional: boolean,
+    hint?: string,
+  ) => (
     <FormField id={id} label={label} error={errors[id]} hint={hint}>
       <select
         id={id}
@@ -68,11 +88,37 @@ export function RunSourceFields({ value, onChange, errors }: Props) {
   );
   return (
     <div className="grid gap-4 sm:grid-cols-2">
-      {select('siteId', 'Site', (sites.data ?? []).map((s) => ({ id: s.id, label: `${s.name} (${s.timezone})` })), false)}
-      {select('batteryId', 'Battery', (batteries.data ?? []).map((b) => ({ id: b.id, label: `${b.name} (${b.powerDischargeKw} kW / ${b.energyKwh} kWh)` })), false)}
-      {select('priceProfileId', 'Price profile', byKind('price').map((p) => ({ id: p.id, label: profileLabel(p, timeZone) })), false)}
-      {select('loadProfileId', 'Load profile', byKind('load').map((p) => ({ id: p.id, label: profileLabel(p, timeZone) })), true, 'Leave empty for pure arbitrage.')}
-      {select('generationProfileId', 'Generation profile', byKind('generation').map((p) => ({ id: p.id, label: profileLabel(p, timeZone) })), true)}
+      {select(
+        'siteId',
+        'Site',
+        (sites.data ?? []).map((s) => ({ id: s.id, label: `${s.name} (${s.timezone})` })),
+        false,
+      )}
+      {select(
+        'batteryId',
+        'Battery',
+        (batteries.data ?? []).map((b) => ({ id: b.id, label: `${b.name} (${b.powerDischargeKw} kW / ${b.energyKwh} kWh)` })),
+        false,
+      )}
+      {select(
+        'priceProfileId',
+        'Price profile',
+        byKind('price').map((p) => ({ id: p.id, label: profileLabel(p, timeZone) })),
+        false,
+      )}
+      {select(
+        'loadProfileId',
+        'Load profile',
+        byKind('load').map((p) => ({ id: p.id, label: profileLabel(p, timeZone) })),
+        true,
+        'Leave empty for pure arbitrage.',
+      )}
+      {select(
+        'generationProfileId',
+        'Generation profile',
+        byKind('generation').map((p) => ({ id: p.id, label: profileLabel(p, timeZone) })),
+        true,
+      )}
     </div>
   );
 }

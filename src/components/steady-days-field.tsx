@@ -11,14 +11,31 @@ export function steadyDaysOf(text: string | undefined): SteadyDays {
   return parsed.success ? parsed.data : 'all';
 }
 
-export function SteadyDaysField({ value, onChange, error }: { value: SteadyDays; onChange: (next: SteadyDays) => void; error?: string }) {
-  const hint = 'The days averaged into the representative day: choose weekdays or weekend days when their prices differ and you plan for that kind of day.';
+export function SteadyDaysField({
+  value,
+  onChange,
+  error,
+}: {
+  value: SteadyDays;
+  onChange: (next: SteadyDays) => void;
+  error?: string;
+}) {
+  const hint =
+    'The days averaged into the representative day: choose weekdays or weekend days when their prices differ and you plan for that kind of day.';
   return (
     <FormField id="steadyDays" label="Steady-cycle days" error={error} hint={hint}>
-      <select id="steadyDays" className={inputClass} value={value} aria-invalid={!!error}
-        aria-describedby={describedBy('steadyDays', { error, hint })} onChange={(e) => onChange(steadyDaysOf(e.target.value))}>
+      <select
+        id="steadyDays"
+        className={inputClass}
+        value={value}
+        aria-invalid={!!error}
+        aria-describedby={describedBy('steadyDays', { error, hint })}
+        onChange={(e) => onChange(steadyDaysOf(e.target.value))}
+      >
         {steadyDaysValues.map((days) => (
-          <option key={days} value={days}>{steadyDaysLabels[days]}</option>
+          <option key={days} value={days}>
+            {steadyDaysLabels[days]}
+          </option>
         ))}
       </select>
     </FormField>

@@ -45,10 +45,14 @@ export function fromWallTimeInput(text: string, timeZone: string): number | null
 }
 
 export const formatNumber = (n: number | null | undefined, digits = 1) =>
-  n === null || n === undefined || !Number.isFinite(n) ? '–' : n.toLocaleString(undefined, { maximumFractionDigits: digits, minimumFractionDigits: 0 });
+  n === null || n === undefined || !Number.isFinite(n)
+    ? '–'
+    : n.toLocaleString(undefined, { maximumFractionDigits: digits, minimumFractionDigits: 0 });
 
 export const formatMoney = (n: number | null | undefined, currency: string) =>
-  n === null || n === undefined || !Number.isFinite(n) ? '–' : `${n.toLocaleString(undefined, { maximumFractionDigits: 2, minimumFractionDigits: 2 })} ${currency}`;
+  n === null || n === undefined || !Number.isFinite(n)
+    ? '–'
+    : `${n.toLocaleString(undefined, { maximumFractionDigits: 2, minimumFractionDigits: 2 })} ${currency}`;
 
 export const formatPercent = (share: number | null | undefined, digits = 0) =>
   share === null || share === undefined || !Number.isFinite(share) ? '–' : `${(share * 100).toFixed(digits)} %`;
@@ -78,4 +82,3 @@ export function formatSteps(steps: number, stepMinutes: number): string {
 export function formatMoment(iso: string | number, withSeconds = false): string {
   return format(new Date(iso), withSeconds ? 'yyyy-MM-dd HH:mm:ss xxx' : 'yyyy-MM-dd HH:mm xxx');
 }
-

@@ -56,7 +56,10 @@ describe('session lifetime', () => {
   it('counts the idle period from the last request: a session 5 minutes from its expiry is slid back to 30', async () => {
     // [S] ASVS 4.0.3 3.3.2: the idle timeout runs from the last activity, not from the last renewal.
     const agent = await signInAs(app, 'viewer');
-    await getDb().update(sessions).set({ expiresAt: new Date(Date.now() + minutes(25)) }).where(eq(sessions.userId, agent.user.id));
+    await getDb()
+      .update(sessions)
+      .set({ expiresAt: new Date(Date.now() + minutes(25)) })
+      .where(eq(sessions.userId, agent.user.id));
     const response = await agent.get('/api/auth/me');
     expect(response.status).toBe(200);
     expect(String(response.headers['set-cookie'])).toMatch(/slackwater_session=[a-z0-9]+;.*Max-Age=1800/);

@@ -35,11 +35,17 @@ async function violationsOn(page: Page, pathname: string): Promise<string[]> {
   await page.waitForTimeout(300);
   await page.addScriptTag({ path: axeScript });
   const violations = await page.evaluate(async () => {
-    const axe = (window as unknown as { axe: { run: (ctx: Document, options: object) => Promise<{ violations: Violation[] }> } }).axe;
-    const result = await axe.run(document, { runOnly: { type: 'tag', values: ['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa'] }, resultTypes: ['violations'] });
+    const axe = (window as unknown as { axe: { run: (ctx: Document, options: object) => Promise<{ violations: Violation[] }> } })
+      .axe;
+    const result = await axe.run(document, {
+      runOnly: { type: 'tag', values: ['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa'] },
+      resultTypes: ['violations'],
+    });
     return result.violations;
   });
-  return violations.map((v) => `${pathname}: ${v.id} (${v.impact}) ${v.help} at ${v.nodes.map((n) => n.target.join(' ')).join(', ')}`);
+  return violations.map(
+    (v) => `${pathname}: ${v.id} (${v.impact}) ${v.help} at ${v.nodes.map((n) => n.target.join(' ')).join(', ')}`,
+  );
 }
 
 describe('accessibility of the main screens', () => {
@@ -74,7 +80,15 @@ describe('accessibility of the main screens', () => {
       const plans = await apiGet<{ batteryId: string; deliveryStart: string; deliveryEnd: string }[]>(page, '/api/plans');
       const { batteryId, deliveryStart, deliveryEnd } = plans[0]!;
       const compare = `/plans/compare?${new URLSearchParams({ batteryId, deliveryStart, deliveryEnd }).toString()}`;
-      return ['/plans/new', '/studies/new', '/sites', `/sites/${sites[0]!.id}`, '/profiles', `/profiles/${profiles[0]!.id}`, compare];
+      return [
+        '/plans/new',
+        '/studies/new',
+        '/sites',
+        `/sites/${sites[0]!.id}`,
+        '/profiles',
+        `/profiles/${profiles[0]!.id}`,
+        compare,
+      ];
     });
   }, 180_000);
 

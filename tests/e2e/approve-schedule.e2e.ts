@@ -126,7 +126,11 @@ describe('approving a schedule', () => {
           expect(await viewerPage.getByRole('button', { name }).count()).toBe(0);
         }
         // The viewer reads the same charts (drawn once the figure has measured its width).
-        await viewerPage.getByRole('figure', { name: /Price and dispatch/ }).locator('svg path').first().waitFor({ timeout: 30_000 });
+        await viewerPage
+          .getByRole('figure', { name: /Price and dispatch/ })
+          .locator('svg path')
+          .first()
+          .waitFor({ timeout: 30_000 });
         await screenshot(viewerPage, 'approve-5-viewer');
         for (const action of ['submit', 'approve', 'reject']) {
           const response = await apiPost(viewerPage, `/api/plans/${planId}/${action}`, { version: 1, comment: 'viewer tries' });

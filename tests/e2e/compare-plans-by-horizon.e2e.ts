@@ -147,13 +147,23 @@ describe('comparing plans by horizon', () => {
         // and the plan form opens preset with that horizon.
         const tryHorizon = page.getByRole('region', { name: 'Try another horizon' });
         const slider = tryHorizon.getByRole('slider', { name: 'Horizon' });
-        await tryHorizon.getByRole('status').filter({ hasText: /Re-planned with 24 h in/ }).waitFor({ timeout: 30_000 });
+        await tryHorizon
+          .getByRole('status')
+          .filter({ hasText: /Re-planned with 24 h in/ })
+          .waitFor({ timeout: 30_000 });
         await slider.focus();
         await page.keyboard.press('ArrowRight');
         expect(await slider.inputValue()).toBe('25');
-        await tryHorizon.getByRole('status').filter({ hasText: /Re-planned with 25 h in/ }).waitFor({ timeout: 30_000 });
+        await tryHorizon
+          .getByRole('status')
+          .filter({ hasText: /Re-planned with 25 h in/ })
+          .waitFor({ timeout: 30_000 });
         expect(await tryHorizon.getByLabel('Horizon in hours').inputValue()).toBe('25');
-        await tryHorizon.getByRole('figure', { name: 'SoC of the plan and of the preview' }).locator('svg path').first().waitFor({ timeout: 30_000 });
+        await tryHorizon
+          .getByRole('figure', { name: 'SoC of the plan and of the preview' })
+          .locator('svg path')
+          .first()
+          .waitFor({ timeout: 30_000 });
         await screenshot(page, 'compare-3b-horizon-preview');
         await tryHorizon.getByRole('link', { name: 'Make a plan with 25 h' }).click();
         await page.getByRole('heading', { name: 'New plan' }).waitFor();

@@ -21,7 +21,9 @@ describe('home page smoke test', () => {
     const family = await brand.evaluate((el) => getComputedStyle(el).fontFamily);
     expect(family).toMatch(/^"?Barlow"?/);
     // The bundled font file was actually used, not a fallback.
-    const barlowLoaded = await page.evaluate(() => [...document.fonts].some((f) => f.family.replace(/"/g, '') === 'Barlow' && f.status === 'loaded'));
+    const barlowLoaded = await page.evaluate(() =>
+      [...document.fonts].some((f) => f.family.replace(/"/g, '') === 'Barlow' && f.status === 'loaded'),
+    );
     expect(barlowLoaded).toBe(true);
     await screenshot(page, 'smoke-home');
     expect(offsite).toEqual([]);

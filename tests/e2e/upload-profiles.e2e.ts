@@ -123,7 +123,10 @@ describe('sites, batteries and profile uploads in the browser', () => {
     const before = await page.getByRole('table', { name: 'Profiles' }).getByRole('row').count();
     expect(before).toBe(3); // the header, the price week and the load week stored above
     await chooseFile(page, 'broken/duplicate-timestamp.csv', 'price', 'currency/MWh');
-    await page.getByRole('alert', { name: /The preview found a problem/ }).getByRole('cell', { name: '4', exact: true }).waitFor();
+    await page
+      .getByRole('alert', { name: /The preview found a problem/ })
+      .getByRole('cell', { name: '4', exact: true })
+      .waitFor();
     await page.getByRole('button', { name: 'Upload profile' }).click();
     const refused = page.getByRole('alert', { name: /The server refused the file/ });
     await refused.getByRole('cell', { name: '4', exact: true }).waitFor();

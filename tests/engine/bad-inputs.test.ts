@@ -56,12 +56,15 @@ describe('bad inputs', () => {
   it('reports infeasible when the battery cannot hold out above the import limit, naming where it starts', () => {
     // 3 h at 300 kW above the limit need 900 kWh; only 500 kWh are stored (η = 1) and nothing can be charged.
     const limited = { ...site, importLimitKw: 1000 };
-    const s = solveDispatch(problem([50, 50, 50], { site: limited, loadKw: [1300, 1300, 1300], battery: battery({ socInitialPct: 50 }) }), { method: 'lp' });
+    const s = solveDispatch(
+      problem([50, 50, 50], { site: limited, loadKw: [1300, 1300, 1300], battery: battery({ socInitialPct: 50 }) }),
+      { method: 'lp' },
+    );
     expect(s.status).toBe('infeasible');
     expect(s.message).toContain('step 0 (2026-01-01 00:00 +00:00)');
   });
 
-  it('names the interval in the site\'s local time with its offset', () => {
+  it("names the interval in the site's local time with its offset", () => {
     // [S] IANA tz database: Europe/Berlin keeps CET (UTC+01:00) in January, so 2026-01-01T04:00Z is 05:00 local.
     const berlin = { ...site, timezone: 'Europe/Berlin' };
     const s = solveDispatch(problem(prices, { site: berlin, loadKw: [100, 200, 300, 300, 1600, 1700] }));

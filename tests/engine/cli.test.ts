@@ -13,13 +13,33 @@ const cli = (...args: string[]) => run(tsx, ['server/engine/cli/main.ts', ...arg
 
 // Two UTC days of hourly prices: cheap nights, dear evenings.
 const hours = Array.from({ length: 48 }, (_, t) => t);
-const prices = file('prices.csv', ['time,price', ...hours.map((t) => `${new Date(Date.UTC(2026, 4, 4, t)).toISOString()},${(50 + 30 * Math.sin(((t % 24) - 10) / 3.8)).toFixed(2)}`)].join('\n'));
+const prices = file(
+  'prices.csv',
+  [
+    'time,price',
+    ...hours.map(
+      (t) => `${new Date(Date.UTC(2026, 4, 4, t)).toISOString()},${(50 + 30 * Math.sin(((t % 24) - 10) / 3.8)).toFixed(2)}`,
+    ),
+  ].join('\n'),
+);
 const batteryKeys = {
-  powerChargeKw: 1000, powerDischargeKw: 1000, energyKwh: 1000, socMinPct: 0, socMaxPct: 100, socInitialPct: 0,
-  efficiencyCharge: 0.9, efficiencyDischarge: 0.9, selfDischargePctPerHour: 0, degradationCostPerMwh: 0, maxCyclesPerDay: null,
+  powerChargeKw: 1000,
+  powerDischargeKw: 1000,
+  energyKwh: 1000,
+  socMinPct: 0,
+  socMaxPct: 100,
+  socInitialPct: 0,
+  efficiencyCharge: 0.9,
+  efficiencyDischarge: 0.9,
+  selfDischargePctPerHour: 0,
+  degradationCostPerMwh: 0,
+  maxCyclesPerDay: null,
 };
 const battery = file('battery.json', JSON.stringify(batteryKeys));
-const site = file('site.json', JSON.stringify({ timezone: 'UTC', importLimitKw: null, exportLimitKw: null, demandChargePerKw: null }));
+const site = file(
+  'site.json',
+  JSON.stringify({ timezone: 'UTC', importLimitKw: null, exportLimitKw: null, demandChargePerKw: null }),
+);
 const fixtureA = file('fixture-a.csv', 'time,price\n2026-05-04T00:00:00Z,20\n2026-05-04T01:00:00Z,100\n');
 const badBattery = file('bad-battery.json', JSON.stringify({ ...batteryKeys, efficiencyCharge: 1.5 }));
 const badPrices = file('bad-prices.csv', 'time,price\n2026-05-04T00:00:00Z,20\n2026-05-04T01:00:00Z,1OO\n');
@@ -31,9 +51,46 @@ beforeAll(async () => {
   const jobs: Record<string, Promise<Run>> = {
     steady: run('npm', ['run', '--silent', 'cli', '--', 'steady', ...common]),
     reference: cli('reference', '--prices', fixtureA, '--battery', battery, '--site', site),
-    plan: cli('plan', ...common, '--start', '2026-05-04T12:00:00Z', '--end', '2026-05-05T00:00:00Z', '--horizon', '24', '--terminal', 'steady-value'),
-    planWeekday: cli('plan', ...common, '--start', '2026-05-04T12:00:00Z', '--end', '2026-05-05T00:00:00Z', '--horizon', '24', '--terminal', 'free', '--days', 'weekday'),
-    planWeekend: cli('plan', ...common, '--start', '2026-05-04T12:00:00Z', '--end', '2026-05-05T00:00:00Z', '--horizon', '24', '--terminal', 'free', '--days', 'weekend'),
+    plan: cli(
+      'plan',
+      ...common,
+      '--start',
+      '2026-05-04T12:00:00Z',
+      '--end',
+      '2026-05-05T00:00:00Z',
+      '--horizon',
+      '24',
+      '--terminal',
+      'steady-value',
+    ),
+    planWeekday: cli(
+      'plan',
+      ...common,
+      '--start',
+      '2026-05-04T12:00:00Z',
+      '--end',
+      '2026-05-05T00:00:00Z',
+      '--horizon',
+      '24',
+      '--terminal',
+      'free',
+      '--days',
+      'weekday',
+    ),
+    planWeekend: cli(
+      'plan',
+      ...common,
+      '--start',
+      '2026-05-04T12:00:00Z',
+      '--end',
+      '2026-05-05T00:00:00Z',
+      '--horizon',
+      '24',
+      '--terminal',
+      'free',
+      '--days',
+      'weekend',
+    ),
     study: cli('study', ...common, '--horizons', '6,12', '--replan', '2', '--terminal', 'free,steady-value', '--workers', '1'),
     badBattery: cli('reference', '--prices', prices, '--battery', badBattery),
     badPrices: cli('reference', '--prices', badPrices, '--battery', battery),
@@ -47,7 +104,9 @@ describe('command line', () => {
     expect(r.code).toBe(0);
     const out = JSON.parse(r.stdout);
     expect(out.slots).toHaveLength(24);
-    expect(Object.keys(out.slots[0])).toEqual(expect.arrayContaining(['time', 'chargeKw', 'dischargeKw', 'socKwh', 'storedEnergyValue']));
+    expect(Object.keys(out.slots[0])).toEqual(
+      expect.arrayContaining(['time', 'chargeKw', 'dischargeKw', 'socKwh', 'storedEnergyValue']),
+    );
     expect(typeof out.cost).toBe('number');
     expect(typeof out.equivalentCycles).toBe('number');
   });
@@ -68,7 +127,9 @@ describe('command line', () => {
     const out = JSON.parse(r.stdout);
     expect(out.steps).toBe(12);
     expect(out.lookahead.steps).toBe(12);
-    expect(Object.keys(out.turnpike)).toEqual(expect.arrayContaining(['band', 'nearSteadyShare', 'entryArcSteps', 'leavingArcSteps', 'commitWindowSteps', 'flags']));
+    expect(Object.keys(out.turnpike)).toEqual(
+      expect.arrayContaining(['band', 'nearSteadyShare', 'entryArcSteps', 'leavingArcSteps', 'commitWindowSteps', 'flags']),
+    );
   });
 
   it('plan --days: the steady cycle from weekdays only, and exit 2 when the data hold no weekend day', () => {
@@ -105,7 +166,16 @@ describe('command line', () => {
   });
 
   it('rejects a missing or unknown option with an input error (exit 2 in main.ts), checked in-process', () => {
-    const plan = parseArgs(['plan', ...common, '--start', '2026-05-04T12:00:00Z', '--end', '2026-05-05T00:00:00Z', '--terminal', 'free']);
+    const plan = parseArgs([
+      'plan',
+      ...common,
+      '--start',
+      '2026-05-04T12:00:00Z',
+      '--end',
+      '2026-05-05T00:00:00Z',
+      '--terminal',
+      'free',
+    ]);
     expect(() => required(plan, 'horizon')).toThrow(/needs --horizon/);
     expect(() => parseArgs(['steady', ...common, '--horizon', '5'])).toThrow(CliInputError);
     expect(() => parseArgs(['steady', ...common, '--horizon', '5'])).toThrow(/has no option --horizon/);

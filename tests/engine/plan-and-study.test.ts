@@ -18,7 +18,14 @@ describe('plans', () => {
     // [S] Trélat & Zuazua 2015; Faulwasser & Grüne 2020 (REFERENCES): a plan with no terminal value ends with
     // a leaving arc that empties the battery. [D] Delivery 00:00–14:00 with a 14 h horizon ends at 14:00,
     // when the steady cycle is still full, so the free plan sells early and leaves the band inside the window.
-    const result = solvePlan(inputs, { startMs: t0 + day, endMs: t0 + day + 14 * 3_600_000, horizonHours: 14, terminal: { kind: 'free' }, initialSocPct: 25, method: 'lp' });
+    const result = solvePlan(inputs, {
+      startMs: t0 + day,
+      endMs: t0 + day + 14 * 3_600_000,
+      horizonHours: 14,
+      terminal: { kind: 'free' },
+      initialSocPct: 25,
+      method: 'lp',
+    });
     if (!result.ok) throw new Error(result.issue.message);
     expect(result.plan.turnpike.leavingArcSteps).toBeGreaterThan(0);
     expect(result.plan.turnpike.flags.join(' ')).toContain('leaving arc reaches into the delivery window');
@@ -27,12 +34,21 @@ describe('plans', () => {
   it('has no leaving arc in the window with the steady-value rule, and a commit window covering the delivery day', () => {
     // [D] DESIGN section 1 (adjoint turnpike): valuing end energy at the steady value removes the leaving arc;
     // a 36 h plan then agrees with a much longer plan over the 24 h delivery day.
-    const result = solvePlan(inputs, { startMs: t0 + day, endMs: t0 + 2 * day, horizonHours: 36, terminal: { kind: 'steady-value' }, initialSocPct: 25, method: 'lp' });
+    const result = solvePlan(inputs, {
+      startMs: t0 + day,
+      endMs: t0 + 2 * day,
+      horizonHours: 36,
+      terminal: { kind: 'steady-value' },
+      initialSocPct: 25,
+      method: 'lp',
+    });
     if (!result.ok) throw new Error(result.issue.message);
     const { turnpike, solution, from, windowEnd, terminalRule } = result.plan;
     expect(turnpike.flags.join(' ')).not.toContain('leaving arc');
     expect(turnpike.commitWindowSteps).toBeGreaterThanOrEqual(24);
-    expect(brokenLimits(problemFor(inputs, from, windowEnd, inputs.battery.energyKwh * 0.25, terminalRule), solution)).toEqual([]);
+    expect(brokenLimits(problemFor(inputs, from, windowEnd, inputs.battery.energyKwh * 0.25, terminalRule), solution)).toEqual(
+      [],
+    );
   });
 
   it('refuses a horizon shorter than the delivery window, naming it', () => {
@@ -45,7 +61,12 @@ describe('plans', () => {
 describe('horizon study', () => {
   it('gives the same runs on worker threads as in one thread', async () => {
     // [D] Each run is a deterministic function of its inputs, wherever it runs.
-    const request = { horizonsHours: [6, 24], replanHours: 2, terminals: [{ kind: 'free' } as const, { kind: 'steady-value' } as const], method: 'lp' as const };
+    const request = {
+      horizonsHours: [6, 24],
+      replanHours: 2,
+      terminals: [{ kind: 'free' } as const, { kind: 'steady-value' } as const],
+      method: 'lp' as const,
+    };
     const here = await runHorizonStudy(periodicInputs(4), { ...request, workers: 1 });
     const threads = await runHorizonStudy(periodicInputs(4), { ...request, workers: 2 });
     if (!here.ok || !threads.ok) throw new Error('study failed');
@@ -62,7 +83,15 @@ describe('closed loop on two cores', () => {
     // exact run; [D] from the meeting step on each window sees the same state and prices, so the rest matches.
     const inputs20 = periodicInputs(20);
     const job = { horizonHours: 24, horizonSteps: 24, terminal: { kind: 'free' as const } };
-    const context = { inputs: inputs20, from: 0, to: 480, replanSteps: 1, initialEnergyKwh: 4000, bandFraction: 0.05, method: 'lp' as const };
+    const context = {
+      inputs: inputs20,
+      from: 0,
+      to: 480,
+      replanSteps: 1,
+      initialEnergyKwh: 4000,
+      bandFraction: 0.05,
+      method: 'lp' as const,
+    };
     const sequential = runJob(context, job);
     const parallel = await runClosedLoopParallel(context, job, 2);
     expect(parallel.parallel?.stretches).toBe(2);

@@ -25,7 +25,8 @@ describe.each(backends)('stored-energy value on %s', (backend) => {
       for (let seed = 1; seed <= 6; seed++) {
         const p = randomDispatchProblem(variant, 1000 + seed);
         const h = 1e-3 * p.battery.energyKwh;
-        if (!interior(p, p.initialEnergyKwh - h) || !interior(p, p.initialEnergyKwh + h) || p.terminal.kind === 'cyclic') continue;
+        if (!interior(p, p.initialEnergyKwh - h) || !interior(p, p.initialEnergyKwh + h) || p.terminal.kind === 'cyclic')
+          continue;
         const base = solve(p);
         const up = solve({ ...p, initialEnergyKwh: p.initialEnergyKwh + h });
         const down = solve({ ...p, initialEnergyKwh: p.initialEnergyKwh - h });

@@ -22,7 +22,12 @@ describe('turnpike behaviour', () => {
     const steady = solveSteadyCycle(inputs);
     if (!steady.ok || steady.cycle.status !== 'optimal') throw new Error('steady cycle failed');
     const counts = [3, 5, 8, 16].map((days) => {
-      const path = solveReferencePath(inputs, { to: 24 * days + 12, initialSocPct: 100, terminal: { kind: 'free' }, method: 'lp' });
+      const path = solveReferencePath(inputs, {
+        to: 24 * days + 12,
+        initialSocPct: 100,
+        terminal: { kind: 'free' },
+        method: 'lp',
+      });
       if (!path.ok || path.path.solution.status !== 'optimal') throw new Error('plan failed');
       const soc = path.path.solution.socKwh.slice(1);
       const reference = soc.map((_, t) => steadySocAt(steady.cycle, ((t + 1) % 24) * 60));

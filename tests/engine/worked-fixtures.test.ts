@@ -36,7 +36,14 @@ describe.each(backends)('worked fixtures on %s', (backend) => {
   it('demand charge fixture: shaves the 10 MW peak to 8 MW at 100 per MW and does not shave at 10 per MW', () => {
     // [D] REFERENCES demand-charge fixture: load [5, 5, 10, 5] MW, flat 50 /MWh, 2 MW / 4 MWh, η = 0.9 each,
     // cyclic. D is per kW in the engine: 100 /MW = 0.1 /kW.
-    const b = battery({ powerChargeKw: 2000, powerDischargeKw: 2000, energyKwh: 4000, efficiencyCharge: 0.9, efficiencyDischarge: 0.9, socInitialPct: 50 });
+    const b = battery({
+      powerChargeKw: 2000,
+      powerDischargeKw: 2000,
+      energyKwh: 4000,
+      efficiencyCharge: 0.9,
+      efficiencyDischarge: 0.9,
+      socInitialPct: 50,
+    });
     const withCharge = (perKw: number) =>
       solve(
         problem([50, 50, 50, 50], {
@@ -63,7 +70,14 @@ describe.each(backends)('worked fixtures on %s', (backend) => {
     // because the window holds at most U and each price level lasts k steps.
     const k = 3;
     const [pLo, pHi, etaC, etaD] = [30, 90, 0.95, 0.9];
-    const b = battery({ energyKwh: 2000, socMinPct: 10, socMaxPct: 90, socInitialPct: 10, efficiencyCharge: etaC, efficiencyDischarge: etaD });
+    const b = battery({
+      energyKwh: 2000,
+      socMinPct: 10,
+      socMaxPct: 90,
+      socInitialPct: 10,
+      efficiencyCharge: etaC,
+      efficiencyDischarge: etaD,
+    });
     const usable = 1600;
     const sized = { ...b, powerChargeKw: usable / (etaC * k), powerDischargeKw: (usable * etaD) / k };
     const s = solve(problem([...Array(k).fill(pLo), ...Array(k).fill(pHi)], { battery: sized }));

@@ -40,7 +40,6 @@ function script(name: string, args: string[]) {
   });
 }
 
-
 /** Plans whose stored checksum does not match their stored content, computed outside the app. */
 async function mismatching(url: string): Promise<Set<string>> {
   const rows = await sqlAt<{ id: string; checksum: string; inputs: unknown; results: unknown }>(

@@ -63,7 +63,9 @@ describe('the demo scenario', () => {
   });
 
   it('holds an approved plan, the next day awaiting sign-off from its end SoC, four horizons of one Sunday and a finished study; the process exits; a second load adds nothing', async () => {
-    expect(await prepareDemo()).toMatch(/Demo plans \(approved, awaiting sign-off, four horizons of one Sunday\) and a horizon study computed/);
+    expect(await prepareDemo()).toMatch(
+      /Demo plans \(approved, awaiting sign-off, four horizons of one Sunday\) and a horizon study computed/,
+    );
     const plans = await query<PlanRow>(plansQuery);
     expect(plans.map((p) => [p.day, p.status, p.horizon_hours, p.terminal_rule])).toEqual([
       ['2026-12-04', 'approved', 48, 'steady-value'],
@@ -93,7 +95,9 @@ describe('the demo scenario', () => {
     // [D] Six horizons times two terminal rules.
     expect(studies).toEqual([{ state: 'completed', runs: 12 }]);
     const mail = await query<{ to: string; subject: string }>('select "to", subject from mail_outbox order by id');
-    expect(mail.filter((m) => m.to === 'approver@slackwater.example' && /^Plan awaiting your sign-off/.test(m.subject))).toHaveLength(2);
+    expect(
+      mail.filter((m) => m.to === 'approver@slackwater.example' && /^Plan awaiting your sign-off/.test(m.subject)),
+    ).toHaveLength(2);
 
     expect(await prepareDemo()).toMatch(/Demo plans present/);
     expect(await query<PlanRow>(plansQuery)).toEqual(plans);

@@ -49,10 +49,15 @@ describe('a plan job out of attempts', () => {
     const failed = await waitUntilFinished<Plan>(planner, `/api/plans/${plan.id}`, 120_000);
     expect(failed.job!.state).toBe('failed');
     expect(failed.results).toBeNull();
-    expect(failed.errorMessage).toMatch(/^The job was given up after 1 attempt\. Last error: The worker running this job stopped responding/);
+    expect(failed.errorMessage).toMatch(
+      /^The job was given up after 1 attempt\. Last error: The worker running this job stopped responding/,
+    );
     const [bossJob] = await sqlRows<{ state: string }>(`select state::text from ${schema}.job where id = $1`, [job.id]);
     expect(bossJob!.state).toBe('failed');
-    const dead = await sqlRows<{ n: number }>(`select count(*)::int as n from ${schema}.job where name = 'job-dead-letter' and data->>'jobId' = $1`, [job.id]);
+    const dead = await sqlRows<{ n: number }>(
+      `select count(*)::int as n from ${schema}.job where name = 'job-dead-letter' and data->>'jobId' = $1`,
+      [job.id],
+    );
     expect(dead[0]!.n).toBe(1);
   }, 240_000);
 });

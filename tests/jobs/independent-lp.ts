@@ -33,9 +33,17 @@ export function optimalArbitrageProfit(c: ArbitrageCase): number {
     variables[`c${t}`] = { profit: (-p * c.stepHours) / 1000, [`bal${t}`]: -c.etaCharge * c.stepHours, [`capc${t}`]: 1 };
     variables[`d${t}`] = { profit: (p * c.stepHours) / 1000, [`bal${t}`]: c.stepHours / c.etaDischarge, [`capd${t}`]: 1 };
     // e_{t+1} appears in its own balance row (+1) and in the next one (−1).
-    variables[`e${t + 1}`] = { [`bal${t}`]: 1, ...(t + 1 < c.prices.length ? { [`bal${t + 1}`]: -1 } : {}), [`hi${t}`]: 1, [`lo${t}`]: 1 };
+    variables[`e${t + 1}`] = {
+      [`bal${t}`]: 1,
+      ...(t + 1 < c.prices.length ? { [`bal${t + 1}`]: -1 } : {}),
+      [`hi${t}`]: 1,
+      [`lo${t}`]: 1,
+    };
   });
-  const result = solver.Solve({ optimize: 'profit', opType: 'max', constraints, variables }) as { feasible: boolean; result: number };
+  const result = solver.Solve({ optimize: 'profit', opType: 'max', constraints, variables }) as {
+    feasible: boolean;
+    result: number;
+  };
   if (!result.feasible) throw new Error('the independent LP is infeasible');
   return result.result;
 }

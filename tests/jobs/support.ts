@@ -54,7 +54,12 @@ function csv(spec: SeriesSpec): Buffer {
   return Buffer.from(`${lines.join('\n')}\n`);
 }
 
-export async function uploadProfile(agent: TestAgent, siteId: string, kind: 'price' | 'load' | 'generation', spec: SeriesSpec): Promise<string> {
+export async function uploadProfile(
+  agent: TestAgent,
+  siteId: string,
+  kind: 'price' | 'load' | 'generation',
+  spec: SeriesSpec,
+): Promise<string> {
   const response = await agent
     .post(`/api/sites/${siteId}/profiles`)
     .field('kind', kind)
@@ -74,9 +79,14 @@ export interface PlaceSpec {
 
 /** A UTC site without limits, a battery (1 MW / 2 MWh unless overridden) and the profiles. */
 export async function createPlace(agent: TestAgent, spec: PlaceSpec): Promise<Place> {
-  const site = await agent
-    .post('/api/sites')
-    .send({ name: `Jobs site ${randomUUID().slice(0, 8)}`, timezone: 'UTC', importLimitKw: null, exportLimitKw: null, currency: 'EUR', ...spec.site });
+  const site = await agent.post('/api/sites').send({
+    name: `Jobs site ${randomUUID().slice(0, 8)}`,
+    timezone: 'UTC',
+    importLimitKw: null,
+    exportLimitKw: null,
+    currency: 'EUR',
+    ...spec.site,
+  });
   expect(site.status, JSON.stringify(site.body)).toBe(201);
   const battery = await agent.post(`/api/sites/${site.body.id}/batteries`).send({
     name: 'Unit 1',

@@ -61,10 +61,16 @@ describe('a worker process killed in the middle of a horizon study', () => {
     expect(finished.results!.runs).toHaveLength(2);
     const [progress] = await sqlRows<{ worker: string }>('select worker from job_progress where job_id = $1', [job.id]);
     expect(progress!.worker).toMatch(new RegExp(`:${second.pid}$`));
-    const stored = await sqlRows<{ n: number }>("select count(*)::int as n from audit_events where entity_id = $1 and action = 'study.computed'", [study.id]);
+    const stored = await sqlRows<{ n: number }>(
+      "select count(*)::int as n from audit_events where entity_id = $1 and action = 'study.computed'",
+      [study.id],
+    );
     expect(stored[0]!.n).toBe(1);
     // pg-boss's own record: the same job, completed, after one retry.
-    const [bossJob] = await sqlRows<{ state: string; retry_count: number }>(`select state::text, retry_count from ${schema}.job where id = $1`, [job.id]);
+    const [bossJob] = await sqlRows<{ state: string; retry_count: number }>(
+      `select state::text, retry_count from ${schema}.job where id = $1`,
+      [job.id],
+    );
     expect(bossJob).toEqual({ state: 'completed', retry_count: 1 });
   }, 240_000);
 });

@@ -68,7 +68,10 @@ export class WorkerProcesses {
   /** Waits until `job` runs on `worker`, then kills that process without warning. */
   async killWhileRunning(worker: ChildProcess, jobId: string): Promise<void> {
     await pollUntil('the worker to run the job', async () => {
-      const [row] = await sqlRows<{ state: string; worker: string | null }>('select state, worker from job_progress where job_id = $1', [jobId]);
+      const [row] = await sqlRows<{ state: string; worker: string | null }>(
+        'select state, worker from job_progress where job_id = $1',
+        [jobId],
+      );
       return row?.state === 'running' && row.worker?.endsWith(`:${worker.pid}`) ? row : undefined;
     });
     const exited = new Promise((resolve) => worker.once('exit', resolve));

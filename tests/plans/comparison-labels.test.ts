@@ -14,8 +14,20 @@ describe('comparison labels', () => {
   });
 
   it('keep two plans of the same horizon and rule apart, so chart series do not merge', () => {
-    const labels = planLabels([plan(24, 'free'), plan(48, 'free'), plan(24, 'free'), plan(24, 'steady-value', 'weekend'), plan(24, 'free')]);
-    expect(labels).toEqual(['24 h, free', '48 h, free', '24 h, free (2)', '24 h, steady-value · weekend days (Sat–Sun)', '24 h, free (3)']);
+    const labels = planLabels([
+      plan(24, 'free'),
+      plan(48, 'free'),
+      plan(24, 'free'),
+      plan(24, 'steady-value', 'weekend'),
+      plan(24, 'free'),
+    ]);
+    expect(labels).toEqual([
+      '24 h, free',
+      '48 h, free',
+      '24 h, free (2)',
+      '24 h, steady-value · weekend days (Sat–Sun)',
+      '24 h, free (3)',
+    ]);
     expect(new Set(labels).size).toBe(labels.length);
   });
 });

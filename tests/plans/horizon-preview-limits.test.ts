@@ -4,7 +4,13 @@ import { horizonPreviewLimits, MAX_PREVIEW_STEPS } from '@shared/schemas/horizon
 import type { ProfileRef } from '@shared/schemas/plan';
 
 const ref = (kind: ProfileRef['kind'], start: string, end: string, stepMinutes: number): ProfileRef => ({
-  id: kind, name: kind, kind, start, end, stepMinutes, sha256: '0'.repeat(64),
+  id: kind,
+  name: kind,
+  kind,
+  start,
+  end,
+  stepMinutes,
+  sha256: '0'.repeat(64),
 });
 
 describe('preview limits', () => {
@@ -12,7 +18,11 @@ describe('preview limits', () => {
     const limits = horizonPreviewLimits({
       deliveryStart: '2026-03-02T00:00:00.000Z',
       deliveryEnd: '2026-03-02T06:00:00.000Z',
-      profiles: { price: ref('price', '2026-03-01T00:00:00Z', '2026-03-10T00:00:00Z', 60), load: ref('load', '2026-03-01T00:00:00Z', '2026-03-04T12:00:00Z', 30), generation: null },
+      profiles: {
+        price: ref('price', '2026-03-01T00:00:00Z', '2026-03-10T00:00:00Z', 60),
+        load: ref('load', '2026-03-01T00:00:00Z', '2026-03-04T12:00:00Z', 30),
+        generation: null,
+      },
     });
     // [D] The load ends 2 days 12 h after the delivery start: 60 h; the finest step is 30 min; 2016 steps of 30 min are 1008 h.
     expect(limits).toEqual({ minHours: 6, maxHours: 60, stepHours: 0.5, maxReason: 'data' });

@@ -14,7 +14,17 @@ import { findPlanForPreview } from '../../server/horizon-preview/horizon-preview
 import { previewThread } from '../../server/horizon-preview/preview-thread-client';
 import { createTestApp } from '../support/test-app';
 import { signInAs, type SignedInAgent } from '../support/auth';
-import { createPlace, dailyPrices, HOUR_MS, sqlRows, startTestWorker, stopTestWorker, useOwnJobQueues, waitUntilFinished, type Place } from '../jobs/support';
+import {
+  createPlace,
+  dailyPrices,
+  HOUR_MS,
+  sqlRows,
+  startTestWorker,
+  stopTestWorker,
+  useOwnJobQueues,
+  waitUntilFinished,
+  type Place,
+} from '../jobs/support';
 
 useOwnJobQueues('horizon_preview_thread');
 const app = createTestApp();
@@ -24,16 +34,30 @@ let worker: JobWorker | null = null;
 const start = Date.parse('2026-03-02T00:00:00Z');
 const iso = (ms: number) => new Date(ms).toISOString();
 const battery = {
-  energyKwh: 2000, powerChargeKw: 1000, powerDischargeKw: 1000, efficiencyCharge: 0.95, efficiencyDischarge: 0.92,
-  socMinPct: 10, socMaxPct: 90, socInitialPct: 50, selfDischargePctPerHour: 0, degradationCostPerMwh: 0, maxCyclesPerDay: null,
+  energyKwh: 2000,
+  powerChargeKw: 1000,
+  powerDischargeKw: 1000,
+  efficiencyCharge: 0.95,
+  efficiencyDischarge: 0.92,
+  socMinPct: 10,
+  socMaxPct: 90,
+  socInitialPct: 50,
+  selfDischargePctPerHour: 0,
+  degradationCostPerMwh: 0,
+  maxCyclesPerDay: null,
 };
 let hourly: Place;
 let fiveMinute: Place;
 
 async function makePlan(p: Place): Promise<Plan> {
   const created = await planner.post('/api/plans').send({
-    batteryId: p.batteryId, priceProfileId: p.priceProfileId, deliveryStart: iso(start + 24 * HOUR_MS), deliveryEnd: iso(start + 48 * HOUR_MS),
-    horizonHours: 24, terminalRule: 'steady-value', initialSocPct: 50,
+    batteryId: p.batteryId,
+    priceProfileId: p.priceProfileId,
+    deliveryStart: iso(start + 24 * HOUR_MS),
+    deliveryEnd: iso(start + 48 * HOUR_MS),
+    horizonHours: 24,
+    terminalRule: 'steady-value',
+    initialSocPct: 50,
   });
   expect(created.status, JSON.stringify(created.body)).toBe(202);
   const plan = await waitUntilFinished<Plan>(planner, `/api/plans/${(created.body as PlanCreated).plan.id}`);
@@ -41,7 +65,8 @@ async function makePlan(p: Place): Promise<Plan> {
   return plan;
 }
 
-const preview = (planId: string, horizonHours: number) => planner.post(`/api/plans/${planId}/horizon-preview`).send({ horizonHours });
+const preview = (planId: string, horizonHours: number) =>
+  planner.post(`/api/plans/${planId}/horizon-preview`).send({ horizonHours });
 
 /** A job for the thread whose profile values arrive only when the test says: it holds a place in the queue until then. */
 function heldJob(key: string, inputs: Awaited<ReturnType<typeof findPlanForPreview>> & object) {
@@ -50,7 +75,13 @@ function heldJob(key: string, inputs: Awaited<ReturnType<typeof findPlanForPrevi
   // A preview closed before it asked for its profiles never reads the gate: its rejection is expected, not lost.
   gate.catch(() => undefined);
   const run = previewThread.run({ key, inputs: inputs.inputs, horizonHours: 24, loadSeries: () => gate });
-  return { run: run.then(() => 'answered', (error: Error) => error.message), release: () => release(new Error('released by the test')) };
+  return {
+    run: run.then(
+      () => 'answered',
+      (error: Error) => error.message,
+    ),
+    release: () => release(new Error('released by the test')),
+  };
 }
 
 beforeAll(async () => {

@@ -14,7 +14,17 @@ import { signInAs, type SignedInAgent } from '../support/auth';
 import type { JobWorker } from '../../server/jobs/job-worker';
 import { PREVIEW_LIMIT, previewLimitStore } from '../../server/horizon-preview/horizon-preview.routes';
 import { optimalArbitrageProfit } from '../jobs/independent-lp';
-import { createPlace, dailyPrices, HOUR_MS, sqlRows, startTestWorker, stopTestWorker, useOwnJobQueues, waitUntilFinished, type Place } from '../jobs/support';
+import {
+  createPlace,
+  dailyPrices,
+  HOUR_MS,
+  sqlRows,
+  startTestWorker,
+  stopTestWorker,
+  useOwnJobQueues,
+  waitUntilFinished,
+  type Place,
+} from '../jobs/support';
 
 useOwnJobQueues('horizon_preview');
 const app = createTestApp();
@@ -29,15 +39,29 @@ const deliveryStart = start + 24 * HOUR_MS;
 const deliveryEnd = start + 48 * HOUR_MS;
 // No daily cycle cap (the lithium-ion default has one): the exact fast path takes this battery.
 const battery = {
-  energyKwh: 2000, powerChargeKw: 1000, powerDischargeKw: 1000, efficiencyCharge: 0.95, efficiencyDischarge: 0.92,
-  socMinPct: 10, socMaxPct: 90, socInitialPct: 50, selfDischargePctPerHour: 0, degradationCostPerMwh: 0, maxCyclesPerDay: null,
+  energyKwh: 2000,
+  powerChargeKw: 1000,
+  powerDischargeKw: 1000,
+  efficiencyCharge: 0.95,
+  efficiencyDischarge: 0.92,
+  socMinPct: 10,
+  socMaxPct: 90,
+  socInitialPct: 50,
+  selfDischargePctPerHour: 0,
+  degradationCostPerMwh: 0,
+  maxCyclesPerDay: null,
 };
 let place: Place;
 
 async function makePlan(p: Place, horizonHours: number, terminalRule: string): Promise<Plan> {
   const created = await planner.post('/api/plans').send({
-    batteryId: p.batteryId, priceProfileId: p.priceProfileId, deliveryStart: iso(deliveryStart), deliveryEnd: iso(deliveryEnd),
-    horizonHours, terminalRule, initialSocPct: 50,
+    batteryId: p.batteryId,
+    priceProfileId: p.priceProfileId,
+    deliveryStart: iso(deliveryStart),
+    deliveryEnd: iso(deliveryEnd),
+    horizonHours,
+    terminalRule,
+    initialSocPct: 50,
   });
   expect(created.status, JSON.stringify(created.body)).toBe(202);
   const plan = await waitUntilFinished<Plan>(planner, `/api/plans/${(created.body as PlanCreated).plan.id}`);
@@ -45,7 +69,8 @@ async function makePlan(p: Place, horizonHours: number, terminalRule: string): P
   return plan;
 }
 
-const preview = (agent: SignedInAgent, planId: string, horizonHours: unknown) => agent.post(`/api/plans/${planId}/horizon-preview`).send({ horizonHours });
+const preview = (agent: SignedInAgent, planId: string, horizonHours: unknown) =>
+  agent.post(`/api/plans/${planId}/horizon-preview`).send({ horizonHours });
 
 async function okPreview(planId: string, horizonHours: number): Promise<HorizonPreview> {
   const response = await preview(planner, planId, horizonHours);
@@ -114,8 +139,15 @@ describe('a horizon preview', () => {
       // [S] javascript-lp-solver 1.0.3 (npm), on the LP of DESIGN section 3 written out in tests/jobs/independent-lp.ts
       // [S: Hashmi et al. 2019, arXiv 1905.00418]: the best profit over the lookahead with a free end.
       const best = optimalArbitrageProfit({
-        prices: prices.slice(24, 24 + horizonHours), stepHours: 1, powerKw: 1000, energyKwh: 2000,
-        socMinPct: 10, socMaxPct: 90, etaCharge: 0.95, etaDischarge: 0.92, initialKwh: 1000,
+        prices: prices.slice(24, 24 + horizonHours),
+        stepHours: 1,
+        powerKw: 1000,
+        energyKwh: 2000,
+        socMinPct: 10,
+        socMaxPct: 90,
+        etaCharge: 0.95,
+        etaDischarge: 0.92,
+        initialKwh: 1000,
       });
       expect(-paidWindow).toBeCloseTo(best, 4);
     }
@@ -141,15 +173,29 @@ describe('a horizon preview', () => {
   });
 
   it('refuses models only the LP solves, saying why and that a full plan can take the horizon', async () => {
-    const capped = await createPlace(planner, { prices: { values: prices, startMs: start, stepMinutes: 60 }, battery: { ...battery, maxCyclesPerDay: 1 } });
+    const capped = await createPlace(planner, {
+      prices: { values: prices, startMs: start, stepMinutes: 60 },
+      battery: { ...battery, maxCyclesPerDay: 1 },
+    });
     const charged = await createPlace(planner, {
-      prices: { values: prices, startMs: start, stepMinutes: 60 }, battery, site: { demandChargePerKw: 8, importLimitKw: 5000 },
+      prices: { values: prices, startMs: start, stepMinutes: 60 },
+      battery,
+      site: { demandChargePerKw: 8, importLimitKw: 5000 },
       load: { values: prices.map(() => 400), startMs: start, stepMinutes: 60 },
     });
-    for (const [p, reason] of [[capped, /daily throughput cap \(1 cycles per day\)/], [charged, /demand charge \(8 per kW\)/]] as const) {
+    for (const [p, reason] of [
+      [capped, /daily throughput cap \(1 cycles per day\)/],
+      [charged, /demand charge \(8 per kW\)/],
+    ] as const) {
       const created = await planner.post('/api/plans').send({
-        batteryId: p.batteryId, priceProfileId: p.priceProfileId, loadProfileId: p.loadProfileId,
-        deliveryStart: iso(deliveryStart), deliveryEnd: iso(deliveryEnd), horizonHours: 24, terminalRule: 'free', initialSocPct: 50,
+        batteryId: p.batteryId,
+        priceProfileId: p.priceProfileId,
+        loadProfileId: p.loadProfileId,
+        deliveryStart: iso(deliveryStart),
+        deliveryEnd: iso(deliveryEnd),
+        horizonHours: 24,
+        terminalRule: 'free',
+        initialSocPct: 50,
       });
       expect(created.status, JSON.stringify(created.body)).toBe(202);
       const plan = await waitUntilFinished<Plan>(planner, `/api/plans/${(created.body as PlanCreated).plan.id}`);
@@ -170,7 +216,10 @@ describe('a horizon preview', () => {
     const seen = await preview(viewer, plan.id, 30);
     expect(seen.status, JSON.stringify(seen.body)).toBe(200);
     expect((seen.body as HorizonPreview).steps).toHaveLength(30);
-    const anonymous = await request(app).post(`/api/plans/${plan.id}/horizon-preview`).set('Origin', testOrigin).send({ horizonHours: 30 });
+    const anonymous = await request(app)
+      .post(`/api/plans/${plan.id}/horizon-preview`)
+      .set('Origin', testOrigin)
+      .send({ horizonHours: 30 });
     expect(anonymous.status).toBe(401);
   });
 

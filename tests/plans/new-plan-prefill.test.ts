@@ -1,13 +1,27 @@
 /** Links that open the plan form preset with another horizon ("Make a plan with N h" on the horizon preview). */
 import { describe, expect, it } from 'vitest';
 import type { Plan } from '@shared/schemas/plan';
-import { newPlanUrl, prefillFromSearch, prefilledTerminal, prefilledWindow, runSourceOf } from '../../src/features/plans/components/new-plan-prefill';
+import {
+  newPlanUrl,
+  prefillFromSearch,
+  prefilledTerminal,
+  prefilledWindow,
+  runSourceOf,
+} from '../../src/features/plans/components/new-plan-prefill';
 import { steadyDaysOf } from '../../src/components/steady-days-field';
 
 const plan = {
-  siteId: 's-1', batteryId: 'b-1', priceProfileId: 'p-1', loadProfileId: 'l-1', generationProfileId: null,
-  deliveryStart: '2026-05-14T22:00:00.000Z', deliveryEnd: '2026-05-15T22:00:00.000Z', horizonHours: 24,
-  terminalRule: 'target:80', initialSocPct: 42.5, inputs: { steadyDays: 'weekday' },
+  siteId: 's-1',
+  batteryId: 'b-1',
+  priceProfileId: 'p-1',
+  loadProfileId: 'l-1',
+  generationProfileId: null,
+  deliveryStart: '2026-05-14T22:00:00.000Z',
+  deliveryEnd: '2026-05-15T22:00:00.000Z',
+  horizonHours: 24,
+  terminalRule: 'target:80',
+  initialSocPct: 42.5,
+  inputs: { steadyDays: 'weekday' },
 } as Plan;
 
 describe('a preset plan form link', () => {
@@ -16,12 +30,25 @@ describe('a preset plan form link', () => {
     expect(url.startsWith('/plans/new?')).toBe(true);
     const prefill = prefillFromSearch(new URL(url, 'http://x').searchParams);
     expect(prefill).toEqual({
-      siteId: 's-1', batteryId: 'b-1', priceProfileId: 'p-1', loadProfileId: 'l-1',
-      deliveryStart: plan.deliveryStart, deliveryEnd: plan.deliveryEnd, horizonHours: '36', terminalRule: 'target:80', initialSocPct: '42.5',
+      siteId: 's-1',
+      batteryId: 'b-1',
+      priceProfileId: 'p-1',
+      loadProfileId: 'l-1',
+      deliveryStart: plan.deliveryStart,
+      deliveryEnd: plan.deliveryEnd,
+      horizonHours: '36',
+      terminalRule: 'target:80',
+      initialSocPct: '42.5',
       steadyDays: 'weekday',
     });
     expect(steadyDaysOf(prefill.steadyDays)).toBe('weekday');
-    expect(runSourceOf(prefill)).toEqual({ siteId: 's-1', batteryId: 'b-1', priceProfileId: 'p-1', loadProfileId: 'l-1', generationProfileId: '' });
+    expect(runSourceOf(prefill)).toEqual({
+      siteId: 's-1',
+      batteryId: 'b-1',
+      priceProfileId: 'p-1',
+      loadProfileId: 'l-1',
+      generationProfileId: '',
+    });
   });
 
   it('shows the window as wall times of the site’s zone and reads the terminal rule back', () => {

@@ -9,7 +9,17 @@ import type { Plan, PlanCreated } from '@shared/schemas/plan';
 import { createTestApp } from '../support/test-app';
 import { anonymousAgent, signInAs, type SignedInAgent } from '../support/auth';
 import type { JobWorker } from '../../server/jobs/job-worker';
-import { createPlace, dailyPrices, HOUR_MS, sqlRows, startTestWorker, stopTestWorker, useOwnJobQueues, waitUntilFinished, type Place } from '../jobs/support';
+import {
+  createPlace,
+  dailyPrices,
+  HOUR_MS,
+  sqlRows,
+  startTestWorker,
+  stopTestWorker,
+  useOwnJobQueues,
+  waitUntilFinished,
+  type Place,
+} from '../jobs/support';
 
 useOwnJobQueues('plan_bad_input');
 const app = createTestApp();
@@ -57,16 +67,28 @@ describe('POST /api/plans with bad input', () => {
       'deliveryEnd',
       /outside the period of the price profile .*2026-03-02T00:00:00Z – 2026-03-05T00:00:00Z/,
     );
-    await expectRefused(validBody({ deliveryStart: iso(start - 24 * HOUR_MS), deliveryEnd: iso(start) }), 'deliveryStart', /outside the period/);
+    await expectRefused(
+      validBody({ deliveryStart: iso(start - 24 * HOUR_MS), deliveryEnd: iso(start) }),
+      'deliveryStart',
+      /outside the period/,
+    );
   });
 
   it('refuses a profile from another site, naming both sites', async () => {
     const other = await createPlace(planner, { prices: { values: dailyPrices(3), startMs: start, stepMinutes: 60 } });
-    await expectRefused(validBody({ priceProfileId: other.priceProfileId }), 'priceProfileId', /belongs to another site.*Choose a price profile of/);
+    await expectRefused(
+      validBody({ priceProfileId: other.priceProfileId }),
+      'priceProfileId',
+      /belongs to another site.*Choose a price profile of/,
+    );
   });
 
   it('refuses a price profile given as the load profile', async () => {
-    await expectRefused(validBody({ loadProfileId: place.priceProfileId }), 'loadProfileId', /is a price profile; loadProfileId needs a load profile/);
+    await expectRefused(
+      validBody({ loadProfileId: place.priceProfileId }),
+      'loadProfileId',
+      /is a price profile; loadProfileId needs a load profile/,
+    );
   });
 
   it('refuses a horizon that does not cover the delivery window', async () => {
@@ -74,7 +96,11 @@ describe('POST /api/plans with bad input', () => {
   });
 
   it('refuses a delivery start between two steps of the profile', async () => {
-    await expectRefused(validBody({ deliveryStart: iso(start + 24.5 * HOUR_MS) }), 'deliveryStart', /must fall on a step .*every 60 minutes/);
+    await expectRefused(
+      validBody({ deliveryStart: iso(start + 24.5 * HOUR_MS) }),
+      'deliveryStart',
+      /must fall on a step .*every 60 minutes/,
+    );
   });
 
   it('refuses an initial SoC outside the battery’s window and a target above its maximum', async () => {
@@ -104,7 +130,9 @@ describe('a plan waiting in the queue', () => {
     const planId = (created.body as PlanCreated).plan.id;
     const battery = (await planner.get(`/api/batteries/${place.batteryId}`)).body as { version: number; powerChargeKw: number };
     expect(battery.powerChargeKw).toBe(1000);
-    const edit = await planner.patch(`/api/batteries/${place.batteryId}`).send({ version: battery.version, powerChargeKw: 200, powerDischargeKw: 200 });
+    const edit = await planner
+      .patch(`/api/batteries/${place.batteryId}`)
+      .send({ version: battery.version, powerChargeKw: 200, powerDischargeKw: 200 });
     expect(edit.status, JSON.stringify(edit.body)).toBe(200);
 
     worker = await startTestWorker();
@@ -127,7 +155,12 @@ describe('a plan waiting in the queue', () => {
       site: { importLimitKw: 100, exportLimitKw: 100 },
     });
     worker ??= await startTestWorker();
-    const created = await planner.post('/api/plans').send({ ...validBody(), batteryId: infeasible.batteryId, priceProfileId: infeasible.priceProfileId, loadProfileId: infeasible.loadProfileId });
+    const created = await planner.post('/api/plans').send({
+      ...validBody(),
+      batteryId: infeasible.batteryId,
+      priceProfileId: infeasible.priceProfileId,
+      loadProfileId: infeasible.loadProfileId,
+    });
     expect(created.status, JSON.stringify(created.body)).toBe(202);
     const plan = await waitUntilFinished<Plan>(planner, `/api/plans/${(created.body as PlanCreated).plan.id}`);
     expect(plan.job?.state).toBe('failed');

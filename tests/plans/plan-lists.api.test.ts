@@ -10,7 +10,16 @@ import type { JobListItem } from '@shared/schemas/job';
 import { createTestApp } from '../support/test-app';
 import { signInAs, type SignedInAgent } from '../support/auth';
 import type { JobWorker } from '../../server/jobs/job-worker';
-import { createPlace, dailyPrices, HOUR_MS, startTestWorker, stopTestWorker, useOwnJobQueues, waitUntilFinished, type Place } from '../jobs/support';
+import {
+  createPlace,
+  dailyPrices,
+  HOUR_MS,
+  startTestWorker,
+  stopTestWorker,
+  useOwnJobQueues,
+  waitUntilFinished,
+  type Place,
+} from '../jobs/support';
 
 useOwnJobQueues('plan_lists');
 const app = createTestApp();
@@ -24,7 +33,9 @@ const iso = (ms: number) => new Date(ms).toISOString();
 const window1 = { deliveryStart: iso(start), deliveryEnd: iso(start + 24 * HOUR_MS) };
 
 async function makePlan(horizonHours: number, terminalRule: string, window = window1): Promise<Plan> {
-  const created = await planner.post('/api/plans').send({ batteryId: place.batteryId, priceProfileId: place.priceProfileId, ...window, horizonHours, terminalRule });
+  const created = await planner
+    .post('/api/plans')
+    .send({ batteryId: place.batteryId, priceProfileId: place.priceProfileId, ...window, horizonHours, terminalRule });
   expect(created.status, JSON.stringify(created.body)).toBe(202);
   return waitUntilFinished<Plan>(planner, `/api/plans/${(created.body as PlanCreated).plan.id}`);
 }
@@ -58,7 +69,9 @@ describe('plan lists', () => {
     expect(bySite.every((p) => p.siteId === place.siteId)).toBe(true);
     expect(((await viewer.get(`/api/plans?siteId=${place.siteId}&status=approved`)).body as Plan[]).length).toBe(0);
     expect(((await viewer.get(`/api/plans?siteId=${place.siteId}&jobState=failed`)).body as Plan[]).length).toBe(0);
-    expect(((await viewer.get(`/api/plans?siteId=${place.siteId}&jobState=completed`)).body as Plan[]).length).toBe(bySite.length);
+    expect(((await viewer.get(`/api/plans?siteId=${place.siteId}&jobState=completed`)).body as Plan[]).length).toBe(
+      bySite.length,
+    );
     const bad = await viewer.get('/api/plans?status=finished');
     expect(bad.status).toBe(422);
     expect(bad.body.issues[0].path).toBe('status');
@@ -77,7 +90,9 @@ describe('the plan form’s initial SoC', () => {
   it('is the battery’s own until a plan is approved, then the approved plan’s end SoC', async () => {
     const battery = (await planner.get(`/api/batteries/${place.batteryId}`)).body as { socInitialPct: number };
     const next = iso(start + 24 * HOUR_MS);
-    const before = (await planner.get(`/api/batteries/${place.batteryId}/plan-defaults?deliveryStart=${encodeURIComponent(next)}`)).body as PlanDefaults;
+    const before = (
+      await planner.get(`/api/batteries/${place.batteryId}/plan-defaults?deliveryStart=${encodeURIComponent(next)}`)
+    ).body as PlanDefaults;
     expect(before).toMatchObject({ initialSocPct: battery.socInitialPct, initialSocSource: 'battery', initialSocPlanId: null });
 
     // A cyclic plan ends where it starts; a free one sells off: use a target to know the end SoC.
@@ -88,13 +103,21 @@ describe('the plan form’s initial SoC', () => {
     const approved = await approver.post(`/api/plans/${plan.id}/approve`).send({ version: submitted.body.version });
     expect(approved.status, JSON.stringify(approved.body)).toBe(200);
 
-    const after = (await planner.get(`/api/batteries/${place.batteryId}/plan-defaults?deliveryStart=${encodeURIComponent(next)}`)).body as PlanDefaults;
+    const after = (await planner.get(`/api/batteries/${place.batteryId}/plan-defaults?deliveryStart=${encodeURIComponent(next)}`))
+      .body as PlanDefaults;
     expect(after.initialSocSource).toBe('last-approved-plan');
     expect(after.initialSocPlanId).toBe(plan.id);
     expect(after.initialSocPct).toBeCloseTo(plan.results!.summary.endSocPct, 9);
 
     // A new plan for the next day without an initial SoC starts there, and says so in its snapshot.
-    const created = await planner.post('/api/plans').send({ batteryId: place.batteryId, priceProfileId: place.priceProfileId, deliveryStart: next, deliveryEnd: iso(start + 48 * HOUR_MS), horizonHours: 24, terminalRule: 'free' });
+    const created = await planner.post('/api/plans').send({
+      batteryId: place.batteryId,
+      priceProfileId: place.priceProfileId,
+      deliveryStart: next,
+      deliveryEnd: iso(start + 48 * HOUR_MS),
+      horizonHours: 24,
+      terminalRule: 'free',
+    });
     const made = (created.body as PlanCreated).plan;
     expect(made.initialSocPct).toBeCloseTo(plan.results!.summary.endSocPct, 9);
     const detail = (await planner.get(`/api/plans/${made.id}`)).body as Plan;

@@ -9,7 +9,16 @@ import { createTestApp } from '../support/test-app';
 import { signInAs, type SignedInAgent } from '../support/auth';
 import type { JobWorker } from '../../server/jobs/job-worker';
 import { optimalArbitrageProfit } from '../jobs/independent-lp';
-import { createPlace, dailyPrices, HOUR_MS, sqlRows, startTestWorker, stopTestWorker, useOwnJobQueues, waitUntilFinished } from '../jobs/support';
+import {
+  createPlace,
+  dailyPrices,
+  HOUR_MS,
+  sqlRows,
+  startTestWorker,
+  stopTestWorker,
+  useOwnJobQueues,
+  waitUntilFinished,
+} from '../jobs/support';
 
 useOwnJobQueues('plan_results');
 const app = createTestApp();
@@ -44,7 +53,10 @@ describe('a plan computed by a background job', () => {
     // [S] REFERENCES.md worked fixture A (checked with an independent LP solver): charge 1 MW at 20,
     // discharge 0.81 MW at 100: 0.81·100 − 1·20 = 61. The profile repeats [20, 100] for two days.
     const prices = Array.from({ length: 48 }, (_, i) => (i % 2 === 0 ? 20 : 100));
-    const place = await createPlace(planner, { prices: { values: prices, startMs: start, stepMinutes: 60 }, battery: fixtureBattery });
+    const place = await createPlace(planner, {
+      prices: { values: prices, startMs: start, stepMinutes: 60 },
+      battery: fixtureBattery,
+    });
     const created = await planner.post('/api/plans').send({
       batteryId: place.batteryId,
       priceProfileId: place.priceProfileId,
@@ -73,7 +85,15 @@ describe('a plan computed by a background job', () => {
 
   it('matches the optimum of an independent LP solver over the whole horizon, lookahead marked apart from the delivery window', async () => {
     const prices = dailyPrices(4).map((p, i) => p + ((i * 37) % 11) - 5);
-    const battery = { ...fixtureBattery, energyKwh: 2000, socMinPct: 10, socMaxPct: 90, socInitialPct: 50, efficiencyCharge: 0.95, efficiencyDischarge: 0.92 };
+    const battery = {
+      ...fixtureBattery,
+      energyKwh: 2000,
+      socMinPct: 10,
+      socMaxPct: 90,
+      socInitialPct: 50,
+      efficiencyCharge: 0.95,
+      efficiencyDischarge: 0.92,
+    };
     const place = await createPlace(planner, { prices: { values: prices, startMs: start, stepMinutes: 60 }, battery });
     const created = await planner.post('/api/plans').send({
       batteryId: place.batteryId,
@@ -144,10 +164,16 @@ describe('a plan computed by a background job', () => {
     expect(created.status, JSON.stringify(created.body)).toBe(202);
     const id = (created.body as PlanCreated).plan.id;
     await waitUntilFinished<Plan>(planner, `/api/plans/${id}`);
-    const events = await sqlRows<{ action: string; actor_id: string | null }>('select action, actor_id from audit_events where entity_id = $1 order by id', [id]);
+    const events = await sqlRows<{ action: string; actor_id: string | null }>(
+      'select action, actor_id from audit_events where entity_id = $1 order by id',
+      [id],
+    );
     expect(events.map((e) => e.action)).toEqual(['plan.created', 'plan.computed']);
     expect(events[0]!.actor_id).toBe(planner.user.id);
-    const [row] = await sqlRows<{ results_input_version: number; initial_soc_pct: number }>('select results_input_version, initial_soc_pct from plans where id = $1', [id]);
+    const [row] = await sqlRows<{ results_input_version: number; initial_soc_pct: number }>(
+      'select results_input_version, initial_soc_pct from plans where id = $1',
+      [id],
+    );
     expect(row!.results_input_version).toBe(1);
     // No SoC in the request and no approved plan yet: the battery's own initial SoC (the lithium-ion default).
     const battery = await planner.get(`/api/batteries/${place.batteryId}`);

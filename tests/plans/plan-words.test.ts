@@ -27,12 +27,20 @@ describe('the turnpike sentence', () => {
   });
 
   it('names the entry arc, the reason of each terminal rule and the commit window', () => {
-    const text = turnpikeSentence({ ...figures, entryArcSteps: 3, commitWindowSteps: 96, longerLookaheadHours: 192 }, 15, 'target:80');
+    const text = turnpikeSentence(
+      { ...figures, entryArcSteps: 3, commitWindowSteps: 96, longerLookaheadHours: 192 },
+      15,
+      'target:80',
+    );
     expect(text).toContain('the first 45 min approach it from the starting SoC');
     expect(text).toContain('the plan steers to its end target of 80 % SoC');
     expect(text).toContain('The first 24 h agree with a plan looking 192 h ahead: that part is safe to commit.');
-    expect(turnpikeSentence({ ...figures, leavingArcSteps: 0 }, 60, 'steady-value')).toContain('it does not leave the steady cycle before the end of the horizon');
-    expect(turnpikeSentence(figures, 60, 'cyclic')).toContain('the last 20 h leave it: the plan steers back to the SoC it started with');
+    expect(turnpikeSentence({ ...figures, leavingArcSteps: 0 }, 60, 'steady-value')).toContain(
+      'it does not leave the steady cycle before the end of the horizon',
+    );
+    expect(turnpikeSentence(figures, 60, 'cyclic')).toContain(
+      'the last 20 h leave it: the plan steers back to the SoC it started with',
+    );
   });
 
   it('says durations in minutes below an hour and in hours above', () => {

@@ -24,7 +24,8 @@ const job = { key: 'k', inputs: {} as PlanInputs, horizonHours: 24, loadSeries: 
 const outcome = (thread: PreviewThread) =>
   thread.run(job).then(
     () => 'solved',
-    (error: Error) => (error instanceof PreviewBusyError ? { busy: error.message, retryAfter: error.retryAfterSeconds } : error.message),
+    (error: Error) =>
+      error instanceof PreviewBusyError ? { busy: error.message, retryAfter: error.retryAfterSeconds } : error.message,
   );
 
 afterEach(() => {
@@ -47,7 +48,10 @@ describe('the preview thread after a crash', () => {
     // [D] First crash: a pause of 1 s; a preview 0.5 s later is refused without starting a thread.
     vi.setSystemTime(Date.parse('2026-03-02T00:00:00.500Z'));
     const paused = await outcome(thread);
-    expect(paused).toEqual({ busy: expect.stringMatching(/stopped after a failure \(logged\) and restarts in 1 s/), retryAfter: 1 });
+    expect(paused).toEqual({
+      busy: expect.stringMatching(/stopped after a failure \(logged\) and restarts in 1 s/),
+      retryAfter: 1,
+    });
     expect(spawned).toBe(1);
 
     // After the pause a new thread starts; it crashes too, and the pause doubles to 2 s.

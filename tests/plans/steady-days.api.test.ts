@@ -9,7 +9,15 @@ import type { Study, StudyCreated } from '@shared/schemas/study';
 import type { JobWorker } from '../../server/jobs/job-worker';
 import { createTestApp } from '../support/test-app';
 import { signInAs, type SignedInAgent } from '../support/auth';
-import { createPlace, HOUR_MS, startTestWorker, stopTestWorker, useOwnJobQueues, waitUntilFinished, type Place } from '../jobs/support';
+import {
+  createPlace,
+  HOUR_MS,
+  startTestWorker,
+  stopTestWorker,
+  useOwnJobQueues,
+  waitUntilFinished,
+  type Place,
+} from '../jobs/support';
 
 useOwnJobQueues('steady_days');
 const app = createTestApp();
@@ -24,8 +32,17 @@ const weekendDay = Array.from({ length: 24 }, (_, h) => (h >= 11 && h < 15 ? 20 
 const days = (count: number, pick: (day: number) => number[]) => Array.from({ length: count }, (_, d) => pick(d)).flat();
 const isWeekend = (day: number) => day % 7 >= 5;
 const battery = {
-  energyKwh: 2000, powerChargeKw: 1000, powerDischargeKw: 1000, efficiencyCharge: 0.95, efficiencyDischarge: 0.95,
-  socMinPct: 10, socMaxPct: 90, socInitialPct: 50, selfDischargePctPerHour: 0, degradationCostPerMwh: 0, maxCyclesPerDay: null,
+  energyKwh: 2000,
+  powerChargeKw: 1000,
+  powerDischargeKw: 1000,
+  efficiencyCharge: 0.95,
+  efficiencyDischarge: 0.95,
+  socMinPct: 10,
+  socMaxPct: 90,
+  socInitialPct: 50,
+  selfDischargePctPerHour: 0,
+  degradationCostPerMwh: 0,
+  maxCyclesPerDay: null,
 };
 
 let mixed: Place;
@@ -33,10 +50,15 @@ let weekdaysOnly: Place;
 
 async function plan(place: Place, extra: Record<string, unknown>): Promise<Plan> {
   const created = await planner.post('/api/plans').send({
-    batteryId: place.batteryId, priceProfileId: place.priceProfileId,
+    batteryId: place.batteryId,
+    priceProfileId: place.priceProfileId,
     // Tuesday 3 March (a weekday) until noon: the steady-value end prices the energy kept for the evening.
-    deliveryStart: iso(monday + 24 * HOUR_MS), deliveryEnd: iso(monday + 36 * HOUR_MS),
-    horizonHours: 12, terminalRule: 'steady-value', initialSocPct: 50, ...extra,
+    deliveryStart: iso(monday + 24 * HOUR_MS),
+    deliveryEnd: iso(monday + 36 * HOUR_MS),
+    horizonHours: 12,
+    terminalRule: 'steady-value',
+    initialSocPct: 50,
+    ...extra,
   });
   expect(created.status, JSON.stringify(created.body)).toBe(202);
   return waitUntilFinished<Plan>(planner, `/api/plans/${(created.body as PlanCreated).plan.id}`);
@@ -47,8 +69,14 @@ const steadySoc = (p: Plan) => p.results!.steps.map((s) => s.steadySocKwh);
 beforeAll(async () => {
   planner = await signInAs(app, 'planner');
   worker = await startTestWorker();
-  mixed = await createPlace(planner, { prices: { values: days(14, (d) => (isWeekend(d) ? weekendDay : weekdayDay)), startMs: monday, stepMinutes: 60 }, battery });
-  weekdaysOnly = await createPlace(planner, { prices: { values: days(14, () => weekdayDay), startMs: monday, stepMinutes: 60 }, battery });
+  mixed = await createPlace(planner, {
+    prices: { values: days(14, (d) => (isWeekend(d) ? weekendDay : weekdayDay)), startMs: monday, stepMinutes: 60 },
+    battery,
+  });
+  weekdaysOnly = await createPlace(planner, {
+    prices: { values: days(14, () => weekdayDay), startMs: monday, stepMinutes: 60 },
+    battery,
+  });
 });
 afterAll(async () => stopTestWorker(worker));
 
@@ -81,20 +109,35 @@ describe('the steady cycle of a plan', () => {
   });
 
   it('from weekend days fails with the engine’s reason when the data hold no whole weekend day', async () => {
-    const friday = await createPlace(planner, { prices: { values: days(5, () => weekdayDay), startMs: monday, stepMinutes: 60 }, battery });
+    const friday = await createPlace(planner, {
+      prices: { values: days(5, () => weekdayDay), startMs: monday, stepMinutes: 60 },
+      battery,
+    });
     const failed = await plan(friday, { steadyDays: 'weekend' });
     expect(failed.job?.state).toBe('failed');
-    expect(failed.errorMessage).toMatch(/the representative weekend day has no data for the 00:00 slot: the profile must cover at least one whole weekend day/);
+    expect(failed.errorMessage).toMatch(
+      /the representative weekend day has no data for the 00:00 slot: the profile must cover at least one whole weekend day/,
+    );
     expect(failed.results).toBeNull();
   });
 
   it('refuses an unknown choice with 422, naming the field and the choices', async () => {
     const response = await planner.post('/api/plans').send({
-      batteryId: mixed.batteryId, priceProfileId: mixed.priceProfileId,
-      deliveryStart: iso(monday + 24 * HOUR_MS), deliveryEnd: iso(monday + 48 * HOUR_MS), horizonHours: 24, terminalRule: 'free', steadyDays: 'sundays',
+      batteryId: mixed.batteryId,
+      priceProfileId: mixed.priceProfileId,
+      deliveryStart: iso(monday + 24 * HOUR_MS),
+      deliveryEnd: iso(monday + 48 * HOUR_MS),
+      horizonHours: 24,
+      terminalRule: 'free',
+      steadyDays: 'sundays',
     });
     expect(response.status).toBe(422);
-    expect(response.body.issues).toContainEqual(expect.objectContaining({ path: 'steadyDays', message: 'Choose which days the steady cycle averages: all, weekday or weekend.' }));
+    expect(response.body.issues).toContainEqual(
+      expect.objectContaining({
+        path: 'steadyDays',
+        message: 'Choose which days the steady cycle averages: all, weekday or weekend.',
+      }),
+    );
   });
 
   it('of a horizon study from weekdays only prices the steady-value end as the weekday shape alone would', async () => {
@@ -102,9 +145,15 @@ describe('the steady cycle of a plan', () => {
     // with short lookaheads the value of the energy at the end decides what is done now.
     const study = async (place: Place, extra: Record<string, unknown>) => {
       const created = await planner.post('/api/studies').send({
-        batteryId: place.batteryId, priceProfileId: place.priceProfileId,
-        start: iso(monday + 24 * HOUR_MS), end: iso(monday + 72 * HOUR_MS),
-        horizonsHours: [1, 3, 6], replanHours: 1, terminalRules: ['steady-value'], initialSocPct: 50, ...extra,
+        batteryId: place.batteryId,
+        priceProfileId: place.priceProfileId,
+        start: iso(monday + 24 * HOUR_MS),
+        end: iso(monday + 72 * HOUR_MS),
+        horizonsHours: [1, 3, 6],
+        replanHours: 1,
+        terminalRules: ['steady-value'],
+        initialSocPct: 50,
+        ...extra,
       });
       expect(created.status, JSON.stringify(created.body)).toBe(202);
       const done = await waitUntilFinished<Study>(planner, `/api/studies/${(created.body as StudyCreated).study.id}`);

@@ -11,7 +11,7 @@ describe('thinning a series for the chart', () => {
     ]);
   });
 
-  it('keeps every bucket\'s lowest and highest value, so a single negative spike in a year survives', () => {
+  it("keeps every bucket's lowest and highest value, so a single negative spike in a year survives", () => {
     // [D] 105 120 five-minute values, all 50 except one −400 spike; 800 buckets of 132 values each.
     const values = new Array<number>(105_120).fill(50);
     values[77_777] = -400;

@@ -76,9 +76,15 @@ describe('profiles of another site', () => {
     expect(listB.body.map((p: { id: string; siteId: string }) => [p.id, p.siteId])).toContainEqual([profileB, siteB.id]);
   });
 
-  it('refuses another site\'s profile, and one of the wrong kind, where a site\'s profile is required', async () => {
-    await expect(requireSiteProfile(siteA.id, profileB)).rejects.toMatchObject({ status: 422, message: expect.stringMatching(/another site/) });
-    await expect(requireSiteProfile(siteB.id, profileB, 'load')).rejects.toMatchObject({ status: 422, message: expect.stringMatching(/price profile/) });
+  it("refuses another site's profile, and one of the wrong kind, where a site's profile is required", async () => {
+    await expect(requireSiteProfile(siteA.id, profileB)).rejects.toMatchObject({
+      status: 422,
+      message: expect.stringMatching(/another site/),
+    });
+    await expect(requireSiteProfile(siteB.id, profileB, 'load')).rejects.toMatchObject({
+      status: 422,
+      message: expect.stringMatching(/price profile/),
+    });
     await expect(requireSiteProfile(siteB.id, profileB, 'price')).resolves.toMatchObject({ id: profileB });
   });
 

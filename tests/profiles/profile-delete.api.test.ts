@@ -32,7 +32,16 @@ async function insertPlan(status: 'draft' | 'submitted', priceProfileId: string,
     `insert into plans (id, site_id, battery_id, price_profile_id, load_profile_id, delivery_start, delivery_end,
        horizon_hours, terminal_rule, initial_soc_pct, inputs, status, created_by, submitted_by, submitted_at)
      values ($1, $2, $3, $4, $5, '2026-05-05T00:00:00+02:00', '2026-05-06T00:00:00+02:00', 24, 'free', 50, '{}'::jsonb, $6, 'test', $7, $8)`,
-    [id, site.id, batteryId, priceProfileId, loadProfileId, status, status === 'submitted' ? 'test' : null, status === 'submitted' ? new Date() : null],
+    [
+      id,
+      site.id,
+      batteryId,
+      priceProfileId,
+      loadProfileId,
+      status,
+      status === 'submitted' ? 'test' : null,
+      status === 'submitted' ? new Date() : null,
+    ],
   );
   planIds.push(id);
   return id;
@@ -70,7 +79,10 @@ describe('deleting profiles', () => {
 
   it('refuses while a submitted plan uses it as its load profile', async () => {
     const price = await uploadWeek();
-    const load = await upload(planner, site.id, sample('site-load-week-2026-05-04-15min.csv'), 'load.csv', { kind: 'load', unit: 'kW' });
+    const load = await upload(planner, site.id, sample('site-load-week-2026-05-04-15min.csv'), 'load.csv', {
+      kind: 'load',
+      unit: 'kW',
+    });
     await insertPlan('submitted', price, load.body.id);
     expect((await planner.delete(`/api/profiles/${load.body.id}`)).status).toBe(409);
   });

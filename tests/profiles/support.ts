@@ -28,7 +28,11 @@ export function upload(agent: TestAgent, siteId: string, file: Buffer | string, 
  * Number() (a decimal comma swapped for a point when `decimalComma`).
  */
 export function readColumn(bytes: Buffer, column: string, delimiter = ',', decimalComma = false): number[] {
-  const lines = bytes.toString('utf8').replace(/^\uFEFF/, '').split(/\r?\n/).filter((l) => l.trim() !== '');
+  const lines = bytes
+    .toString('utf8')
+    .replace(/^\uFEFF/, '')
+    .split(/\r?\n/)
+    .filter((l) => l.trim() !== '');
   const header = (lines[0] ?? '').split(delimiter);
   const index = header.indexOf(column);
   if (index < 0) throw new Error(`no column ${column} in ${header.join(delimiter)}`);

@@ -29,12 +29,14 @@ beforeAll(async () => {
   site = await createSite(planner, { timezone: 'Europe/Berlin' });
 });
 
-
 describe('rejected uploads', () => {
   it.each(cases.map((c) => [c.file, c] as const))('rejects %s with 422, its line numbers and nothing stored', async (file, c) => {
     expect(c.options.timezone).toBe(site.timezone);
     const before = await storedForSite(site.id);
-    const response = await upload(planner, site.id, sample(`broken/${file}`), file, { kind: c.options.kind, unit: c.options.unit });
+    const response = await upload(planner, site.id, sample(`broken/${file}`), file, {
+      kind: c.options.kind,
+      unit: c.options.unit,
+    });
     expect(response.status).toBe(422);
     expect(response.body.issues.map((i: { line: number }) => i.line)).toEqual(c.issues.map((i) => i.line));
     c.issues.forEach((expected, k) => expect(response.body.issues[k].message).toContain(expected.messageIncludes));
@@ -65,11 +67,16 @@ describe('rejected uploads', () => {
     expect(wrongField.status).toBe(422);
     expect(wrongField.body.issues[0].message).toMatch(/form field "file"/);
 
-    const wrongUnit = await upload(planner, site.id, sample('prices-week-2026-05-04-15min.csv'), 'p.csv', { kind: 'price', unit: 'kW' });
+    const wrongUnit = await upload(planner, site.id, sample('prices-week-2026-05-04-15min.csv'), 'p.csv', {
+      kind: 'price',
+      unit: 'kW',
+    });
     expect(wrongUnit.status).toBe(422);
     expect(wrongUnit.body.issues).toEqual([expect.objectContaining({ line: 0, path: 'unit' })]);
 
-    const json = await planner.post(`/api/sites/${site.id}/profiles`).send({ kind: 'price', unit: 'currency/MWh', file: 'time,price' });
+    const json = await planner
+      .post(`/api/sites/${site.id}/profiles`)
+      .send({ kind: 'price', unit: 'currency/MWh', file: 'time,price' });
     expect(json.status).toBe(422);
     expect(await storedForSite(site.id)).toEqual(before);
   });

@@ -44,16 +44,24 @@ describe('a year of 5-minute data', () => {
     const start = Date.UTC(2026, 0, 1);
     const valueAt = (k: number) => Math.round(1000 * (50 + 40 * Math.sin(k / 37))) / 1000;
     const lines = ['time,price'];
-    for (let k = 0; k < 105_120; k += 1) lines.push(`${new Date(start + k * 300_000).toISOString().replace('.000Z', 'Z')},${valueAt(k)}`);
+    for (let k = 0; k < 105_120; k += 1)
+      lines.push(`${new Date(start + k * 300_000).toISOString().replace('.000Z', 'Z')},${valueAt(k)}`);
     const file = Buffer.from(`${lines.join('\n')}\n`);
     expect(file.length).toBeLessThan(MAX_PROFILE_UPLOAD_BYTES);
 
     const response = await upload(planner, site.id, file, 'five-minute-year.csv');
     expect(response.status).toBe(201);
-    expect(response.body).toMatchObject({ valueCount: 105_120, stepMinutes: 5, start: '2026-01-01T00:00:00.000Z', end: '2027-01-01T00:00:00.000Z' });
+    expect(response.body).toMatchObject({
+      valueCount: 105_120,
+      stepMinutes: 5,
+      start: '2026-01-01T00:00:00.000Z',
+      end: '2027-01-01T00:00:00.000Z',
+    });
 
     // 1 July 00:00 UTC is day 181 of 2026 [D: 31+28+31+30+31+30], index 181 × 288 = 52 128.
-    const day = await planner.get(`/api/profiles/${response.body.id}`).query({ from: '2026-07-01T00:00:00Z', to: '2026-07-02T00:00:00Z' });
+    const day = await planner
+      .get(`/api/profiles/${response.body.id}`)
+      .query({ from: '2026-07-01T00:00:00Z', to: '2026-07-02T00:00:00Z' });
     expect(day.body.window.offset).toBe(52_128);
     expect(day.body.values).toHaveLength(288);
     expect(day.body.values).toEqual(Array.from({ length: 288 }, (_, i) => valueAt(52_128 + i)));

@@ -55,11 +55,14 @@ describe('uploading the 15-minute price week', () => {
   });
 
   it('gives back the original file byte for byte', async () => {
-    const response = await viewer.get(`/api/profiles/${id}/original`).buffer(true).parse((res, done) => {
-      const chunks: Buffer[] = [];
-      res.on('data', (c: Buffer) => chunks.push(c));
-      res.on('end', () => done(null, Buffer.concat(chunks)));
-    });
+    const response = await viewer
+      .get(`/api/profiles/${id}/original`)
+      .buffer(true)
+      .parse((res, done) => {
+        const chunks: Buffer[] = [];
+        res.on('data', (c: Buffer) => chunks.push(c));
+        res.on('end', () => done(null, Buffer.concat(chunks)));
+      });
     expect(response.status).toBe(200);
     expect(response.headers['content-disposition']).toContain(WEEK);
     expect(Buffer.compare(response.body as Buffer, sample(WEEK))).toBe(0);
@@ -78,7 +81,9 @@ describe('uploading the 15-minute price week', () => {
   it('returns only the intervals of a requested window (from inclusive, to exclusive)', async () => {
     const all = readColumn(sample(WEEK), 'price');
     // Tuesday 00:00 to Wednesday 00:00 Berlin time = quarter-hours 96..191 [D: 24 h × 4 per hour].
-    const day = await viewer.get(`/api/profiles/${id}`).query({ from: '2026-05-05T00:00:00+02:00', to: '2026-05-06T00:00:00+02:00' });
+    const day = await viewer
+      .get(`/api/profiles/${id}`)
+      .query({ from: '2026-05-05T00:00:00+02:00', to: '2026-05-06T00:00:00+02:00' });
     expect(day.status).toBe(200);
     expect(day.body.window).toEqual({ offset: 96, start: '2026-05-04T22:00:00.000Z', count: 96 });
     expect(day.body.values).toEqual(all.slice(96, 192));
@@ -104,7 +109,11 @@ describe('uploading the 15-minute price week', () => {
 describe('upload options and formats', () => {
   it('converts interval-ending MWh per hour to average kW starting one hour earlier', async () => {
     const file = 'formats/site-load-day-interval-ending-mwh.csv';
-    const response = await upload(planner, site.id, sample(file), 'load.csv', { kind: 'load', unit: 'MWh', intervalEnding: true });
+    const response = await upload(planner, site.id, sample(file), 'load.csv', {
+      kind: 'load',
+      unit: 'MWh',
+      intervalEnding: true,
+    });
     expect(response.status).toBe(201);
     const detail = await viewer.get(`/api/profiles/${response.body.id}`);
     // [D] energy E MWh over a 1-hour interval is an average power of E × 1000 kW.
@@ -132,4 +141,3 @@ describe('upload options and formats', () => {
     expect(response.body.start).toBe('2025-12-31T23:00:00.000Z');
   });
 });
-

@@ -32,7 +32,14 @@ describe('creating batteries', () => {
   });
 
   it('stores settings outside common practice but lists a warning for each (DESIGN section 8)', async () => {
-    const response = await create({ name: 'Aggressive', energyKwh: 1000, powerDischargeKw: 3000, socMinPct: 0, socMaxPct: 100, efficiencyCharge: 0.99 });
+    const response = await create({
+      name: 'Aggressive',
+      energyKwh: 1000,
+      powerDischargeKw: 3000,
+      socMinPct: 0,
+      socMaxPct: 100,
+      efficiencyCharge: 0.99,
+    });
     expect(response.status).toBe(201);
     const fields = response.body.warnings.map((w: { field: string }) => w.field);
     expect(fields).toEqual(expect.arrayContaining(['socMinPct', 'socMaxPct', 'efficiencyCharge', 'powerDischargeKw']));
@@ -72,7 +79,9 @@ describe('creating batteries', () => {
 describe('editing batteries', () => {
   it('applies a change at the version read, bumps the version and records from → to', async () => {
     const { body: battery } = await create({ name: 'Editable', energyKwh: 2000 });
-    const response = await planner.patch(`/api/batteries/${battery.id}`).send({ version: 1, socMaxPct: 95, degradationCostPerMwh: 12 });
+    const response = await planner
+      .patch(`/api/batteries/${battery.id}`)
+      .send({ version: 1, socMaxPct: 95, degradationCostPerMwh: 12 });
     expect(response.status).toBe(200);
     expect(response.body).toMatchObject({ version: 2, socMaxPct: 95, degradationCostPerMwh: 12, socMinPct: 10 });
     const update = (await auditEvents(battery.id)).find((e) => e.action === 'battery.update');

@@ -62,7 +62,14 @@ describe('battery validation and warnings', () => {
 
   it('warns, without refusing, on a 0–100 % window, efficiencies above 0.98 and C-rates above 1', () => {
     // DESIGN section 8 names these three as outside common practice.
-    const risky = { ...base, socMinPct: 0, socMaxPct: 100, efficiencyCharge: 0.99, efficiencyDischarge: 0.99, powerDischargeKw: 6000 };
+    const risky = {
+      ...base,
+      socMinPct: 0,
+      socMaxPct: 100,
+      efficiencyCharge: 0.99,
+      efficiencyDischarge: 0.99,
+      powerDischargeKw: 6000,
+    };
     expect(batterySchema.safeParse(risky).success).toBe(true);
     const fields = batteryWarnings(risky).map((w) => w.field);
     expect(fields).toEqual(['socMinPct', 'socMaxPct', 'efficiencyCharge', 'efficiencyDischarge', 'powerDischargeKw']);
@@ -70,7 +77,10 @@ describe('battery validation and warnings', () => {
 
   it('warns on a round trip far below fleet averages and on power above the site limits', () => {
     // [S: US EIA 2021] fleet average 82 %; 0.8 × 0.8 = 64 % is far below it [D].
-    const warnings = batteryWarnings({ ...base, efficiencyCharge: 0.8, efficiencyDischarge: 0.8 }, { importLimitKw: 1500, exportLimitKw: null });
+    const warnings = batteryWarnings(
+      { ...base, efficiencyCharge: 0.8, efficiencyDischarge: 0.8 },
+      { importLimitKw: 1500, exportLimitKw: null },
+    );
     expect(warnings.map((w) => w.field)).toEqual([null, 'powerChargeKw']);
     expect(warnings[0]?.message).toMatch(/is 64 %/);
   });

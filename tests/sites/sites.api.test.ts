@@ -78,9 +78,12 @@ describe('site validation', () => {
 
   it('refuses keys the client may not set (no mass assignment) on create and on edit', async () => {
     // SECURITY.md: no mass assignment (ASVS 5.0 15.3.3).
-    const created = await planner
-      .post('/api/sites')
-      .send({ name: uniqueName('Sneaky'), timezone: 'UTC', id: '00000000-0000-4000-8000-000000000001', createdBy: 'someone-else' });
+    const created = await planner.post('/api/sites').send({
+      name: uniqueName('Sneaky'),
+      timezone: 'UTC',
+      id: '00000000-0000-4000-8000-000000000001',
+      createdBy: 'someone-else',
+    });
     expect(created.status).toBe(422);
     expect(JSON.stringify(created.body.issues)).toMatch(/createdBy|id/);
 
@@ -104,9 +107,16 @@ describe('editing sites', () => {
     const site = await createSite(planner, { importLimitKw: 5000 });
     const response = await planner.patch(`/api/sites/${site.id}`).send({ importLimitKw: 6500, demandChargePerKw: 9.5 });
     expect(response.status).toBe(200);
-    expect(response.body).toMatchObject({ importLimitKw: 6500, demandChargePerKw: 9.5, exportLimitKw: 4000, timezone: 'Europe/Berlin' });
+    expect(response.body).toMatchObject({
+      importLimitKw: 6500,
+      demandChargePerKw: 9.5,
+      exportLimitKw: 4000,
+      timezone: 'Europe/Berlin',
+    });
     const update = (await auditEvents(site.id)).find((e) => e.action === 'site.update');
-    expect(update?.details).toEqual({ changes: { importLimitKw: { from: 5000, to: 6500 }, demandChargePerKw: { from: null, to: 9.5 } } });
+    expect(update?.details).toEqual({
+      changes: { importLimitKw: { from: 5000, to: 6500 }, demandChargePerKw: { from: null, to: 9.5 } },
+    });
   });
 
   it('refuses an empty edit with 422', async () => {

@@ -14,9 +14,14 @@ export interface CreatedSite {
 }
 
 export async function createSite(agent: TestAgent, fields: Record<string, unknown> = {}): Promise<CreatedSite> {
-  const response = await agent
-    .post('/api/sites')
-    .send({ name: uniqueName('Test site'), timezone: 'Europe/Berlin', importLimitKw: 5000, exportLimitKw: 4000, currency: 'EUR', ...fields });
+  const response = await agent.post('/api/sites').send({
+    name: uniqueName('Test site'),
+    timezone: 'Europe/Berlin',
+    importLimitKw: 5000,
+    exportLimitKw: 4000,
+    currency: 'EUR',
+    ...fields,
+  });
   expect(response.status, JSON.stringify(response.body)).toBe(201);
   return response.body as CreatedSite;
 }
@@ -25,14 +30,18 @@ export async function createSite(agent: TestAgent, fields: Record<string, unknow
 export async function storedForSite(siteId: string) {
   const pool = getPool();
   const profiles = await pool.query<{ n: number }>('select count(*)::int as n from profiles where site_id = $1', [siteId]);
-  const audit = await pool.query<{ n: number }>("select count(*)::int as n from audit_events where details->>'siteId' = $1", [siteId]);
+  const audit = await pool.query<{ n: number }>("select count(*)::int as n from audit_events where details->>'siteId' = $1", [
+    siteId,
+  ]);
   return { profiles: profiles.rows[0]?.n ?? -1, audit: audit.rows[0]?.n ?? -1 };
 }
 
 export async function auditEvents(entityId: string) {
-  const result = await getPool().query<{ action: string; actor_id: string; actor_email: string; details: Record<string, unknown> }>(
-    'select action, actor_id, actor_email, details from audit_events where entity_id = $1 order by id',
-    [entityId],
-  );
+  const result = await getPool().query<{
+    action: string;
+    actor_id: string;
+    actor_email: string;
+    details: Record<string, unknown>;
+  }>('select action, actor_id, actor_email, details from audit_events where entity_id = $1 order by id', [entityId]);
   return result.rows;
 }

@@ -9,7 +9,17 @@ import { createTestApp } from '../support/test-app';
 import { signInAs, type SignedInAgent } from '../support/auth';
 import type { JobWorker } from '../../server/jobs/job-worker';
 import { optimalArbitrageProfit } from '../jobs/independent-lp';
-import { createPlace, dailyPrices, HOUR_MS, sqlRows, startTestWorker, stopTestWorker, useOwnJobQueues, waitUntilFinished, type Place } from '../jobs/support';
+import {
+  createPlace,
+  dailyPrices,
+  HOUR_MS,
+  sqlRows,
+  startTestWorker,
+  stopTestWorker,
+  useOwnJobQueues,
+  waitUntilFinished,
+  type Place,
+} from '../jobs/support';
 
 useOwnJobQueues('study_api');
 const app = createTestApp();
@@ -70,7 +80,14 @@ describe('a horizon study computed by a background job', () => {
     expect(study.status, study.errorMessage ?? '').toBe('completed');
     expect(study.job?.shareDone).toBe(1);
     const runs = study.results!.runs;
-    expect(runs.map((r) => `${r.horizonHours}/${r.terminal}`).sort()).toEqual(['12/free', '12/steady-value', '24/free', '24/steady-value', '6/free', '6/steady-value']);
+    expect(runs.map((r) => `${r.horizonHours}/${r.terminal}`).sort()).toEqual([
+      '12/free',
+      '12/steady-value',
+      '24/free',
+      '24/steady-value',
+      '6/free',
+      '6/steady-value',
+    ]);
     expect(runs.every((r) => r.status === 'optimal' && r.solves === 48)).toBe(true);
   });
 
@@ -112,7 +129,9 @@ describe('a horizon study computed by a background job', () => {
   });
 
   it('records one study.created and one study.computed audit event', async () => {
-    const events = await sqlRows<{ action: string }>('select action from audit_events where entity_id = $1 order by id', [study.id]);
+    const events = await sqlRows<{ action: string }>('select action from audit_events where entity_id = $1 order by id', [
+      study.id,
+    ]);
     expect(events.map((e) => e.action)).toEqual(['study.created', 'study.computed']);
   });
 });
@@ -129,7 +148,11 @@ describe('POST /api/studies with bad input', () => {
   }
 
   it('refuses a horizon shorter than the re-plan interval, naming the horizon and the fix', async () => {
-    await expectRefused({ horizonsHours: [2, 12], replanHours: 4 }, 'horizonsHours.0', /2 h is shorter than the re-plan interval of 4 h.*Lengthen the horizon or re-plan more often/);
+    await expectRefused(
+      { horizonsHours: [2, 12], replanHours: 4 },
+      'horizonsHours.0',
+      /2 h is shorter than the re-plan interval of 4 h.*Lengthen the horizon or re-plan more often/,
+    );
   });
 
   it('refuses a period outside the price profile', async () => {

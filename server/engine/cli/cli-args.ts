@@ -12,7 +12,18 @@ export interface ParsedArgs {
   readonly flags: ReadonlySet<string>;
 }
 
-const COMMON = ['prices', 'battery', 'load', 'generation', 'export-prices', 'site', 'price-unit', 'load-unit', 'generation-unit', 'method'];
+const COMMON = [
+  'prices',
+  'battery',
+  'load',
+  'generation',
+  'export-prices',
+  'site',
+  'price-unit',
+  'load-unit',
+  'generation-unit',
+  'method',
+];
 const COMMON_FLAGS = ['interval-ending', 'fill-gaps'];
 
 export const COMMAND_OPTIONS: Readonly<Record<string, readonly string[]>> = {
@@ -49,7 +60,8 @@ export function parseArgs(argv: readonly string[]): ParsedArgs {
     }
     if (!allowed.includes(name)) throw new CliInputError(`the ${command} command has no option --${name}\n${USAGE}`);
     const value = inline ?? rest[++i];
-    if (value === undefined || (inline === undefined && value.startsWith('--'))) throw new CliInputError(`--${name} needs a value`);
+    if (value === undefined || (inline === undefined && value.startsWith('--')))
+      throw new CliInputError(`--${name} needs a value`);
     if (options.has(name)) throw new CliInputError(`--${name} is given twice`);
     options.set(name, value);
   }
@@ -66,7 +78,8 @@ export function numberOption(args: ParsedArgs, name: string, rule: (v: number) =
   const text = args.options.get(name);
   if (text === undefined) return undefined;
   const value = Number(text);
-  if (text.trim() === '' || !Number.isFinite(value) || !rule(value)) throw new CliInputError(`--${name} ${text}: expected ${expect}`);
+  if (text.trim() === '' || !Number.isFinite(value) || !rule(value))
+    throw new CliInputError(`--${name} ${text}: expected ${expect}`);
   return value;
 }
 

@@ -26,7 +26,9 @@ function readProfile(path: string, kind: Kind, unit: string, timezone: string, a
     fillGaps: args.flags.has('fill-gaps'),
   });
   if (!parsed.ok) {
-    const lines = parsed.issues.map((issue) => (issue.line > 0 ? `  ${path}:${issue.line}: ${issue.message}` : `  ${path}: ${issue.message}`));
+    const lines = parsed.issues.map((issue) =>
+      issue.line > 0 ? `  ${path}:${issue.line}: ${issue.message}` : `  ${path}: ${issue.message}`,
+    );
     throw new CliInputError(`the ${kind} profile ${path} was rejected:\n${lines.join('\n')}\n${parsed.hint}`);
   }
   for (const note of parsed.profile.notes) process.stderr.write(`note: ${path}: ${note}\n`);
@@ -74,7 +76,8 @@ export function parseInstant(text: string, timezone: string, what: string): numb
     if (Number.isFinite(wall) && clock) {
       const instants = clock.instantsOf(wall);
       if (instants.length === 1) return instants[0]!;
-      if (instants.length === 0) throw new CliInputError(`${what} ${text} does not exist in ${timezone} (a daylight-saving change skips it)`);
+      if (instants.length === 0)
+        throw new CliInputError(`${what} ${text} does not exist in ${timezone} (a daylight-saving change skips it)`);
       throw new CliInputError(`${what} ${text} happens twice in ${timezone} (daylight-saving change): add the UTC offset`);
     }
   }

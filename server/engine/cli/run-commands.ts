@@ -47,7 +47,8 @@ function initialSoc(args: ParsedArgs): number | undefined {
 /** --days: which local days the steady cycle averages. */
 function steadyDays(args: ParsedArgs): DaySelection {
   const days = args.options.get('days') ?? 'all';
-  if (days !== 'all' && days !== 'weekday' && days !== 'weekend') throw new CliInputError(`--days ${days}: expected all, weekday or weekend`);
+  if (days !== 'all' && days !== 'weekday' && days !== 'weekend')
+    throw new CliInputError(`--days ${days}: expected all, weekday or weekend`);
   return days;
 }
 
@@ -68,7 +69,12 @@ export function steadyCommand(inputs: AlignedInputs, args: ParsedArgs) {
     notes: c.notes,
     warnings: settingWarnings(inputs.battery),
     slots: c.slots.map(({ time, chargeKw, dischargeKw, socKwh, storedEnergyValue, priceImport }) => ({
-      time, priceImport, chargeKw, dischargeKw, socKwh, storedEnergyValue,
+      time,
+      priceImport,
+      chargeKw,
+      dischargeKw,
+      socKwh,
+      storedEnergyValue,
     })),
   };
 }
@@ -164,7 +170,10 @@ export async function studyCommand(inputs: AlignedInputs, args: ParsedArgs, prog
   if (!result.ok) throw new CliInputError(`${result.issue.field}: ${result.issue.message}`);
   const { study } = result;
   const failed = study.runs.find((r) => r.status !== 'optimal');
-  if (failed) throw new CliInputError(`the run H = ${failed.horizonHours} h, ${failed.terminal} failed: ${failed.message ?? failed.status}`);
+  if (failed)
+    throw new CliInputError(
+      `the run H = ${failed.horizonHours} h, ${failed.terminal} failed: ${failed.message ?? failed.status}`,
+    );
   return {
     referenceCost: study.referenceCost,
     runs: study.runs.map((r) => ({

@@ -31,7 +31,11 @@ export interface LpDispatchOutcome {
   readonly model?: DispatchModel;
 }
 
-export function failedSolution(status: Exclude<SolveStatus, 'optimal'>, message: string, method: 'lp' | 'dp' = 'lp'): DispatchSolution {
+export function failedSolution(
+  status: Exclude<SolveStatus, 'optimal'>,
+  message: string,
+  method: 'lp' | 'dp' = 'lp',
+): DispatchSolution {
   return {
     status,
     method,
@@ -52,7 +56,8 @@ export function failedSolution(status: Exclude<SolveStatus, 'optimal'>, message:
 function infeasibleMessage(problem: DispatchProblem): string {
   const limit = problem.site.importLimitKw;
   const t = limit === null ? -1 : problem.loadKw.findIndex((l, i) => l - problem.generationKw[i]! > limit);
-  const base = 'No schedule meets every limit (battery power and energy, SoC window, grid limits, throughput cap, terminal rule).';
+  const base =
+    'No schedule meets every limit (battery power and energy, SoC window, grid limits, throughput cap, terminal rule).';
   return t >= 0
     ? `${base} From ${stepLabel(problem, t)} the load exceeds the import limit and the battery must cover the difference; its usable energy or the daily throughput cap may not last. Raise the import limit, the initial SoC or the cap.`
     : `${base} Check the terminal target, the throughput cap and the grid limits.`;
@@ -65,7 +70,9 @@ export function solveDispatchLp(problem: DispatchProblem, options: LpDispatchOpt
     if (issue) return { solution: failedSolution('error', issue.message) };
   }
   const model = buildDispatchModel(problem, options.previousModel ? { previous: options.previousModel } : {});
-  const warmBasis = options.warmStart ? rotateBasis(options.warmStart.previous, model.layout, options.warmStart.shift) : undefined;
+  const warmBasis = options.warmStart
+    ? rotateBasis(options.warmStart.previous, model.layout, options.warmStart.shift)
+    : undefined;
   // The basis (HiGHS) also makes the tie test exact, so it is always asked for.
   const stage1 = solve(model.lp, { ...options, keepBasis: true, ...(warmBasis ? { warmBasis } : {}) });
   if (stage1.status !== 'optimal') {
@@ -78,7 +85,10 @@ export function solveDispatchLp(problem: DispatchProblem, options: LpDispatchOpt
     const { min, max } = energyBounds(problem);
     const mid = (min + max) / 2;
     const warm = tieBreakWarmBasis(model, stage1, mid);
-    const stage2 = solve(buildTieBreakModel(model, stage1, problem.stepHours, mid), warm ? { backend: 'highs', warmBasis: warm } : {});
+    const stage2 = solve(
+      buildTieBreakModel(model, stage1, problem.stepHours, mid),
+      warm ? { backend: 'highs', warmBasis: warm } : {},
+    );
     // If the second solve fails (numerically), the stage-1 schedule is still optimal.
     if (stage2.status === 'optimal') {
       finalX = stage2.x;

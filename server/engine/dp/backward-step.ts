@@ -15,8 +15,15 @@ import type { ValueStore } from './value-store';
  * the result is empty: no energy at step t can satisfy the later constraints.
  */
 export function backwardStep(
-  store: ValueStore, out: number, inp: number, st: StageTable, t: number,
-  a: number, emin: number, emax: number, tol: number,
+  store: ValueStore,
+  out: number,
+  inp: number,
+  st: StageTable,
+  t: number,
+  a: number,
+  emin: number,
+  emax: number,
+  tol: number,
 ): boolean {
   const base = st.off[t] ?? 0;
   const points = (st.off[t + 1] ?? 0) - base;

@@ -75,9 +75,17 @@ export function inventedYear(seed = 2026): DispatchProblem {
     loadKw: prices.map(() => 0),
     generationKw: prices.map(() => 0),
     battery: {
-      powerChargeKw: 1000, powerDischargeKw: 1000, energyKwh: 2000, socMinPct: 10, socMaxPct: 90, socInitialPct: 50,
-      efficiencyCharge: Math.sqrt(0.85), efficiencyDischarge: Math.sqrt(0.85), selfDischargePctPerHour: 0,
-      degradationCostPerMwh: 0, maxCyclesPerDay: null,
+      powerChargeKw: 1000,
+      powerDischargeKw: 1000,
+      energyKwh: 2000,
+      socMinPct: 10,
+      socMaxPct: 90,
+      socInitialPct: 50,
+      efficiencyCharge: Math.sqrt(0.85),
+      efficiencyDischarge: Math.sqrt(0.85),
+      selfDischargePctPerHour: 0,
+      degradationCostPerMwh: 0,
+      maxCyclesPerDay: null,
     },
     site: { timezone: 'UTC', importLimitKw: null, exportLimitKw: null, demandChargePerKw: null },
     initialEnergyKwh: 1000,
@@ -103,8 +111,14 @@ function bestOf(repeats: number, run: () => void): number {
 function windowOf(p: DispatchProblem, from: number, to: number, e0: number): DispatchProblem {
   const cut = <T>(xs: readonly T[]): T[] => xs.slice(from, to);
   return {
-    ...p, timesMs: cut(p.timesMs), priceImport: cut(p.priceImport), priceExport: cut(p.priceExport), loadKw: cut(p.loadKw),
-    generationKw: cut(p.generationKw), dayIndex: cut(p.dayIndex), initialEnergyKwh: e0,
+    ...p,
+    timesMs: cut(p.timesMs),
+    priceImport: cut(p.priceImport),
+    priceExport: cut(p.priceExport),
+    loadKw: cut(p.loadKw),
+    generationKw: cut(p.generationKw),
+    dayIndex: cut(p.dayIndex),
+    initialEnergyKwh: e0,
   };
 }
 
@@ -123,7 +137,11 @@ function glpkWindowOf(p: DispatchProblem): (start: number, steps: number, e0: nu
  * closed loop visits, and the time is scaled to all windows.
  */
 function glpkLoopMs(
-  p: DispatchProblem, solveWindow: (start: number, steps: number, e0: number) => number, horizon: number, every: number, dpSoc: readonly number[],
+  p: DispatchProblem,
+  solveWindow: (start: number, steps: number, e0: number) => number,
+  horizon: number,
+  every: number,
+  dpSoc: readonly number[],
 ): number {
   const n = p.priceImport.length;
   let solved = 0;
@@ -154,16 +172,28 @@ export function benchDp(options: DpBenchOptions = {}): DpBenchResult {
     const h = steps(hours);
     const warmRun = loop.run({ horizonSteps: h, replanSteps: 1 }).solution;
     const coldRun = loop.run({ horizonSteps: h, replanSteps: 1, warm: false }).solution;
-    const same = (a: readonly number[], b: readonly number[]): boolean => a.length === b.length && a.every((v, i) => Object.is(v, b[i]));
-    const warmEqualsCold = same(warmRun.socKwh, coldRun.socKwh) && same(warmRun.chargeKw, coldRun.chargeKw) && same(warmRun.storedEnergyValue, coldRun.storedEnergyValue);
+    const same = (a: readonly number[], b: readonly number[]): boolean =>
+      a.length === b.length && a.every((v, i) => Object.is(v, b[i]));
+    const warmEqualsCold =
+      same(warmRun.socKwh, coldRun.socKwh) &&
+      same(warmRun.chargeKw, coldRun.chargeKw) &&
+      same(warmRun.storedEnergyValue, coldRun.storedEnergyValue);
     const dpWarmMs = bestOf(repeats, () => loop.run({ horizonSteps: h, replanSteps: 1 }));
     const dpColdMs = bestOf(Math.min(repeats, 2), () => loop.run({ horizonSteps: h, replanSteps: 1, warm: false }));
-    const dpWarmWithPlansMs = bestOf(Math.min(repeats, 3), () => loop.run({ horizonSteps: h, replanSteps: 1, onPlan: () => undefined }));
+    const dpWarmWithPlansMs = bestOf(Math.min(repeats, 3), () =>
+      loop.run({ horizonSteps: h, replanSteps: 1, onPlan: () => undefined }),
+    );
     const every = hours > 48 ? (options.glpkLoopEvery ?? 8) : 1;
     const glpkMs = measure ? glpkLoopMs(p, solveWindow, h, every, warmRun.socKwh) : null;
     return {
-      horizonHours: hours, dpWarmMs, dpColdMs, dpWarmWithPlansMs, warmEqualsCold, glpkLoopMs: glpkMs,
-      glpkLoopEvery: every, dpShareOfGlpkPct: glpkMs === null ? null : (100 * dpWarmMs) / glpkMs,
+      horizonHours: hours,
+      dpWarmMs,
+      dpColdMs,
+      dpWarmWithPlansMs,
+      warmEqualsCold,
+      glpkLoopMs: glpkMs,
+      glpkLoopEvery: every,
+      dpShareOfGlpkPct: glpkMs === null ? null : (100 * dpWarmMs) / glpkMs,
     };
   });
   // steady-value needs λ̄ by time of day; the reference path's mean stored-energy value per
@@ -178,7 +208,8 @@ export function benchDp(options: DpBenchOptions = {}): DpBenchResult {
   const horizons = [6, 12, 24, 48, 96, 168].map(steps);
   const six = (withPlans: boolean) => () => {
     for (const h of horizons) {
-      for (const rule of rules) loop.run({ horizonSteps: h, replanSteps: 1, terminalForWindow: rule, ...(withPlans ? { onPlan: () => undefined } : {}) });
+      for (const rule of rules)
+        loop.run({ horizonSteps: h, replanSteps: 1, terminalForWindow: rule, ...(withPlans ? { onPlan: () => undefined } : {}) });
     }
   };
   return {

@@ -18,11 +18,17 @@ export function canSolveWithDp(problem: DispatchProblem): DpEligibility {
   }
   const demand = problem.site.demandChargePerKw;
   if (demand !== null && demand !== 0) {
-    return { ok: false, reason: `a demand charge (${demand} per kW) couples all steps through the peak import; the LP path solves it` };
+    return {
+      ok: false,
+      reason: `a demand charge (${demand} per kW) couples all steps through the peak import; the LP path solves it`,
+    };
   }
   const cap = problem.battery.maxCyclesPerDay;
   if (cap !== null) {
-    return { ok: false, reason: `a daily throughput cap (${cap} cycles per day) couples the steps of each day; the LP path solves it` };
+    return {
+      ok: false,
+      reason: `a daily throughput cap (${cap} cycles per day) couples the steps of each day; the LP path solves it`,
+    };
   }
   const n = problem.priceImport.length;
   for (let t = 0; t < n; t++) {
@@ -31,7 +37,10 @@ export function canSolveWithDp(problem: DispatchProblem): DpEligibility {
     if (px > pi) {
       const ms = problem.timesMs[t];
       const when = ms === undefined ? '' : ` (${new Date(ms).toISOString()})`;
-      return { ok: false, reason: `the export price ${px} is above the import price ${pi} at step ${t}${when}, so the stage cost is not convex; the LP path solves it` };
+      return {
+        ok: false,
+        reason: `the export price ${px} is above the import price ${pi} at step ${t}${when}, so the stage cost is not convex; the LP path solves it`,
+      };
     }
   }
   return { ok: true };
@@ -41,7 +50,8 @@ export function canSolveWithDp(problem: DispatchProblem): DpEligibility {
 export function checkDpInput(problem: DispatchProblem): string | null {
   const n = problem.priceImport.length;
   if (n === 0) return 'the problem has no steps; give at least one price';
-  if (!(problem.stepHours > 0) || !Number.isFinite(problem.stepHours)) return `stepHours must be a positive number, got ${problem.stepHours}`;
+  if (!(problem.stepHours > 0) || !Number.isFinite(problem.stepHours))
+    return `stepHours must be a positive number, got ${problem.stepHours}`;
   const series = ['timesMs', 'priceImport', 'priceExport', 'loadKw', 'generationKw'] as const;
   for (const key of series) {
     const values = problem[key];
@@ -51,23 +61,38 @@ export function checkDpInput(problem: DispatchProblem): string | null {
     }
   }
   const b = problem.battery;
-  const positive: [string, number][] = [['powerChargeKw', b.powerChargeKw], ['powerDischargeKw', b.powerDischargeKw], ['energyKwh', b.energyKwh]];
-  for (const [name, v] of positive) if (!(v >= 0) || !Number.isFinite(v)) return `battery.${name} must be a finite number ≥ 0, got ${v}`;
-  for (const [name, v] of [['efficiencyCharge', b.efficiencyCharge], ['efficiencyDischarge', b.efficiencyDischarge]] as const) {
+  const positive: [string, number][] = [
+    ['powerChargeKw', b.powerChargeKw],
+    ['powerDischargeKw', b.powerDischargeKw],
+    ['energyKwh', b.energyKwh],
+  ];
+  for (const [name, v] of positive)
+    if (!(v >= 0) || !Number.isFinite(v)) return `battery.${name} must be a finite number ≥ 0, got ${v}`;
+  for (const [name, v] of [
+    ['efficiencyCharge', b.efficiencyCharge],
+    ['efficiencyDischarge', b.efficiencyDischarge],
+  ] as const) {
     if (!(v > 0 && v <= 1)) return `battery.${name} must be in (0, 1], got ${v}`;
   }
   if (!(b.socMinPct >= 0 && b.socMinPct <= b.socMaxPct && b.socMaxPct <= 100)) {
     return `the SoC window ${b.socMinPct}–${b.socMaxPct} % is empty or outside 0–100 %; set 0 ≤ socMinPct ≤ socMaxPct ≤ 100`;
   }
   const sigma = (b.selfDischargePctPerHour / 100) * problem.stepHours;
-  if (!(sigma >= 0 && sigma < 1)) return `battery.selfDischargePctPerHour ${b.selfDischargePctPerHour} must be ≥ 0 and below 100 % per step`;
-  if (!Number.isFinite(b.degradationCostPerMwh)) return `battery.degradationCostPerMwh must be a finite number, got ${b.degradationCostPerMwh}`;
-  if (!Number.isFinite(problem.initialEnergyKwh)) return `initialEnergyKwh must be a finite number, got ${problem.initialEnergyKwh}`;
-  for (const [name, v] of [['importLimitKw', problem.site.importLimitKw], ['exportLimitKw', problem.site.exportLimitKw]] as const) {
+  if (!(sigma >= 0 && sigma < 1))
+    return `battery.selfDischargePctPerHour ${b.selfDischargePctPerHour} must be ≥ 0 and below 100 % per step`;
+  if (!Number.isFinite(b.degradationCostPerMwh))
+    return `battery.degradationCostPerMwh must be a finite number, got ${b.degradationCostPerMwh}`;
+  if (!Number.isFinite(problem.initialEnergyKwh))
+    return `initialEnergyKwh must be a finite number, got ${problem.initialEnergyKwh}`;
+  for (const [name, v] of [
+    ['importLimitKw', problem.site.importLimitKw],
+    ['exportLimitKw', problem.site.exportLimitKw],
+  ] as const) {
     if (v !== null && !(v >= 0)) return `site.${name} must be null or ≥ 0, got ${v}`;
   }
   const rule = problem.terminal;
   if (rule.kind === 'target' && !Number.isFinite(rule.socPct)) return `terminal target SoC must be a number, got ${rule.socPct}`;
-  if (rule.kind === 'steady-value' && !Number.isFinite(rule.valuePerMwh)) return `terminal steady value must be a number, got ${rule.valuePerMwh}`;
+  if (rule.kind === 'steady-value' && !Number.isFinite(rule.valuePerMwh))
+    return `terminal steady value must be a number, got ${rule.valuePerMwh}`;
   return null;
 }

@@ -84,7 +84,8 @@ export function createDpClosedLoop(problem: DispatchProblem): DpClosedLoop {
     stages,
     run(options) {
       if (bad !== null) return failed(emptyDpSolution('error', bad));
-      if (!eligible.ok) return failed(emptyDpSolution('error', `the dynamic program cannot solve this model: ${eligible.reason}`));
+      if (!eligible.ok)
+        return failed(emptyDpSolution('error', `the dynamic program cannot solve this model: ${eligible.reason}`));
       return runWindows(makeContext(problem, stages), options);
     },
   };
@@ -106,7 +107,8 @@ function runWindows(ctx: DpContext, o: DpClosedLoopOptions): DpClosedLoopResult 
   const n = p.priceImport.length;
   const h = o.horizonSteps;
   const r = o.replanSteps;
-  if (!(Number.isInteger(h) && h >= 1)) return failed(emptyDpSolution('error', `horizonSteps must be a whole number ≥ 1, got ${h}`));
+  if (!(Number.isInteger(h) && h >= 1))
+    return failed(emptyDpSolution('error', `horizonSteps must be a whole number ≥ 1, got ${h}`));
   if (!(Number.isInteger(r) && r >= 1 && r <= h)) {
     return failed(emptyDpSolution('error', `replanSteps must be a whole number from 1 to the horizon (${h} steps), got ${r}`));
   }
@@ -123,7 +125,11 @@ function runWindows(ctx: DpContext, o: DpClosedLoopOptions): DpClosedLoopResult 
     const failure = solver.solveWindow(s, end, e, rule, o.onPlan ? end : applyTo, warm);
     windows++;
     if (failure !== null) {
-      return failed(emptyDpSolution('infeasible', `the window starting at step ${s} has no feasible plan: ${failure}`), windows, solver.stats);
+      return failed(
+        emptyDpSolution('infeasible', `the window starting at step ${s} has no feasible plan: ${failure}`),
+        windows,
+        solver.stats,
+      );
     }
     if (soc && o.onPlan) o.onPlan(new RingPlanView(solver, s, end, rule, e, soc));
     realized.copyFrom(solver, s, applyTo, 0);

@@ -55,8 +55,8 @@ export function decisionHorizon(
   let depth = steps;
   for (let cut = n - 1; cut >= steps; cut--) {
     let cur = 0;
-    let agrees = writeTerminal(ctx, scratch, cur, terminalAt(cut), problem.initialEnergyKwh)
-      && shapesEqual(scratch, cur, ref, vf.slot(cut));
+    let agrees =
+      writeTerminal(ctx, scratch, cur, terminalAt(cut), problem.initialEnergyKwh) && shapesEqual(scratch, cur, ref, vf.slot(cut));
     for (let t = cut - 1; !agrees && t >= steps; t--) {
       if (!backwardStep(scratch, 1 - cur, cur, ctx.stages, t, ctx.retention, ctx.emin, ctx.emax, ctx.tol)) break;
       cur = 1 - cur;
@@ -69,7 +69,11 @@ export function decisionHorizon(
   }
   const dt = problem.stepHours;
   return {
-    ok: true, decisionSteps: steps, depthSteps: depth, depthHours: depth * dt, beyondHours: (depth - steps) * dt,
+    ok: true,
+    decisionSteps: steps,
+    depthSteps: depth,
+    depthHours: depth * dt,
+    beyondHours: (depth - steps) * dt,
     limitedByData: depth === n && n > steps,
   };
 }

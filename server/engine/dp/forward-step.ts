@@ -28,7 +28,13 @@ export function newForwardStepResult(): ForwardStepResult {
  * throughput) wins. Returns false when no y is feasible.
  */
 export function forwardStep(
-  store: ValueStore, w: number, st: StageTable, t: number, z: number, tol: number, out: ForwardStepResult,
+  store: ValueStore,
+  w: number,
+  st: StageTable,
+  t: number,
+  z: number,
+  tol: number,
+  out: ForwardStepResult,
 ): boolean {
   const base = st.off[t] ?? 0;
   const points = (st.off[t + 1] ?? 0) - base;
@@ -79,7 +85,10 @@ export function forwardStep(
         break;
       }
       y = next;
-      if (endW <= next) { pw = endW; j++; }
+      if (endW <= next) {
+        pw = endW;
+        j++;
+      }
       if (endS <= next) k++;
     }
   }

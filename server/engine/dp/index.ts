@@ -9,7 +9,12 @@ export { canSolveWithDp, checkDpInput, type DpEligibility } from './can-solve';
 export { solveDispatchDp, type DpSolution, type DpSolveOptions } from './solve';
 export { DpValueFunctions, type ValueFunctionShape } from './value-functions';
 export {
-  createDpClosedLoop, runClosedLoopDp, type DpClosedLoop, type DpClosedLoopOptions, type DpClosedLoopResult, type DpWindowPlan,
+  createDpClosedLoop,
+  runClosedLoopDp,
+  type DpClosedLoop,
+  type DpClosedLoopOptions,
+  type DpClosedLoopResult,
+  type DpWindowPlan,
 } from './closed-loop';
 export type { DpWorkStats } from './window-solver';
 export { valueCurves, type ValueCurve, type ValueCurveSource } from './value-curves';

@@ -15,7 +15,10 @@ export interface DpPlanInsights {
   readonly beyondDeliveryHours: number;
   readonly limitedByData: boolean;
   /** Stored-energy value (currency/MWh) against SoC (%) at the chosen steps; time is ISO 8601 UTC. */
-  readonly valueCurves: readonly { readonly time: string; readonly points: readonly { readonly socPct: number; readonly value: number }[] }[];
+  readonly valueCurves: readonly {
+    readonly time: string;
+    readonly points: readonly { readonly socPct: number; readonly value: number }[];
+  }[];
 }
 
 /**

@@ -69,9 +69,18 @@ export class PlanSeries {
       if ((this.c[i] ?? 0) > tolP && (this.d[i] ?? 0) > tolP) simultaneousSteps.push(t);
     }
     return {
-      status: 'optimal', method: 'dp', objective: cost, cost,
-      chargeKw: toArray(this.c), dischargeKw: toArray(this.d), gridImportKw: toArray(this.m),
-      gridExportKw: toArray(this.x), socKwh, storedEnergyValue: toArray(this.value), peakImportKw: peak, simultaneousSteps,
+      status: 'optimal',
+      method: 'dp',
+      objective: cost,
+      cost,
+      chargeKw: toArray(this.c),
+      dischargeKw: toArray(this.d),
+      gridImportKw: toArray(this.m),
+      gridExportKw: toArray(this.x),
+      socKwh,
+      storedEnergyValue: toArray(this.value),
+      peakImportKw: peak,
+      simultaneousSteps,
       ...(intervals ? { storedEnergyValueRange: { low: toArray(this.rangeLo), high: toArray(this.rangeHi) } } : {}),
     };
   }

@@ -29,8 +29,18 @@ export interface DpSolution extends DispatchSolution {
 
 export function emptyDpSolution(status: SolveStatus, message: string): DpSolution {
   return {
-    status, method: 'dp', message, objective: NaN, cost: NaN, chargeKw: [], dischargeKw: [], gridImportKw: [],
-    gridExportKw: [], socKwh: [], storedEnergyValue: [], peakImportKw: NaN,
+    status,
+    method: 'dp',
+    message,
+    objective: NaN,
+    cost: NaN,
+    chargeKw: [],
+    dischargeKw: [],
+    gridImportKw: [],
+    gridExportKw: [],
+    socKwh: [],
+    storedEnergyValue: [],
+    peakImportKw: NaN,
   };
 }
 

@@ -32,7 +32,15 @@ const MAX_POINTS = 16;
 export function buildStageTable(problem: DispatchProblem): StageTable {
   const n = problem.priceImport.length;
   const b = problem.battery;
-  const x = new StageBuilder(n, b.powerChargeKw, b.powerDischargeKw, b.efficiencyCharge, b.efficiencyDischarge, problem.stepHours, b.degradationCostPerMwh / 1000);
+  const x = new StageBuilder(
+    n,
+    b.powerChargeKw,
+    b.powerDischargeKw,
+    b.efficiencyCharge,
+    b.efficiencyDischarge,
+    problem.stepHours,
+    b.degradationCostPerMwh / 1000,
+  );
   const importLimit = problem.site.importLimitKw ?? Infinity;
   const exportLimit = problem.site.exportLimitKw ?? Infinity;
   const { off, netLoadKw } = x;
@@ -50,8 +58,14 @@ export function buildStageTable(problem: DispatchProblem): StageTable {
   off[n] = x.at;
   const used = x.at;
   return {
-    steps: n, off, u: x.u.subarray(0, used), h: x.h.subarray(0, used), c: x.c.subarray(0, used), d: x.d.subarray(0, used),
-    slope: x.slope.subarray(0, used), netLoadKw,
+    steps: n,
+    off,
+    u: x.u.subarray(0, used),
+    h: x.h.subarray(0, used),
+    c: x.c.subarray(0, used),
+    d: x.d.subarray(0, used),
+    slope: x.slope.subarray(0, used),
+    netLoadKw,
   };
 }
 
@@ -277,7 +291,10 @@ class StageBuilder {
       const kink = (-this.net - base) / this.kappa;
       if (kink > lo && kink < hi) {
         const mk = this.money(this.cOf(w, kink), kink);
-        if (mk < bm) { bm = mk; bd = kink; }
+        if (mk < bm) {
+          bm = mk;
+          bd = kink;
+        }
       }
     }
     if (hi > lo && this.money(this.cOf(w, hi), hi) < bm) bd = hi;

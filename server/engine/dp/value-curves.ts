@@ -21,7 +21,9 @@ export type ValueCurveSource = DpValueFunctions | (DispatchSolution & { readonly
  * has no DP solution.
  */
 export function valueCurves(
-  problem: DispatchProblem, source: ValueCurveSource | null, times: readonly number[],
+  problem: DispatchProblem,
+  source: ValueCurveSource | null,
+  times: readonly number[],
 ): { ok: true; curves: ValueCurve[] } | { ok: false; error: string } {
   let vf = source instanceof DpValueFunctions ? source : source?.valueFunctions;
   if (!vf) {
@@ -35,7 +37,8 @@ export function valueCurves(
   const curves: ValueCurve[] = [];
   for (const time of times) {
     const t = time === endMs ? n : problem.timesMs.indexOf(time);
-    if (t < 0) return { ok: false, error: `no step starts at ${new Date(time).toISOString()}; give the start of a step of the problem` };
+    if (t < 0)
+      return { ok: false, error: `no step starts at ${new Date(time).toISOString()}; give the start of a step of the problem` };
     const { breakpoints, slopes } = vf.at(t);
     const points: { socPct: number; value: number }[] = [];
     for (let i = 0; i < slopes.length; i++) {

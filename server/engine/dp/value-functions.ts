@@ -34,7 +34,8 @@ export class DpValueFunctions {
 
   /** V_t for from ≤ t ≤ to. */
   at(t: number): ValueFunctionShape {
-    if (!(t >= this.from && t <= this.to)) throw new RangeError(`no value function for step ${t}: the solved steps are ${this.from}..${this.to}`);
+    if (!(t >= this.from && t <= this.to))
+      throw new RangeError(`no value function for step ${t}: the solved steps are ${this.from}..${this.to}`);
     return this.solver.store.read(this.solver.slotOf(t));
   }
 

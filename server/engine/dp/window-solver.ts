@@ -47,7 +47,10 @@ export class WindowSolver {
   readonly recomputed: Int32Array;
   recomputedCount = 0;
 
-  constructor(private readonly ctx: DpContext, maxWindowSteps: number) {
+  constructor(
+    private readonly ctx: DpContext,
+    maxWindowSteps: number,
+  ) {
     this.size = maxWindowSteps + 1;
     this.store = new ValueStore(this.size + 1);
     this.map = new Int32Array(this.size);
@@ -86,8 +89,10 @@ export class WindowSolver {
   }
 
   private explain(start: number, end: number, e0: number, rule: TerminalRule): string {
-    return diagnoseInfeasible(this.ctx, start, end, e0, rule)
-      ?? `numerical trouble between steps ${start} and ${end}: the exact dynamic program lost feasibility; use the LP path`;
+    return (
+      diagnoseInfeasible(this.ctx, start, end, e0, rule) ??
+      `numerical trouble between steps ${start} and ${end}: the exact dynamic program lost feasibility; use the LP path`
+    );
   }
 
   private backward(start: number, end: number, e0: number, rule: TerminalRule, warm: boolean): string | null {
@@ -98,9 +103,10 @@ export class WindowSolver {
     for (let t = end; t >= start; t--) {
       const r = t % size;
       const out = this.spare;
-      const ok = t === end
-        ? writeTerminal(ctx, store, out, rule, e0)
-        : backwardStep(store, out, map[(t + 1) % size] ?? 0, ctx.stages, t, ctx.retention, ctx.emin, ctx.emax, ctx.tol);
+      const ok =
+        t === end
+          ? writeTerminal(ctx, store, out, rule, e0)
+          : backwardStep(store, out, map[(t + 1) % size] ?? 0, ctx.stages, t, ctx.retention, ctx.emin, ctx.emax, ctx.tol);
       if (!ok) return this.explain(start, end, e0, rule);
       this.stats.backwardSteps++;
       if (canStop && t <= this.chainTo && tOf[r] === t && store.sameShape(out, map[r] ?? 0)) {
@@ -143,8 +149,14 @@ export class WindowSolver {
         muLo = e <= loMark ? -Infinity : a === 1 ? muLo : muLo / a;
         muHi = e >= hiMark ? Infinity : a === 1 ? muHi : muHi / a;
       }
-      if (warm && tTag[r] === t && vidUsed[r] === v && sameBits(eIn[r] ?? NaN, e)
-        && sameBits(muInLo[r] ?? NaN, muLo) && sameBits(muInHi[r] ?? NaN, muHi)) {
+      if (
+        warm &&
+        tTag[r] === t &&
+        vidUsed[r] === v &&
+        sameBits(eIn[r] ?? NaN, e) &&
+        sameBits(muInLo[r] ?? NaN, muLo) &&
+        sameBits(muInHi[r] ?? NaN, muHi)
+      ) {
         reused++;
         // The last pass chained its entries, and every V_{t'+1} with t'+1 ≤ keptBelow is
         // the one it used: all of them match too, so jump to the last such step.

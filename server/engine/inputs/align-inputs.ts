@@ -30,8 +30,10 @@ export interface DispatchInputs {
 }
 
 /** The profiles on one grid: the series of a DispatchProblem for the whole period, plus its local clock. */
-export interface AlignedInputs
-  extends Pick<DispatchProblem, 'battery' | 'site' | 'stepHours' | 'timesMs' | 'priceImport' | 'priceExport' | 'loadKw' | 'generationKw'> {
+export interface AlignedInputs extends Pick<
+  DispatchProblem,
+  'battery' | 'site' | 'stepHours' | 'timesMs' | 'priceImport' | 'priceExport' | 'loadKw' | 'generationKw'
+> {
   readonly stepMinutes: number;
   readonly clock: LocalClock;
   /** Plain-words notes about the alignment (e.g. the period was shortened). */
@@ -71,7 +73,10 @@ export function alignInputs(inputs: DispatchInputs): Aligned {
     if (p.stepMinutes % stepMinutes !== 0 || (p.startMs - inputs.prices.startMs) % stepMs !== 0) {
       return {
         ok: false,
-        issue: { field: name, message: `the ${name} profile (${p.stepMinutes}-minute steps) does not line up with the ${stepMinutes}-minute grid of the other profiles` },
+        issue: {
+          field: name,
+          message: `the ${name} profile (${p.stepMinutes}-minute steps) does not line up with the ${stepMinutes}-minute grid of the other profiles`,
+        },
       };
     }
   }
@@ -82,7 +87,9 @@ export function alignInputs(inputs: DispatchInputs): Aligned {
   }
   const notes: string[] = [];
   if (start !== inputs.prices.startMs || end !== endOf(inputs.prices)) {
-    notes.push(`the period was shortened to ${new Date(start).toISOString()} – ${new Date(end).toISOString()}, where every profile has data`);
+    notes.push(
+      `the period was shortened to ${new Date(start).toISOString()} – ${new Date(end).toISOString()}, where every profile has data`,
+    );
   }
   const timesMs: number[] = [];
   for (let ms = start; ms < end; ms += stepMs) timesMs.push(ms);

@@ -64,7 +64,10 @@ export function stepIndexOf(inputs: AlignedInputs, ms: number, what: string): St
     };
   }
   if ((ms - first) % stepMs !== 0) {
-    return { ok: false, message: `${what} ${new Date(ms).toISOString()} does not fall on an interval boundary of the ${inputs.stepMinutes}-minute profile` };
+    return {
+      ok: false,
+      message: `${what} ${new Date(ms).toISOString()} does not fall on an interval boundary of the ${inputs.stepMinutes}-minute profile`,
+    };
   }
   return { ok: true, index: (ms - first) / stepMs };
 }

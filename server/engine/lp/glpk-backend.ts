@@ -13,9 +13,7 @@ function boundType(lower: number, upper: number): { type: number; lb: number; ub
   const hasLower = Number.isFinite(lower);
   const hasUpper = Number.isFinite(upper);
   if (hasLower && hasUpper) {
-    return lower === upper
-      ? { type: glpk.GLP_FX, lb: lower, ub: upper }
-      : { type: glpk.GLP_DB, lb: lower, ub: upper };
+    return lower === upper ? { type: glpk.GLP_FX, lb: lower, ub: upper } : { type: glpk.GLP_DB, lb: lower, ub: upper };
   }
   if (hasLower) return { type: glpk.GLP_LO, lb: lower, ub: 0 };
   if (hasUpper) return { type: glpk.GLP_UP, lb: 0, ub: upper };

@@ -66,7 +66,13 @@ function sameArray(a: ArrayLike<number>, b: ArrayLike<number>): boolean {
 /** Same columns, rows and matrix: only costs and bounds may differ. */
 function sameStructure(a: LpModel, b: LpModel): boolean {
   if (a.values === b.values && a.colIndex === b.colIndex && a.rowStarts === b.rowStarts) return true;
-  return a.numCols === b.numCols && a.numRows === b.numRows && sameArray(a.rowStarts, b.rowStarts) && sameArray(a.colIndex, b.colIndex) && sameArray(a.values, b.values);
+  return (
+    a.numCols === b.numCols &&
+    a.numRows === b.numRows &&
+    sameArray(a.rowStarts, b.rowStarts) &&
+    sameArray(a.colIndex, b.colIndex) &&
+    sameArray(a.values, b.values)
+  );
 }
 
 function changed(before: Float64Array, after: Float64Array, also?: [Float64Array, Float64Array]): number[] {
@@ -85,7 +91,10 @@ function updateInPlace(raw: RawModel, prev: LpModel, next: LpModel): boolean {
   const all = (n: number) => ({ kind: 'range' as const, from: 0, to: n - 1 });
   const cost = changed(prev.colCost, next.colCost);
   if (cost.length > 0) {
-    const ok = cost.length <= 4 ? cost.every((j) => raw.changeColCost(j, next.colCost[j]!).status !== -1) : raw.changeColsCost(all(next.numCols), next.colCost).status !== -1;
+    const ok =
+      cost.length <= 4
+        ? cost.every((j) => raw.changeColCost(j, next.colCost[j]!).status !== -1)
+        : raw.changeColsCost(all(next.numCols), next.colCost).status !== -1;
     if (!ok) return false;
   }
   const cols = changed(prev.colLower, next.colLower, [prev.colUpper, next.colUpper]);

@@ -55,12 +55,7 @@ export interface LpResult {
   readonly seconds: number;
 }
 
-export function lpFailure(
-  status: Exclude<LpStatus, 'optimal'>,
-  backend: LpBackend,
-  message: string,
-  seconds = 0,
-): LpResult {
+export function lpFailure(status: Exclude<LpStatus, 'optimal'>, backend: LpBackend, message: string, seconds = 0): LpResult {
   return {
     status,
     message,

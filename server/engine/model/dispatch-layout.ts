@@ -84,7 +84,16 @@ export function dispatchLayout(problem: DispatchProblem): DispatchLayout {
   };
 }
 
-const SHAPE_FIELDS = ['steps', 'colsPerStep', 'rowsPerStep', 'initialEnergyCol', 'peakCol', 'cyclicRow', 'numCols', 'numRows'] as const;
+const SHAPE_FIELDS = [
+  'steps',
+  'colsPerStep',
+  'rowsPerStep',
+  'initialEnergyCol',
+  'peakCol',
+  'cyclicRow',
+  'numCols',
+  'numRows',
+] as const;
 
 /**
  * Whether two problems with these layouts have the same constraint matrix: the
@@ -96,7 +105,12 @@ export function sameMatrix(a: DispatchProblem, la: DispatchLayout, b: DispatchPr
   for (const field of SHAPE_FIELDS) if (la[field] !== lb[field]) return false;
   const [ba, bb] = [a.battery, b.battery];
   if (a.stepHours !== b.stepHours) return false;
-  if (ba !== bb && (ba.efficiencyCharge !== bb.efficiencyCharge || ba.efficiencyDischarge !== bb.efficiencyDischarge || ba.selfDischargePctPerHour !== bb.selfDischargePctPerHour)) {
+  if (
+    ba !== bb &&
+    (ba.efficiencyCharge !== bb.efficiencyCharge ||
+      ba.efficiencyDischarge !== bb.efficiencyDischarge ||
+      ba.selfDischargePctPerHour !== bb.selfDischargePctPerHour)
+  ) {
     return false;
   }
   if (la.capDays.length === 0) return true;

@@ -48,7 +48,12 @@ export function validateBattery(b: BatteryParams): InputIssue | null {
     () => checkNumber('battery.efficiencyCharge', b.efficiencyCharge, (v) => v > 0 && v <= 1, 'in (0, 1], e.g. 0.92'),
     () => checkNumber('battery.efficiencyDischarge', b.efficiencyDischarge, (v) => v > 0 && v <= 1, 'in (0, 1], e.g. 0.92'),
     () =>
-      checkNumber('battery.selfDischargePctPerHour', b.selfDischargePctPerHour, (v) => v >= 0 && v < 100, 'zero or more and below 100 % per hour'),
+      checkNumber(
+        'battery.selfDischargePctPerHour',
+        b.selfDischargePctPerHour,
+        (v) => v >= 0 && v < 100,
+        'zero or more and below 100 % per hour',
+      ),
     () => checkNumber('battery.degradationCostPerMwh', b.degradationCostPerMwh, (v) => v >= 0, 'zero or more per MWh'),
     () => checkOptional('battery.maxCyclesPerDay', b.maxCyclesPerDay, (v) => v > 0, 'more than 0, or null for no cap'),
   ];
@@ -75,7 +80,10 @@ export function isValidTimeZone(zone: string): boolean {
 
 export function validateSite(s: SiteParams): InputIssue | null {
   if (typeof s.timezone !== 'string' || !isValidTimeZone(s.timezone)) {
-    return { field: 'site.timezone', message: `site.timezone "${String(s.timezone)}" is not an IANA time zone such as Europe/Berlin` };
+    return {
+      field: 'site.timezone',
+      message: `site.timezone "${String(s.timezone)}" is not an IANA time zone such as Europe/Berlin`,
+    };
   }
   return (
     checkOptional('site.importLimitKw', s.importLimitKw, (v) => v >= 0, 'zero or more kW, or null for no limit') ??

@@ -41,11 +41,18 @@ function validateSeries(p: DispatchProblem): InputIssue | null {
     const series = p[key];
     for (let t = 0; t < n; t++) {
       if (!Number.isFinite(series[t])) {
-        return { field: key, step: t, message: `the ${label} profile has no valid number at ${stepLabel(p, t)}: fill the gap or fix the value` };
+        return {
+          field: key,
+          step: t,
+          message: `the ${label} profile has no valid number at ${stepLabel(p, t)}: fill the gap or fix the value`,
+        };
       }
     }
   }
-  for (const [key, label] of [['loadKw', 'load'], ['generationKw', 'generation']] as const) {
+  for (const [key, label] of [
+    ['loadKw', 'load'],
+    ['generationKw', 'generation'],
+  ] as const) {
     const t = p[key].findIndex((v) => v < 0);
     if (t >= 0) return { field: key, step: t, message: `the ${label} is negative (${p[key][t]} kW) at ${stepLabel(p, t)}` };
   }
@@ -94,7 +101,10 @@ function validateEnergy(p: DispatchProblem): InputIssue | null {
   }
   const rule = p.terminal;
   if (rule.kind === 'target' && !((p.battery.energyKwh * rule.socPct) / 100 <= max + tol)) {
-    return { field: 'terminal', message: `the terminal target ${rule.socPct} % is above the SoC maximum ${p.battery.socMaxPct} %` };
+    return {
+      field: 'terminal',
+      message: `the terminal target ${rule.socPct} % is above the SoC maximum ${p.battery.socMaxPct} %`,
+    };
   }
   if (rule.kind === 'steady-value' && !Number.isFinite(rule.valuePerMwh)) {
     return { field: 'terminal', message: 'the steady-value terminal rule needs a finite stored-energy value' };
@@ -106,5 +116,7 @@ function validateEnergy(p: DispatchProblem): InputIssue | null {
 }
 
 export function validateProblem(p: DispatchProblem): InputIssue | null {
-  return validateBattery(p.battery) ?? validateSite(p.site) ?? validateSeries(p) ?? validateEnergy(p) ?? validateStepFeasibility(p);
+  return (
+    validateBattery(p.battery) ?? validateSite(p.site) ?? validateSeries(p) ?? validateEnergy(p) ?? validateStepFeasibility(p)
+  );
 }

@@ -23,12 +23,17 @@ export function planFlags(tp: PlanTurnpike, plan: DispatchSolution, ctx: FlagCon
   const flags: string[] = [];
   const lookedHours = (ctx.windowSteps * ctx.stepMinutes) / 60;
   if (lookedHours < ctx.requestedHorizonHours - 1e-9) {
-    flags.push(`The price data end at ${ctx.timeOfStep(ctx.windowSteps)}, so the plan looks only ${hours(ctx.windowSteps, ctx.stepMinutes)} ahead instead of ${ctx.requestedHorizonHours} h.`);
+    flags.push(
+      `The price data end at ${ctx.timeOfStep(ctx.windowSteps)}, so the plan looks only ${hours(ctx.windowSteps, ctx.stepMinutes)} ahead instead of ${ctx.requestedHorizonHours} h.`,
+    );
   }
   const leavingStart = ctx.windowSteps - tp.leavingArcSteps;
   if (tp.leavingArcSteps > 0 && leavingStart < ctx.deliverySteps) {
-    const fix = ctx.terminalKind === 'steady-value' ? 'lengthen the horizon' : 'lengthen the horizon or use the steady-value terminal rule';
-    flags.push(`The leaving arc reaches into the delivery window: from ${ctx.timeOfStep(leavingStart)} the plan moves away from the steady cycle because it sees nothing beyond its horizon; ${fix}.`);
+    const fix =
+      ctx.terminalKind === 'steady-value' ? 'lengthen the horizon' : 'lengthen the horizon or use the steady-value terminal rule';
+    flags.push(
+      `The leaving arc reaches into the delivery window: from ${ctx.timeOfStep(leavingStart)} the plan moves away from the steady cycle because it sees nothing beyond its horizon; ${fix}.`,
+    );
   }
   if (tp.commitWindowSteps === null) {
     flags.push(`The commit window could not be checked: ${ctx.longerMissing ?? 'no longer plan was available'}.`);
@@ -38,11 +43,15 @@ export function planFlags(tp: PlanTurnpike, plan: DispatchSolution, ctx: FlagCon
     );
   }
   if (tp.nearSteadyShare < 0.5) {
-    flags.push(`The plan is near the steady cycle in only ${Math.round(tp.nearSteadyShare * 100)} % of its steps: prices in this window differ from the representative day, so treat the steady cycle as a rough guide here.`);
+    flags.push(
+      `The plan is near the steady cycle in only ${Math.round(tp.nearSteadyShare * 100)} % of its steps: prices in this window differ from the representative day, so treat the steady cycle as a rough guide here.`,
+    );
   }
   const simultaneous = plan.simultaneousSteps ?? [];
   if (simultaneous.length > 0) {
-    flags.push(`The schedule charges and discharges at once in ${simultaneous.length} interval(s), first at ${ctx.timeOfStep(simultaneous[0]!)}: this only pays at negative prices; check that the site controller allows it.`);
+    flags.push(
+      `The schedule charges and discharges at once in ${simultaneous.length} interval(s), first at ${ctx.timeOfStep(simultaneous[0]!)}: this only pays at negative prices; check that the site controller allows it.`,
+    );
   }
   return flags;
 }
@@ -50,14 +59,20 @@ export function planFlags(tp: PlanTurnpike, plan: DispatchSolution, ctx: FlagCon
 export function settingWarnings(b: BatteryParams): string[] {
   const warnings: string[] = [];
   if (b.socMinPct <= 0 && b.socMaxPct >= 100) {
-    warnings.push('The SoC window 0–100 % is outside common practice (10–90 % is common); check the battery maker\'s operating limits.');
+    warnings.push(
+      "The SoC window 0–100 % is outside common practice (10–90 % is common); check the battery maker's operating limits.",
+    );
   }
   if (b.efficiencyCharge > 0.98 || b.efficiencyDischarge > 0.98) {
-    warnings.push('An efficiency above 0.98 is unusually high for a battery (85 % round trip is representative for lithium-ion); check the parameters.');
+    warnings.push(
+      'An efficiency above 0.98 is unusually high for a battery (85 % round trip is representative for lithium-ion); check the parameters.',
+    );
   }
   const rate = Math.max(b.powerChargeKw, b.powerDischargeKw) / b.energyKwh;
   if (rate > 4) {
-    warnings.push(`A C-rate of ${rate.toFixed(1)} (power / energy) is above what stationary batteries are usually rated for; check the battery's rating.`);
+    warnings.push(
+      `A C-rate of ${rate.toFixed(1)} (power / energy) is above what stationary batteries are usually rated for; check the battery's rating.`,
+    );
   }
   return warnings;
 }

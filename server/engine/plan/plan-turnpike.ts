@@ -67,7 +67,9 @@ export function planTurnpike(
   const spread = Math.max(1e-9, Math.max(...prices) - Math.min(...prices));
   const soc: ArcFigures = arcFigures(planSoc, steadySoc, usable, bandFraction);
   const value: ArcFigures = arcFigures(plan.storedEnergyValue, steadyValue, spread, bandFraction);
-  const longerValue = longer ? longer.storedEnergyValue.map((v, t) => (strictlyInside(planSoc[t] ?? NaN, min, max) ? v : plan.storedEnergyValue[t]!)) : null;
+  const longerValue = longer
+    ? longer.storedEnergyValue.map((v, t) => (strictlyInside(planSoc[t] ?? NaN, min, max) ? v : plan.storedEnergyValue[t]!))
+    : null;
   return {
     band: bandFraction,
     bandKwh: bandFraction * usable,

@@ -66,7 +66,10 @@ export function solvePlan(inputs: AlignedInputs, request: PlanRequest): PlanResu
     return fail('horizon', `the horizon ${request.horizonHours} h is not a whole number of ${inputs.stepMinutes}-minute steps`);
   }
   if (horizonSteps < end.index - start.index) {
-    return fail('horizon', `the horizon ${request.horizonHours} h is shorter than the delivery window (${((end.index - start.index) * inputs.stepMinutes) / 60} h); use a horizon at least as long as the window`);
+    return fail(
+      'horizon',
+      `the horizon ${request.horizonHours} h is shorter than the delivery window (${((end.index - start.index) * inputs.stepMinutes) / 60} h); use a horizon at least as long as the window`,
+    );
   }
   let steady = request.steady;
   if (!steady) {
@@ -74,13 +77,20 @@ export function solvePlan(inputs: AlignedInputs, request: PlanRequest): PlanResu
     if (!result.ok) return result;
     steady = result.cycle;
   }
-  if (steady.status !== 'optimal') return fail('prices', `the steady cycle could not be solved: ${steady.message ?? steady.status}`);
+  if (steady.status !== 'optimal')
+    return fail('prices', `the steady cycle could not be solved: ${steady.message ?? steady.status}`);
   const n = inputs.timesMs.length;
   const from = start.index;
   const windowEnd = Math.min(n, from + horizonSteps);
   const e0 = socPctToKwh(inputs, request.initialSocPct ?? inputs.battery.socInitialPct);
-  if (request.initialSocPct !== undefined && !(request.initialSocPct >= inputs.battery.socMinPct && request.initialSocPct <= inputs.battery.socMaxPct)) {
-    return fail('initialSocPct', `the initial SoC ${request.initialSocPct} % is outside the SoC window ${inputs.battery.socMinPct}–${inputs.battery.socMaxPct} %`);
+  if (
+    request.initialSocPct !== undefined &&
+    !(request.initialSocPct >= inputs.battery.socMinPct && request.initialSocPct <= inputs.battery.socMaxPct)
+  ) {
+    return fail(
+      'initialSocPct',
+      `the initial SoC ${request.initialSocPct} % is outside the SoC window ${inputs.battery.socMinPct}–${inputs.battery.socMaxPct} %`,
+    );
   }
   const options = { method: request.method ?? 'auto' } as const;
   const solveTo = (to: number) => {
@@ -88,12 +98,17 @@ export function solvePlan(inputs: AlignedInputs, request: PlanRequest): PlanResu
     return { rule, solution: solveDispatch(problemFor(inputs, from, to, e0, rule), options) };
   };
   const main = solveTo(windowEnd);
-  if (main.solution.status !== 'optimal') return fail('plan', main.solution.message ?? `the plan could not be solved (${main.solution.status})`);
-  const curveSteps = Array.from({ length: end.index - from }, (_, i) => i).filter((i) => i === 0 || inputs.clock.minuteOfDay[from + i]! % 60 === 0);
+  if (main.solution.status !== 'optimal')
+    return fail('plan', main.solution.message ?? `the plan could not be solved (${main.solution.status})`);
+  const curveSteps = Array.from({ length: end.index - from }, (_, i) => i).filter(
+    (i) => i === 0 || inputs.clock.minuteOfDay[from + i]! % 60 === 0,
+  );
   // A shorter lookahead ends elsewhere, so under steady-value it prices its end energy at another time of day.
   const ruleAtLookahead = (cut: number) => terminalRuleFor(request.terminal, inputs, from + cut, steady);
   const dpInsights =
-    main.solution.method === 'dp' ? planInsights(problemFor(inputs, from, windowEnd, e0, main.rule), end.index - from, curveSteps, ruleAtLookahead) : null;
+    main.solution.method === 'dp'
+      ? planInsights(problemFor(inputs, from, windowEnd, e0, main.rule), end.index - from, curveSteps, ruleAtLookahead)
+      : null;
   const longerHours = Math.max(4 * request.horizonHours, request.horizonHours + 168);
   const longerEnd = Math.min(n, from + Math.floor((longerHours * 60) / inputs.stepMinutes));
   const longer = longerEnd > windowEnd ? solveTo(longerEnd).solution : null;

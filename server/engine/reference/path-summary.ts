@@ -32,7 +32,13 @@ export interface PathSummary {
 }
 
 /** Summary of solution steps [from, to) (relative to the solution), whose step 0 is grid step `offset`. */
-export function summarizePath(inputs: AlignedInputs, solution: DispatchSolution, offset: number, from = 0, to = solution.chargeKw.length): PathSummary {
+export function summarizePath(
+  inputs: AlignedInputs,
+  solution: DispatchSolution,
+  offset: number,
+  from = 0,
+  to = solution.chargeKw.length,
+): PathSummary {
   const dt = inputs.stepHours;
   let charged = 0;
   let discharged = 0;
@@ -63,5 +69,12 @@ export function summarizePath(inputs: AlignedInputs, solution: DispatchSolution,
     from,
     to,
   );
-  return { cost, chargedKwh: charged, dischargedKwh: discharged, equivalentCycles: discharged / usableEnergyKwh(inputs.battery), steps: to - from, series };
+  return {
+    cost,
+    chargedKwh: charged,
+    dischargedKwh: discharged,
+    equivalentCycles: discharged / usableEnergyKwh(inputs.battery),
+    steps: to - from,
+    series,
+  };
 }

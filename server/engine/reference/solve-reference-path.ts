@@ -45,7 +45,13 @@ export function steadyFor(
   const result = solveSteadyCycle(inputs, { days });
   if (!result.ok) return result;
   if (result.cycle.status !== 'optimal') {
-    return { ok: false, issue: { field: 'terminal', message: `the steady-value rule needs the steady cycle, which could not be solved: ${result.cycle.message ?? result.cycle.status}` } };
+    return {
+      ok: false,
+      issue: {
+        field: 'terminal',
+        message: `the steady-value rule needs the steady cycle, which could not be solved: ${result.cycle.message ?? result.cycle.status}`,
+      },
+    };
   }
   return { ok: true, steady: result.cycle };
 }

@@ -61,10 +61,18 @@ function dstNote(list: readonly DstDay[]): string | null {
   return `${list.length} daylight-saving day${list.length > 1 ? 's' : ''} mapped by local clock: ${parts.join('; ')}`;
 }
 
-export function representativeDay(inputs: AlignedInputs, from = 0, to = inputs.timesMs.length, days: DaySelection = 'all'): RepresentativeResult {
+export function representativeDay(
+  inputs: AlignedInputs,
+  from = 0,
+  to = inputs.timesMs.length,
+  days: DaySelection = 'all',
+): RepresentativeResult {
   const slotMinutes = inputs.stepMinutes;
   if (1440 % slotMinutes !== 0) {
-    return { ok: false, issue: { field: 'prices', message: `a ${slotMinutes}-minute step does not divide a day into clock slots` } };
+    return {
+      ok: false,
+      issue: { field: 'prices', message: `a ${slotMinutes}-minute step does not divide a day into clock slots` },
+    };
   }
   const slots = 1440 / slotMinutes;
   const sums = [new Float64Array(slots), new Float64Array(slots), new Float64Array(slots), new Float64Array(slots)];
@@ -84,7 +92,10 @@ export function representativeDay(inputs: AlignedInputs, from = 0, to = inputs.t
     const which = days === 'all' ? '' : ` ${days}`;
     return {
       ok: false,
-      issue: { field: 'prices', message: `the representative${which} day has no data for the ${clockLabel(empty * slotMinutes)} slot: the profile must cover at least one whole${which} day` },
+      issue: {
+        field: 'prices',
+        message: `the representative${which} day has no data for the ${clockLabel(empty * slotMinutes)} slot: the profile must cover at least one whole${which} day`,
+      },
     };
   }
   const mean = (k: number) => Array.from(sums[k]!, (sum, slot) => sum / samples[slot]!);
@@ -102,7 +113,10 @@ export function representativeDay(inputs: AlignedInputs, from = 0, to = inputs.t
       samples,
       days: daySet.size,
       dstDays: dst,
-      notes: [`averaged over ${daySet.size} ${days === 'all' ? '' : `${days} `}days by local clock slot`, ...(note ? [note] : [])],
+      notes: [
+        `averaged over ${daySet.size} ${days === 'all' ? '' : `${days} `}days by local clock slot`,
+        ...(note ? [note] : []),
+      ],
     },
   };
 }

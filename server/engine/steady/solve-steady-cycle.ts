@@ -77,13 +77,28 @@ export function solveSteadyCycle(inputs: AlignedInputs, options: SteadyOptions =
   const { solution } = solveDispatchLp(problem);
   const values =
     solution.status === 'optimal'
-      ? oneSidedValues(buildDispatchModel(problem), solution.objective, solution.socKwh, solution.storedEnergyValue, energyBounds(inputs))
+      ? oneSidedValues(
+          buildDispatchModel(problem),
+          solution.objective,
+          solution.socKwh,
+          solution.storedEnergyValue,
+          energyBounds(inputs),
+        )
       : [];
   const base = { slotMinutes: day.slotMinutes, days: day.days, dstDays: day.dstDays, notes: day.notes };
   if (solution.status !== 'optimal') {
     return {
       ok: true,
-      cycle: { ...base, status: solution.status, message: solution.message ?? '', slots: [], socStartKwh: NaN, costPerDay: NaN, equivalentCyclesPerDay: NaN, simultaneousSteps: [] },
+      cycle: {
+        ...base,
+        status: solution.status,
+        message: solution.message ?? '',
+        slots: [],
+        socStartKwh: NaN,
+        costPerDay: NaN,
+        equivalentCyclesPerDay: NaN,
+        simultaneousSteps: [],
+      },
     };
   }
   const discharged = solution.dischargeKw.reduce((sum, d) => sum + d * inputs.stepHours, 0);

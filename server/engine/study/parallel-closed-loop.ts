@@ -34,7 +34,9 @@ interface Stitched {
   plans: PlanLog;
 }
 
-type SeriesOf = Pick<ClosedLoopRun, 'chargeKw' | 'dischargeKw' | 'gridImportKw' | 'gridExportKw' | 'socKwh'> & { readonly plans: PlanLog };
+type SeriesOf = Pick<ClosedLoopRun, 'chargeKw' | 'dischargeKw' | 'gridImportKw' | 'gridExportKw' | 'socKwh'> & {
+  readonly plans: PlanLog;
+};
 
 /** A copy of steps [runFrom, at) of `run` (which starts at grid step `runFrom`). */
 function cut(run: SeriesOf, runFrom: number, at: number): Stitched {
@@ -47,7 +49,12 @@ function cut(run: SeriesOf, runFrom: number, at: number): Stitched {
     gridImportKw: run.gridImportKw.slice(0, n),
     gridExportKw: run.gridExportKw.slice(0, n),
     socKwh: run.socKwh.slice(0, n + 1),
-    plans: { start: run.plans.start.slice(0, k), share: run.plans.share.slice(0, k), leaving: run.plans.leaving.slice(0, k), intoCommitted: run.plans.intoCommitted.slice(0, k) },
+    plans: {
+      start: run.plans.start.slice(0, k),
+      share: run.plans.share.slice(0, k),
+      leaving: run.plans.leaving.slice(0, k),
+      intoCommitted: run.plans.intoCommitted.slice(0, k),
+    },
   };
 }
 
@@ -81,15 +88,24 @@ export interface ParallelReport {
  * The closed-loop run of `job` over the context's period, on `workers` threads
  * (the calling thread computes the first stretch). Same result as runClosedLoop.
  */
-export async function runClosedLoopParallel(context: StudyJobContext, job: StudyJob, workers: number): Promise<ClosedLoopRun & { parallel?: ParallelReport }> {
+export async function runClosedLoopParallel(
+  context: StudyJobContext,
+  job: StudyJob,
+  workers: number,
+): Promise<ClosedLoopRun & { parallel?: ParallelReport }> {
   const started = performance.now();
   const { inputs, from, to, replanSteps: r } = context;
   const grid = (steps: number) => Math.ceil(steps / r) * r;
   const overlap = grid(Math.max(2 * job.horizonSteps, (48 * 60) / inputs.stepMinutes));
   const stretches = Math.min(workers, Math.floor((to - from) / (2 * overlap)));
   if (stretches < 2 || !canRunInParallel(inputs, to - from, overlap)) return runJob(context, job);
-  const bounds = Array.from({ length: stretches + 1 }, (_, k) => (k === stretches ? to : from + grid(Math.floor(((to - from) * k) / stretches))));
-  const speculative: StudyJob[] = bounds.slice(1, -1).map((b, i) => ({ ...job, chunk: { from: b - overlap, stopAt: bounds[i + 2]!, initialEnergyKwh: context.initialEnergyKwh } }));
+  const bounds = Array.from({ length: stretches + 1 }, (_, k) =>
+    k === stretches ? to : from + grid(Math.floor(((to - from) * k) / stretches)),
+  );
+  const speculative: StudyJob[] = bounds.slice(1, -1).map((b, i) => ({
+    ...job,
+    chunk: { from: b - overlap, stopAt: bounds[i + 2]!, initialEnergyKwh: context.initialEnergyKwh },
+  }));
   const pending = runJobsOnWorkers<ClosedLoopRun>(context, speculative, stretches - 1);
   const first = runJob(context, { ...job, chunk: { from, stopAt: bounds[1]!, initialEnergyKwh: context.initialEnergyKwh } });
   const later = await pending;
@@ -113,17 +129,30 @@ export async function runClosedLoopParallel(context: StudyJobContext, job: Study
       exact = cut(exact, from, met);
       append(exact, candidate, start, met);
     } else {
-      const redo = runJob(context, { ...job, chunk: { from: bounds[k]!, stopAt: bounds[k + 1]!, initialEnergyKwh: exact.socKwh[bounds[k]! - from]! } });
+      const redo = runJob(context, {
+        ...job,
+        chunk: { from: bounds[k]!, stopAt: bounds[k + 1]!, initialEnergyKwh: exact.socKwh[bounds[k]! - from]! },
+      });
       if (redo.status !== 'optimal') return redo;
       solved += redo.solves;
       append(exact, redo, bounds[k]!, bounds[k]!);
     }
   }
   const windows = Math.ceil((to - from) / r);
-  return finish(context, exact, first.method, (performance.now() - started) / 1000, { stretches, metAt, extraSolves: solved - windows });
+  return finish(context, exact, first.method, (performance.now() - started) / 1000, {
+    stretches,
+    metAt,
+    extraSolves: solved - windows,
+  });
 }
 
-function finish(context: StudyJobContext, run: Stitched, method: ClosedLoopRun['method'], seconds: number, parallel: ParallelReport): ClosedLoopRun & { parallel: ParallelReport } {
+function finish(
+  context: StudyJobContext,
+  run: Stitched,
+  method: ClosedLoopRun['method'],
+  seconds: number,
+  parallel: ParallelReport,
+): ClosedLoopRun & { parallel: ParallelReport } {
   const { inputs, from, to } = context;
   const cost = scheduleCost(
     {
@@ -152,4 +181,3 @@ function finish(context: StudyJobContext, run: Stitched, method: ClosedLoopRun['
     parallel,
   };
 }
-

@@ -24,7 +24,8 @@ const pct = (v: number) => `${v.toFixed(3)} %`;
 
 export function recommendHorizon(runs: readonly RunFigures[], targetPct = DEFAULT_GAP_TARGET_PCT): Recommendation {
   const usable = runs.filter((r) => Number.isFinite(r.gapPct));
-  if (usable.length === 0) return { horizonHours: null, terminal: null, reason: 'no run finished, so there is nothing to recommend' };
+  if (usable.length === 0)
+    return { horizonHours: null, terminal: null, reason: 'no run finished, so there is nothing to recommend' };
   const byHorizonThenGap = [...usable].sort((a, b) => a.horizonHours - b.horizonHours || a.gapPct - b.gapPct);
   const good = byHorizonThenGap.find((r) => r.gapPct <= targetPct && r.leavingIntoCommitted === 0);
   if (good) {
@@ -35,7 +36,10 @@ export function recommendHorizon(runs: readonly RunFigures[], targetPct = DEFAUL
     };
   }
   const best = [...usable].sort((a, b) => a.gapPct - b.gapPct || a.horizonHours - b.horizonHours)[0]!;
-  const leaving = best.leavingIntoCommitted > 0 ? `; in ${best.leavingIntoCommitted} of ${best.solves} plans the leaving arc reached the committed steps` : '';
+  const leaving =
+    best.leavingIntoCommitted > 0
+      ? `; in ${best.leavingIntoCommitted} of ${best.solves} plans the leaving arc reached the committed steps`
+      : '';
   return {
     horizonHours: best.horizonHours,
     terminal: best.terminal,

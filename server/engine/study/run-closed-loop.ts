@@ -73,27 +73,55 @@ export interface ClosedLoopRun {
 
 export function failedRun(status: ClosedLoopRun['status'], message: string, seconds: number): ClosedLoopRun {
   return {
-    status, message, cost: NaN, equivalentCycles: NaN, solves: 0, seconds,
-    chargeKw: [], dischargeKw: [], gridImportKw: [], gridExportKw: [], socKwh: [],
-    nearSteadyShare: NaN, meanLeavingArcSteps: NaN, leavingIntoCommitted: 0, method: 'lp',
+    status,
+    message,
+    cost: NaN,
+    equivalentCycles: NaN,
+    solves: 0,
+    seconds,
+    chargeKw: [],
+    dischargeKw: [],
+    gridImportKw: [],
+    gridExportKw: [],
+    socKwh: [],
+    nearSteadyShare: NaN,
+    meanLeavingArcSteps: NaN,
+    leavingIntoCommitted: 0,
+    method: 'lp',
   };
 }
 
 export function runClosedLoop(inputs: AlignedInputs, req: ClosedLoopRequest): ClosedLoopRun {
   const started = performance.now();
   const elapsed = () => (performance.now() - started) / 1000;
-  const whole = problemFor(inputs, req.from, req.to, req.initialEnergyKwh, terminalRuleFor(req.terminal, inputs, req.to, req.steady));
+  const whole = problemFor(
+    inputs,
+    req.from,
+    req.to,
+    req.initialEnergyKwh,
+    terminalRuleFor(req.terminal, inputs, req.to, req.steady),
+  );
   const issue = validateProblem(whole);
   if (issue) return failedRun('error', issue.message, elapsed());
   const usable = usableEnergyKwh(inputs.battery);
   const band = req.bandFraction ?? DEFAULT_BAND_FRACTION;
   if (req.method !== 'lp' && checkDp(whole).ok) return runClosedLoopOnDp(inputs, req, whole, usable, band, elapsed);
   const session = new HighsSession();
-  const applied = { chargeKw: [] as number[], dischargeKw: [] as number[], gridImportKw: [] as number[], gridExportKw: [] as number[] };
+  const applied = {
+    chargeKw: [] as number[],
+    dischargeKw: [] as number[],
+    gridImportKw: [] as number[],
+    gridExportKw: [] as number[],
+  };
   const socKwh = [req.initialEnergyKwh];
   let basis: LpBasis | undefined;
   let model: DispatchModel | undefined;
-  let solves = 0, shareSum = 0, leavingSum = 0, leavingIntoCommitted = 0, peak = 0, dpSolves = 0;
+  let solves = 0,
+    shareSum = 0,
+    leavingSum = 0,
+    leavingIntoCommitted = 0,
+    peak = 0,
+    dpSolves = 0;
   const plans: PlanLog = { start: [], share: [], leaving: [], intoCommitted: [] };
   const stopAt = req.stopAt ?? req.to;
   try {
@@ -101,11 +129,19 @@ export function runClosedLoop(inputs: AlignedInputs, req: ClosedLoopRequest): Cl
       const end = Math.min(req.to, s + req.horizonSteps);
       const day = inputs.clock.localDay[s]!;
       let dischargedToday = 0;
-      for (let t = s - 1; t >= req.from && inputs.clock.localDay[t] === day; t--) dischargedToday += applied.dischargeKw[t - req.from]! * inputs.stepHours;
-      const problem = problemFor(inputs, s, end, socKwh[socKwh.length - 1]!, terminalRuleFor(req.terminal, inputs, end, req.steady), {
-        peakFloorKw: peak,
-        dischargedFirstDayKwh: dischargedToday,
-      });
+      for (let t = s - 1; t >= req.from && inputs.clock.localDay[t] === day; t--)
+        dischargedToday += applied.dischargeKw[t - req.from]! * inputs.stepHours;
+      const problem = problemFor(
+        inputs,
+        s,
+        end,
+        socKwh[socKwh.length - 1]!,
+        terminalRuleFor(req.terminal, inputs, end, req.steady),
+        {
+          peakFloorKw: peak,
+          dischargedFirstDayKwh: dischargedToday,
+        },
+      );
       let plan: DispatchSolution | null = req.method !== 'lp' && checkDp(problem).ok ? solveWithDp(problem) : null;
       if (plan) dpSolves++;
       else {
@@ -122,7 +158,11 @@ export function runClosedLoop(inputs: AlignedInputs, req: ClosedLoopRequest): Cl
       }
       solves++;
       if (plan.status !== 'optimal') {
-        return failedRun(plan.status, `window from ${new Date(inputs.timesMs[s]!).toISOString()}: ${plan.message ?? plan.status}`, elapsed());
+        return failedRun(
+          plan.status,
+          `window from ${new Date(inputs.timesMs[s]!).toISOString()}: ${plan.message ?? plan.status}`,
+          elapsed(),
+        );
       }
       const steps = Math.min(req.replanSteps, end - s, stopAt - s);
       for (let k = 0; k < steps; k++) {
@@ -149,7 +189,10 @@ export function runClosedLoop(inputs: AlignedInputs, req: ClosedLoopRequest): Cl
   } finally {
     session.dispose();
   }
-  const cost = scheduleCost({ ...whole, degradationCostPerMwh: inputs.battery.degradationCostPerMwh, demandChargePerKw: inputs.site.demandChargePerKw }, applied);
+  const cost = scheduleCost(
+    { ...whole, degradationCostPerMwh: inputs.battery.degradationCostPerMwh, demandChargePerKw: inputs.site.demandChargePerKw },
+    applied,
+  );
   const discharged = applied.dischargeKw.reduce((sum, d) => sum + d * inputs.stepHours, 0);
   return {
     status: 'optimal',
@@ -185,9 +228,16 @@ function dpLoopFor(inputs: AlignedInputs, req: ClosedLoopRequest, whole: Dispatc
  * bit-identical to solving each window cold; figures as in the LP loop above.
  */
 function runClosedLoopOnDp(
-  inputs: AlignedInputs, req: ClosedLoopRequest, whole: DispatchProblem, usable: number, band: number, elapsed: () => number,
+  inputs: AlignedInputs,
+  req: ClosedLoopRequest,
+  whole: DispatchProblem,
+  usable: number,
+  band: number,
+  elapsed: () => number,
 ): ClosedLoopRun {
-  let shareSum = 0, leavingSum = 0, leavingIntoCommitted = 0;
+  let shareSum = 0,
+    leavingSum = 0,
+    leavingIntoCommitted = 0;
   // Consecutive plans differ in a few steps: update the figures there only (thousands of windows per run).
   const figures = req.referenceSoc ? new SlidingArcFigures(req.referenceSoc, usable, band) : null;
   const run = dpLoopFor(inputs, req, whole).run({
@@ -201,7 +251,8 @@ function runClosedLoopOnDp(
             shareSum += fig.nearSteadyShare;
             leavingSum += fig.leavingArcSteps;
             const steps = plan.endStep - plan.startStep;
-            if (steps === req.horizonSteps && fig.leavingArcSteps > 0 && steps - fig.leavingArcSteps < req.replanSteps) leavingIntoCommitted++;
+            if (steps === req.horizonSteps && fig.leavingArcSteps > 0 && steps - fig.leavingArcSteps < req.replanSteps)
+              leavingIntoCommitted++;
           },
         }
       : {}),
@@ -211,7 +262,10 @@ function runClosedLoopOnDp(
   const discharged = sol.dischargeKw.reduce((sum, d) => sum + d * inputs.stepHours, 0);
   return {
     status: 'optimal',
-    cost: scheduleCost({ ...whole, degradationCostPerMwh: inputs.battery.degradationCostPerMwh, demandChargePerKw: inputs.site.demandChargePerKw }, sol),
+    cost: scheduleCost(
+      { ...whole, degradationCostPerMwh: inputs.battery.degradationCostPerMwh, demandChargePerKw: inputs.site.demandChargePerKw },
+      sol,
+    ),
     equivalentCycles: discharged / usable,
     solves: run.windows,
     seconds: elapsed(),

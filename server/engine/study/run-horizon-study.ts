@@ -57,29 +57,38 @@ const fail = (field: string, message: string): StudyResult => ({ ok: false, issu
 
 function toSteps(inputs: AlignedInputs, hours: number, what: string): number | string {
   const steps = (hours * 60) / inputs.stepMinutes;
-  return Number.isInteger(steps) && steps >= 1 ? steps : `${what} ${hours} h is not a whole, positive number of ${inputs.stepMinutes}-minute steps`;
+  return Number.isInteger(steps) && steps >= 1
+    ? steps
+    : `${what} ${hours} h is not a whole, positive number of ${inputs.stepMinutes}-minute steps`;
 }
 
 export function gapPct(cost: number, referenceCost: number): number {
   const diff = cost - referenceCost;
-  return Math.abs(diff) <= 1e-9 * Math.max(1, Math.abs(referenceCost)) ? 0 : (100 * diff) / Math.max(Math.abs(referenceCost), 1e-9);
+  return Math.abs(diff) <= 1e-9 * Math.max(1, Math.abs(referenceCost))
+    ? 0
+    : (100 * diff) / Math.max(Math.abs(referenceCost), 1e-9);
 }
 
 export async function runHorizonStudy(inputs: AlignedInputs, request: StudyRequest): Promise<StudyResult> {
   const started = performance.now();
   const start = stepIndexOf(inputs, request.startMs ?? inputs.timesMs[0]!, 'the study start');
   if (!start.ok) return fail('start', start.message);
-  const end = request.endMs === undefined ? { ok: true as const, index: inputs.timesMs.length } : stepIndexOf(inputs, request.endMs, 'the study end');
+  const end =
+    request.endMs === undefined
+      ? { ok: true as const, index: inputs.timesMs.length }
+      : stepIndexOf(inputs, request.endMs, 'the study end');
   if (!end.ok) return fail('end', end.message);
   if (end.index <= start.index) return fail('end', 'the study end must be after its start');
-  if (request.horizonsHours.length === 0 || request.terminals.length === 0) return fail('horizons', 'give at least one horizon and one terminal rule');
+  if (request.horizonsHours.length === 0 || request.terminals.length === 0)
+    return fail('horizons', 'give at least one horizon and one terminal rule');
   const replanSteps = toSteps(inputs, request.replanHours, 'the re-plan interval');
   if (typeof replanSteps === 'string') return fail('replan', replanSteps);
   const jobs: StudyJob[] = [];
   for (const hours of request.horizonsHours) {
     const steps = toSteps(inputs, hours, 'the horizon');
     if (typeof steps === 'string') return fail('horizons', steps);
-    if (steps < replanSteps) return fail('horizons', `the horizon ${hours} h is shorter than the re-plan interval ${request.replanHours} h`);
+    if (steps < replanSteps)
+      return fail('horizons', `the horizon ${hours} h is shorter than the re-plan interval ${request.replanHours} h`);
     for (const terminal of request.terminals) jobs.push({ horizonHours: hours, horizonSteps: steps, terminal });
   }
   const steady = steadyFor(inputs, request.terminals, undefined, request.steadyDays);
@@ -106,7 +115,8 @@ export async function runHorizonStudy(inputs: AlignedInputs, request: StudyReque
     ...(steady.steady ? { steady: steady.steady } : {}),
   };
   // On the exact DP a run takes milliseconds, less than starting a worker thread.
-  const onDp = context.method !== 'lp' && checkDp(problemFor(inputs, start.index, end.index, context.initialEnergyKwh, { kind: 'free' })).ok;
+  const onDp =
+    context.method !== 'lp' && checkDp(problemFor(inputs, start.index, end.index, context.initialEnergyKwh, { kind: 'free' })).ok;
   const workers = request.workers ?? (onDp ? 1 : defaultWorkerCount());
   const results =
     workers > 1 && jobs.length > 1

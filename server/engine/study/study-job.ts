@@ -29,7 +29,10 @@ export interface StudyJob {
 }
 
 /** A run without its series (they stay in the thread that computed them). */
-export type StudyJobResult = Omit<ClosedLoopRun, 'chargeKw' | 'dischargeKw' | 'gridImportKw' | 'gridExportKw' | 'socKwh' | 'plans'>;
+export type StudyJobResult = Omit<
+  ClosedLoopRun,
+  'chargeKw' | 'dischargeKw' | 'gridImportKw' | 'gridExportKw' | 'socKwh' | 'plans'
+>;
 
 /** The closed-loop run of a job, series included. */
 export function runJob(context: StudyJobContext, job: StudyJob): ClosedLoopRun {
@@ -41,7 +44,9 @@ export function runJob(context: StudyJobContext, job: StudyJob): ClosedLoopRun {
     replanSteps: context.replanSteps,
     terminal: job.terminal,
     initialEnergyKwh: job.chunk?.initialEnergyKwh ?? context.initialEnergyKwh,
-    ...(context.referenceSoc ? { referenceSoc: from === context.from ? context.referenceSoc : context.referenceSoc.slice(from - context.from) } : {}),
+    ...(context.referenceSoc
+      ? { referenceSoc: from === context.from ? context.referenceSoc : context.referenceSoc.slice(from - context.from) }
+      : {}),
     bandFraction: context.bandFraction,
     method: context.method,
     ...(job.chunk ? { stopAt: job.chunk.stopAt } : {}),

@@ -40,7 +40,12 @@ export function minuteOfDayAt(inputs: AlignedInputs, index: number): number {
 }
 
 /** The engine rule for a window ending at step `endIndex` (exclusive). Needs the steady cycle for steady-value. */
-export function terminalRuleFor(choice: TerminalChoice, inputs: AlignedInputs, endIndex: number, steady?: SteadyCycle): TerminalRule {
+export function terminalRuleFor(
+  choice: TerminalChoice,
+  inputs: AlignedInputs,
+  endIndex: number,
+  steady?: SteadyCycle,
+): TerminalRule {
   if (choice.kind !== 'steady-value') return choice;
   if (!steady || steady.status !== 'optimal') return { kind: 'free' };
   return { kind: 'steady-value', valuePerMwh: steadyValueAt(steady, minuteOfDayAt(inputs, endIndex)) };

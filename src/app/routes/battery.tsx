@@ -37,26 +37,55 @@ export function BatteryRoute() {
   return (
     <section className="space-y-4">
       <p className="text-sm">
-        <Link to="/sites" className="text-seaglass-700 underline">Sites</Link> › <Link to={`/sites/${s.id}`} className="text-seaglass-700 underline">{s.name}</Link> ›
+        <Link to="/sites" className="text-seaglass-700 underline">
+          Sites
+        </Link>{' '}
+        ›{' '}
+        <Link to={`/sites/${s.id}`} className="text-seaglass-700 underline">
+          {s.name}
+        </Link>{' '}
+        ›
       </p>
       <div className="flex items-center justify-between gap-4">
         <h1 className="text-2xl font-semibold">{b.name}</h1>
-        {canEdit && !editing && <button type="button" className={buttonClass.secondary} onClick={() => setEditing(true)}>Edit battery</button>}
+        {canEdit && !editing && (
+          <button type="button" className={buttonClass.secondary} onClick={() => setEditing(true)}>
+            Edit battery
+          </button>
+        )}
       </div>
       {stale && (
         <div role="alert" className="rounded border border-amber-500 bg-amber-100 p-3">
           <p>{update.error?.message}</p>
-          <button type="button" className={`${buttonClass.secondary} mt-2`} onClick={() => { update.reset(); void battery.refetch(); setEditing(false); }}>
+          <button
+            type="button"
+            className={`${buttonClass.secondary} mt-2`}
+            onClick={() => {
+              update.reset();
+              void battery.refetch();
+              setEditing(false);
+            }}
+          >
             Load the current values
           </button>
         </div>
       )}
       {editing ? (
-        <BatteryForm key={b.version} battery={b} site={s} pending={update.isPending} serverError={stale ? undefined : update.error} onSubmit={save} onCancel={() => setEditing(false)} />
+        <BatteryForm
+          key={b.version}
+          battery={b}
+          site={s}
+          pending={update.isPending}
+          serverError={stale ? undefined : update.error}
+          onSubmit={save}
+          onCancel={() => setEditing(false)}
+        />
       ) : (
         <BatteryDetails battery={b} currency={s.currency} />
       )}
-      <p className="text-xs text-ink-500">Version {b.version} · last changed {formatMoment(b.updatedAt)}</p>
+      <p className="text-xs text-ink-500">
+        Version {b.version} · last changed {formatMoment(b.updatedAt)}
+      </p>
     </section>
   );
 }

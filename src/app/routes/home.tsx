@@ -16,12 +16,24 @@ export function HomeRoute() {
       <div className="flex flex-wrap items-end justify-between gap-3">
         <div>
           <h1 className="text-3xl font-semibold text-ink-900">Needs attention</h1>
-          <p className="max-w-2xl text-ink-700">Background jobs, plans waiting for a second person, and plans whose figures say “look again”.</p>
+          <p className="max-w-2xl text-ink-700">
+            Background jobs, plans waiting for a second person, and plans whose figures say “look again”.
+          </p>
         </div>
         {canPlan && (
           <div className="flex gap-2">
-            <Link to="/plans/new" className="rounded bg-seaglass-700 px-4 py-2 text-sm font-semibold text-white hover:bg-seaglass-800">New plan</Link>
-            <Link to="/studies/new" className="rounded border border-ink-300 bg-white px-4 py-2 text-sm font-medium text-ink-800 hover:bg-ink-50">New horizon study</Link>
+            <Link
+              to="/plans/new"
+              className="rounded bg-seaglass-700 px-4 py-2 text-sm font-semibold text-white hover:bg-seaglass-800"
+            >
+              New plan
+            </Link>
+            <Link
+              to="/studies/new"
+              className="rounded border border-ink-300 bg-white px-4 py-2 text-sm font-medium text-ink-800 hover:bg-ink-50"
+            >
+              New horizon study
+            </Link>
           </div>
         )}
       </div>

@@ -21,10 +21,23 @@ export function ProfileRoute() {
   return (
     <section className="space-y-4">
       <p className="text-sm">
-        <Link to="/sites" className="text-seaglass-700 underline">Sites</Link> › <Link to={`/sites/${s.id}`} className="text-seaglass-700 underline">{s.name}</Link> ›
+        <Link to="/sites" className="text-seaglass-700 underline">
+          Sites
+        </Link>{' '}
+        ›{' '}
+        <Link to={`/sites/${s.id}`} className="text-seaglass-700 underline">
+          {s.name}
+        </Link>{' '}
+        ›
       </p>
       <h1 className="text-2xl font-semibold">{profile.data.name}</h1>
-      <ProfileDetail id={id} timezone={s.timezone} currency={s.currency} canEdit={canEdit} onDeleted={() => void navigate(`/sites/${s.id}`)} />
+      <ProfileDetail
+        id={id}
+        timezone={s.timezone}
+        currency={s.currency}
+        canEdit={canEdit}
+        onDeleted={() => void navigate(`/sites/${s.id}`)}
+      />
     </section>
   );
 }

@@ -10,7 +10,8 @@ export function ProfilesRoute() {
   const [params, setParams] = useSearchParams();
   if (sites.isPending) return <LoadingState label="Loading sites…" />;
   if (sites.isError) return <ErrorState error={sites.error} onRetry={() => void sites.refetch()} />;
-  if (sites.data.length === 0) return <EmptyState title="No sites yet.">Profiles belong to a site: create a site first.</EmptyState>;
+  if (sites.data.length === 0)
+    return <EmptyState title="No sites yet.">Profiles belong to a site: create a site first.</EmptyState>;
   const chosen = sites.data.find((s) => s.id === params.get('site')) ?? sites.data[0];
   if (!chosen) return null;
   return (
@@ -20,7 +21,9 @@ export function ProfilesRoute() {
         Site
         <select className={inputClass} value={chosen.id} onChange={(e) => setParams({ site: e.target.value })}>
           {sites.data.map((s) => (
-            <option key={s.id} value={s.id}>{s.name}</option>
+            <option key={s.id} value={s.id}>
+              {s.name}
+            </option>
           ))}
         </select>
       </label>

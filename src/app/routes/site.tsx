@@ -41,10 +41,19 @@ export function SiteRoute() {
   return (
     <div className="space-y-8">
       <section className="space-y-3">
-        <p className="text-sm"><Link to="/sites" className="text-seaglass-700 underline">Sites</Link> ›</p>
+        <p className="text-sm">
+          <Link to="/sites" className="text-seaglass-700 underline">
+            Sites
+          </Link>{' '}
+          ›
+        </p>
         <div className="flex items-center justify-between gap-4">
           <h1 className="text-2xl font-semibold">{s.name}</h1>
-          {canEdit && !editing && <button type="button" className={buttonClass.secondary} onClick={() => setEditing(true)}>Edit site</button>}
+          {canEdit && !editing && (
+            <button type="button" className={buttonClass.secondary} onClick={() => setEditing(true)}>
+              Edit site
+            </button>
+          )}
         </div>
         {editing ? (
           <div className="rounded bg-white p-4 shadow-sm">
@@ -53,7 +62,9 @@ export function SiteRoute() {
               pending={update.isPending}
               serverError={update.error}
               onSubmit={(fields) => {
-                const patch = Object.fromEntries(Object.entries(fields).filter(([key, value]) => s[key as keyof typeof fields] !== value));
+                const patch = Object.fromEntries(
+                  Object.entries(fields).filter(([key, value]) => s[key as keyof typeof fields] !== value),
+                );
                 if (Object.keys(patch).length === 0) return setEditing(false);
                 update.mutate({ id: s.id, patch }, { onSuccess: () => setEditing(false) });
               }}
@@ -67,8 +78,14 @@ export function SiteRoute() {
 
       <section className="space-y-3" aria-labelledby="batteries-heading">
         <div className="flex items-center justify-between gap-4">
-          <h2 id="batteries-heading" className="text-xl font-semibold">Batteries</h2>
-          {canEdit && !addingBattery && <button type="button" className={buttonClass.primary} onClick={() => setAddingBattery(true)}>Add battery</button>}
+          <h2 id="batteries-heading" className="text-xl font-semibold">
+            Batteries
+          </h2>
+          {canEdit && !addingBattery && (
+            <button type="button" className={buttonClass.primary} onClick={() => setAddingBattery(true)}>
+              Add battery
+            </button>
+          )}
         </div>
         {addingBattery && (
           <div className="rounded bg-ink-100 p-4">
@@ -76,7 +93,9 @@ export function SiteRoute() {
               site={s}
               pending={createBattery.isPending}
               serverError={createBattery.error}
-              onSubmit={(fields) => createBattery.mutate({ siteId: s.id, input: fields }, { onSuccess: () => setAddingBattery(false) })}
+              onSubmit={(fields) =>
+                createBattery.mutate({ siteId: s.id, input: fields }, { onSuccess: () => setAddingBattery(false) })
+              }
               onCancel={() => setAddingBattery(false)}
             />
           </div>
@@ -85,7 +104,9 @@ export function SiteRoute() {
       </section>
 
       <section className="space-y-3" aria-labelledby="profiles-heading">
-        <h2 id="profiles-heading" className="text-xl font-semibold">Profiles</h2>
+        <h2 id="profiles-heading" className="text-xl font-semibold">
+          Profiles
+        </h2>
         {canEdit && (
           <UploadSection openAtFirst={s.profileCount === 0}>
             <ProfileUpload siteId={s.id} timezone={s.timezone} currency={s.currency} />

@@ -41,8 +41,12 @@ export function brokenLimit(p: DispatchProblem, s: DispatchSolution): string | n
 export function scheduleCost(p: DispatchProblem, s: DispatchSolution): number {
   let cost = 0;
   for (let t = 0; t < p.priceImport.length; t++) {
-    cost += ((p.priceImport[t] ?? 0) * (s.gridImportKw[t] ?? 0) - (p.priceExport[t] ?? 0) * (s.gridExportKw[t] ?? 0)
-      + p.battery.degradationCostPerMwh * (s.dischargeKw[t] ?? 0)) * p.stepHours / 1000;
+    cost +=
+      (((p.priceImport[t] ?? 0) * (s.gridImportKw[t] ?? 0) -
+        (p.priceExport[t] ?? 0) * (s.gridExportKw[t] ?? 0) +
+        p.battery.degradationCostPerMwh * (s.dischargeKw[t] ?? 0)) *
+        p.stepHours) /
+      1000;
   }
   return cost;
 }

@@ -4,7 +4,12 @@ import type { DispatchProblem, TerminalRule } from '../../../server/engine/types
 import { solveWithGlpk } from './glpk-reference';
 import { randomProblem, rng, VARIANTS } from './random-problems';
 
-interface Snapshot { start: number; soc: number[]; value: number[]; charge: number[] }
+interface Snapshot {
+  start: number;
+  soc: number[];
+  value: number[];
+  charge: number[];
+}
 
 function windowRules(seed: number): (s: number, end: number) => TerminalRule {
   const r = rng(seed);
@@ -22,8 +27,15 @@ function windowRules(seed: number): (s: number, end: number) => TerminalRule {
 function windowProblem(p: DispatchProblem, plan: DpWindowPlan, e0: number): DispatchProblem {
   const cut = <T>(xs: readonly T[]): T[] => xs.slice(plan.startStep, plan.endStep);
   return {
-    ...p, timesMs: cut(p.timesMs), priceImport: cut(p.priceImport), priceExport: cut(p.priceExport), loadKw: cut(p.loadKw),
-    generationKw: cut(p.generationKw), dayIndex: cut(p.dayIndex), initialEnergyKwh: e0, terminal: plan.terminal,
+    ...p,
+    timesMs: cut(p.timesMs),
+    priceImport: cut(p.priceImport),
+    priceExport: cut(p.priceExport),
+    loadKw: cut(p.loadKw),
+    generationKw: cut(p.generationKw),
+    dayIndex: cut(p.dayIndex),
+    initialEnergyKwh: e0,
+    terminal: plan.terminal,
   };
 }
 
@@ -40,22 +52,36 @@ describe('closed-loop receding-horizon runs on the dynamic program', () => {
       const runs = [true, false].map((warm) => {
         const plans: Snapshot[] = [];
         const res = loop.run({
-          horizonSteps, replanSteps, warm, intervals: true, terminalForWindow: windowRules(seed),
-          onPlan: (pl) => plans.push({ start: pl.startStep, soc: Array.from(pl.socKwh), value: Array.from(pl.storedEnergyValue), charge: Array.from(pl.chargeKw) }),
+          horizonSteps,
+          replanSteps,
+          warm,
+          intervals: true,
+          terminalForWindow: windowRules(seed),
+          onPlan: (pl) =>
+            plans.push({
+              start: pl.startStep,
+              soc: Array.from(pl.socKwh),
+              value: Array.from(pl.storedEnergyValue),
+              charge: Array.from(pl.chargeKw),
+            }),
         });
         return { res, plans };
       });
-      const [warm, cold] = runs as [typeof runs[0], typeof runs[0]];
+      const [warm, cold] = runs as [(typeof runs)[0], (typeof runs)[0]];
       expect(warm.res.solution.status).toBe(cold.res.solution.status);
       // Object.is compares bits (it tells 0 from -0), the contract of warm reuse.
-      const same = (a: readonly number[], b: readonly number[]): boolean => a.length === b.length && a.every((v, k) => Object.is(v, b[k]));
+      const same = (a: readonly number[], b: readonly number[]): boolean =>
+        a.length === b.length && a.every((v, k) => Object.is(v, b[k]));
       for (const key of ['chargeKw', 'dischargeKw', 'gridImportKw', 'gridExportKw', 'socKwh', 'storedEnergyValue'] as const) {
         expect(same(warm.res.solution[key], cold.res.solution[key]), `seed ${seed} ${key}`).toBe(true);
       }
       expect(warm.plans.length).toBe(cold.plans.length);
       warm.plans.forEach((pl, k) => {
         const other = cold.plans[k]!;
-        expect(same(pl.soc, other.soc) && same(pl.value, other.value) && same(pl.charge, other.charge), `seed ${seed} window ${pl.start}`).toBe(true);
+        expect(
+          same(pl.soc, other.soc) && same(pl.value, other.value) && same(pl.charge, other.charge),
+          `seed ${seed} window ${pl.start}`,
+        ).toBe(true);
       });
       reused += warm.res.stats.backwardStepsReused + warm.res.stats.forwardStepsReused;
       expect(cold.res.stats.backwardStepsReused).toBe(0);
@@ -73,7 +99,9 @@ describe('closed-loop receding-horizon runs on the dynamic program', () => {
       const horizonSteps = 4 + Math.floor(r() * 20);
       const plans: { problem: DispatchProblem; soc: number[] }[] = [];
       const res = createDpClosedLoop(p).run({
-        horizonSteps, replanSteps: 1 + Math.floor(r() * 3), terminalForWindow: windowRules(seed),
+        horizonSteps,
+        replanSteps: 1 + Math.floor(r() * 3),
+        terminalForWindow: windowRules(seed),
         onPlan: (pl) => plans.push({ problem: windowProblem(p, pl, pl.socKwh[0]!), soc: Array.from(pl.socKwh) }),
       });
       if (res.solution.status !== 'optimal') continue;
@@ -82,9 +110,14 @@ describe('closed-loop receding-horizon runs on the dynamic program', () => {
         // objective is recomputed from its SoC path via a DP solve of that window.
         const lp = solveWithGlpk(problem);
         expect(lp.status).toBe('optimal');
-        const dpWindow = createDpClosedLoop(problem).run({ horizonSteps: problem.priceImport.length, replanSteps: problem.priceImport.length });
+        const dpWindow = createDpClosedLoop(problem).run({
+          horizonSteps: problem.priceImport.length,
+          replanSteps: problem.priceImport.length,
+        });
         expect(Array.from(dpWindow.solution.socKwh)).toEqual(soc);
-        expect(Math.abs(dpWindow.solution.objective - lp.objective)).toBeLessThanOrEqual(1e-9 * Math.max(1, Math.abs(lp.objective)));
+        expect(Math.abs(dpWindow.solution.objective - lp.objective)).toBeLessThanOrEqual(
+          1e-9 * Math.max(1, Math.abs(lp.objective)),
+        );
         windows++;
       }
     }

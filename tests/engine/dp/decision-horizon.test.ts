@@ -7,8 +7,13 @@ import { randomProblem, rng, VARIANTS } from './random-problems';
 function truncate(p: DispatchProblem, steps: number): DispatchProblem {
   const cut = <T>(xs: readonly T[]): T[] => xs.slice(0, steps);
   return {
-    ...p, timesMs: cut(p.timesMs), priceImport: cut(p.priceImport), priceExport: cut(p.priceExport),
-    loadKw: cut(p.loadKw), generationKw: cut(p.generationKw), dayIndex: cut(p.dayIndex),
+    ...p,
+    timesMs: cut(p.timesMs),
+    priceImport: cut(p.priceImport),
+    priceExport: cut(p.priceExport),
+    loadKw: cut(p.loadKw),
+    generationKw: cut(p.generationKw),
+    dayIndex: cut(p.dayIndex),
   };
 }
 
@@ -67,7 +72,10 @@ describe('decision horizon', () => {
       const prices = random.priceImport.map(() => 70 + (r() - 0.5) * 6);
       const base: DispatchProblem = { ...random, priceImport: prices, priceExport: prices };
       const byHour = Array.from({ length: 24 }, () => 20 + r() * 120);
-      const ruleAt = (cut: number): TerminalRule => ({ kind: 'steady-value', valuePerMwh: byHour[Math.round(cut * base.stepHours) % 24]! });
+      const ruleAt = (cut: number): TerminalRule => ({
+        kind: 'steady-value',
+        valuePerMwh: byHour[Math.round(cut * base.stepHours) % 24]!,
+      });
       const n = base.priceImport.length;
       const p: DispatchProblem = { ...base, terminal: ruleAt(n) };
       const steps = 1 + Math.floor(r() * 4);

@@ -29,7 +29,9 @@ describe('exact dynamic program against GLPK on random instances', () => {
         expect(dp.status, `seed ${seed}: ${dp.message}`).toBe('optimal');
         expect(dp.method).toBe('dp');
         const tol = 1e-9 * Math.max(1, Math.abs(lp.objective));
-        expect(Math.abs(dp.objective - lp.objective), `seed ${seed}: dp ${dp.objective} lp ${lp.objective}`).toBeLessThanOrEqual(tol);
+        expect(Math.abs(dp.objective - lp.objective), `seed ${seed}: dp ${dp.objective} lp ${lp.objective}`).toBeLessThanOrEqual(
+          tol,
+        );
         expect(brokenLimit(p, dp), `seed ${seed}`).toBeNull();
         // cost is the money of the reported flows, without terminal value [D: DESIGN section 3].
         expect(Math.abs(dp.cost - scheduleCost(p, dp))).toBeLessThanOrEqual(tol);

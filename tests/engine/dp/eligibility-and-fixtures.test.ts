@@ -3,7 +3,11 @@ import { canSolveWithDp, solveDispatchDp } from '../../../server/engine/dp';
 import type { DispatchProblem } from '../../../server/engine/types';
 import { solveWithGlpk } from './glpk-reference';
 
-function problem(prices: number[], over: Partial<DispatchProblem> = {}, battery: Partial<DispatchProblem['battery']> = {}): DispatchProblem {
+function problem(
+  prices: number[],
+  over: Partial<DispatchProblem> = {},
+  battery: Partial<DispatchProblem['battery']> = {},
+): DispatchProblem {
   const n = prices.length;
   return {
     stepHours: 1,
@@ -13,8 +17,17 @@ function problem(prices: number[], over: Partial<DispatchProblem> = {}, battery:
     loadKw: prices.map(() => 0),
     generationKw: prices.map(() => 0),
     battery: {
-      powerChargeKw: 1000, powerDischargeKw: 1000, energyKwh: 1000, socMinPct: 0, socMaxPct: 100, socInitialPct: 0,
-      efficiencyCharge: 0.9, efficiencyDischarge: 0.9, selfDischargePctPerHour: 0, degradationCostPerMwh: 0, maxCyclesPerDay: null,
+      powerChargeKw: 1000,
+      powerDischargeKw: 1000,
+      energyKwh: 1000,
+      socMinPct: 0,
+      socMaxPct: 100,
+      socInitialPct: 0,
+      efficiencyCharge: 0.9,
+      efficiencyDischarge: 0.9,
+      selfDischargePctPerHour: 0,
+      degradationCostPerMwh: 0,
+      maxCyclesPerDay: null,
       ...battery,
     },
     site: { timezone: 'UTC', importLimitKw: null, exportLimitKw: null, demandChargePerKw: null },
@@ -41,7 +54,9 @@ describe('models the dynamic program cannot take', () => {
 
   it('refuses an export price above the import price, naming the step', () => {
     const check = canSolveWithDp(problem([20, 100, 50], { priceExport: [20, 100, 51] }));
-    expect(!check.ok && check.reason).toMatch(/export price 51 is above the import price 50 at step 2 \(2026-03-02T02:00:00.000Z\)/);
+    expect(!check.ok && check.reason).toMatch(
+      /export price 51 is above the import price 50 at step 2 \(2026-03-02T02:00:00.000Z\)/,
+    );
   });
 
   it('refuses a free initial SoC (the steady cycle), which the LP solves', () => {
@@ -50,18 +65,28 @@ describe('models the dynamic program cannot take', () => {
   });
 
   it('takes site load, generation, grid limits, self-discharge and every terminal rule', () => {
-    const p = problem([20, 100], {
-      loadKw: [300, 200], generationKw: [0, 500], priceExport: [10, 90],
-      site: { timezone: 'UTC', importLimitKw: 2000, exportLimitKw: 800, demandChargePerKw: null },
-      terminal: { kind: 'steady-value', valuePerMwh: 40 },
-    }, { selfDischargePctPerHour: 0.1, degradationCostPerMwh: 5 });
+    const p = problem(
+      [20, 100],
+      {
+        loadKw: [300, 200],
+        generationKw: [0, 500],
+        priceExport: [10, 90],
+        site: { timezone: 'UTC', importLimitKw: 2000, exportLimitKw: 800, demandChargePerKw: null },
+        terminal: { kind: 'steady-value', valuePerMwh: 40 },
+      },
+      { selfDischargePctPerHour: 0.1, degradationCostPerMwh: 5 },
+    );
     expect(canSolveWithDp(p)).toEqual({ ok: true });
   });
 
   it('rejects bad inputs with what, where and how to fix', () => {
     expect(solveDispatchDp(problem([20, NaN])).message).toMatch(/priceImport\[1\] is not a finite number/);
-    expect(solveDispatchDp(problem([20, 30], {}, { efficiencyCharge: 1.2 })).message).toMatch(/efficiencyCharge must be in \(0, 1\], got 1.2/);
-    expect(solveDispatchDp(problem([20, 30], {}, { socMinPct: 80, socMaxPct: 20 })).message).toMatch(/SoC window 80–20 % is empty/);
+    expect(solveDispatchDp(problem([20, 30], {}, { efficiencyCharge: 1.2 })).message).toMatch(
+      /efficiencyCharge must be in \(0, 1\], got 1.2/,
+    );
+    expect(solveDispatchDp(problem([20, 30], {}, { socMinPct: 80, socMaxPct: 20 })).message).toMatch(
+      /SoC window 80–20 % is empty/,
+    );
   });
 });
 
@@ -85,7 +110,11 @@ describe('worked fixtures', () => {
 
   // [D] fixture C: two cycles of 50·1 − 10·1 = 40 each (80), or 50·0.81 − 10 = 30.5 each (61).
   it('runs two cycles on prices 10, 50, 10, 50', () => {
-    expect(solveDispatchDp(problem([10, 50, 10, 50], { terminal: { kind: 'cyclic' } }, { efficiencyCharge: 1, efficiencyDischarge: 1 })).cost).toBeCloseTo(-80, 9);
+    expect(
+      solveDispatchDp(
+        problem([10, 50, 10, 50], { terminal: { kind: 'cyclic' } }, { efficiencyCharge: 1, efficiencyDischarge: 1 }),
+      ).cost,
+    ).toBeCloseTo(-80, 9);
     expect(solveDispatchDp(problem([10, 50, 10, 50], { terminal: { kind: 'cyclic' } })).cost).toBeCloseTo(-61, 9);
   });
 
@@ -106,7 +135,13 @@ describe('ties between optimal schedules', () => {
   // ends where it started costs 0; the documented rule (least energy moved per step, then
   // idling) must pick zero throughput.
   it('idles at flat prices with a lossless battery and a cyclic end', () => {
-    const s = solveDispatchDp(problem([40, 40, 40, 40, 40], { initialEnergyKwh: 500, terminal: { kind: 'cyclic' } }, { efficiencyCharge: 1, efficiencyDischarge: 1 }));
+    const s = solveDispatchDp(
+      problem(
+        [40, 40, 40, 40, 40],
+        { initialEnergyKwh: 500, terminal: { kind: 'cyclic' } },
+        { efficiencyCharge: 1, efficiencyDischarge: 1 },
+      ),
+    );
     expect(s.cost).toBe(0);
     expect(s.chargeKw.every((c) => c === 0) && s.dischargeKw.every((d) => d === 0)).toBe(true);
   });
@@ -115,12 +150,15 @@ describe('ties between optimal schedules', () => {
 describe('infeasible models', () => {
   it('names the first step whose load exceeds the import limit plus the discharge power', () => {
     const p = problem([20, 30, 40, 50], {
-      loadKw: [0, 500, 2500, 3000], site: { timezone: 'UTC', importLimitKw: 1000, exportLimitKw: null, demandChargePerKw: null },
+      loadKw: [0, 500, 2500, 3000],
+      site: { timezone: 'UTC', importLimitKw: 1000, exportLimitKw: null, demandChargePerKw: null },
       initialEnergyKwh: 1000,
     });
     const s = solveDispatchDp(p);
     expect(s.status).toBe('infeasible');
-    expect(s.message).toMatch(/^step 2 \(2026-03-02T02:00:00.000Z\): net site load 2500 kW exceeds the import limit 1000 kW plus the discharge power 1000 kW/);
+    expect(s.message).toMatch(
+      /^step 2 \(2026-03-02T02:00:00.000Z\): net site load 2500 kW exceeds the import limit 1000 kW plus the discharge power 1000 kW/,
+    );
     expect(solveWithGlpk(p).status).toBe('infeasible'); // [S] GLPK agrees
   });
 

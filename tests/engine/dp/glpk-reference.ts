@@ -37,7 +37,9 @@ export function solveWithGlpk(p: DispatchProblem, tweaks: GlpkTweaks = {}): Glpk
   const rows: Row[] = [];
   const bounds: { name: string; type: number; lb: number; ub: number }[] = [];
   const box = (name: string, lb: number, ub: number | null): void => {
-    bounds.push(ub === null ? { name, type: glpk.GLP_LO, lb, ub: 0 } : { name, type: lb === ub ? glpk.GLP_FX : glpk.GLP_DB, lb, ub });
+    bounds.push(
+      ub === null ? { name, type: glpk.GLP_LO, lb, ub: 0 } : { name, type: lb === ub ? glpk.GLP_FX : glpk.GLP_DB, lb, ub },
+    );
   };
   for (let t = 0; t < n; t++) {
     box(`c${t}`, 0, b.powerChargeKw);
@@ -63,7 +65,12 @@ export function solveWithGlpk(p: DispatchProblem, tweaks: GlpkTweaks = {}): Glpk
     const net = (p.loadKw[t] ?? 0) - (p.generationKw[t] ?? 0);
     rows.push({
       name: `bal${t}`,
-      vars: [{ name: `m${t}`, coef: 1 }, { name: `x${t}`, coef: -1 }, { name: `c${t}`, coef: -1 }, { name: `d${t}`, coef: 1 }],
+      vars: [
+        { name: `m${t}`, coef: 1 },
+        { name: `x${t}`, coef: -1 },
+        { name: `c${t}`, coef: -1 },
+        { name: `d${t}`, coef: 1 },
+      ],
       bnds: { type: glpk.GLP_FX, lb: net, ub: net },
     });
   }

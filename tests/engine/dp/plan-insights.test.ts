@@ -3,12 +3,22 @@ import { parseArgs } from '../../../server/engine/cli/cli-args';
 import { readInputs } from '../../../server/engine/cli/read-inputs';
 import { planCommand } from '../../../server/engine/cli/run-commands';
 
-const common = ['--prices', 'sample-data/prices-2026-hourly.csv', '--battery', 'sample-data/demo-battery.json', '--site', 'sample-data/demo-site.json'];
+const common = [
+  '--prices',
+  'sample-data/prices-2026-hourly.csv',
+  '--battery',
+  'sample-data/demo-battery.json',
+  '--site',
+  'sample-data/demo-site.json',
+];
 const window = ['--start', '2026-05-04T00:00:00Z', '--end', '2026-05-05T00:00:00Z', '--terminal', 'free'];
 
 function plan(extra: string[]): ReturnType<typeof planCommand> {
   const args = parseArgs(['plan', ...common, ...window, ...extra]);
-  return planCommand(readInputs(args, () => undefined), args);
+  return planCommand(
+    readInputs(args, () => undefined),
+    args,
+  );
 }
 
 describe('plan output of the command line with the exact DP', () => {

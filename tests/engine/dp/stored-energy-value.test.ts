@@ -14,7 +14,11 @@ import { randomProblem, rng, VARIANTS } from './random-problems';
  * looser than the exact test, never wrongly strict. Returns null when a
  * perturbed LP is infeasible (e.g. a cyclic end at a bound).
  */
-function lpValueInterval(p: DispatchProblem, tweak: (delta: number) => GlpkTweaks, delta: number): { low: number; high: number } | null {
+function lpValueInterval(
+  p: DispatchProblem,
+  tweak: (delta: number) => GlpkTweaks,
+  delta: number,
+): { low: number; high: number } | null {
   const c0 = solveWithGlpk(p, tweak(0));
   const up = solveWithGlpk(p, tweak(delta));
   const down = solveWithGlpk(p, tweak(-delta));

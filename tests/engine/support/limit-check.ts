@@ -32,7 +32,8 @@ export function brokenLimits(p: DispatchProblem, s: DispatchSolution): string[] 
     dischargedByDay.set(p.dayIndex[t]!, (dischargedByDay.get(p.dayIndex[t]!) ?? 0) + d * dt);
   }
   if (b.maxCyclesPerDay !== null) {
-    for (const [day, kwh] of dischargedByDay) check(kwh <= b.maxCyclesPerDay * (eMax - eMin) + tolKwh, `throughput cap on day ${day}`);
+    for (const [day, kwh] of dischargedByDay)
+      check(kwh <= b.maxCyclesPerDay * (eMax - eMin) + tolKwh, `throughput cap on day ${day}`);
   }
   const end = s.socKwh[n]!;
   if (p.terminal.kind === 'cyclic') check(Math.abs(end - s.socKwh[0]!) <= tolKwh, 'cyclic end');

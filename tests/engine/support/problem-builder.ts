@@ -23,7 +23,14 @@ export const NO_SITE: SiteParams = { timezone: 'UTC', importLimitKw: null, expor
 
 export function problem(
   prices: readonly number[],
-  options: { battery?: BatteryParams; site?: SiteParams; terminal?: TerminalRule; initialEnergyKwh?: number; loadKw?: readonly number[]; stepHours?: number } = {},
+  options: {
+    battery?: BatteryParams;
+    site?: SiteParams;
+    terminal?: TerminalRule;
+    initialEnergyKwh?: number;
+    loadKw?: readonly number[];
+    stepHours?: number;
+  } = {},
 ): DispatchProblem {
   const b = options.battery ?? battery();
   const stepHours = options.stepHours ?? 1;

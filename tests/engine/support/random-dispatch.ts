@@ -48,17 +48,27 @@ export function randomDispatchProblem(variant: ModelVariant, seed: number): Disp
   const e0 = span(emin, emax);
   const site = variant === 'site load, generation, grid limits, lower export price' || variant === 'demand charge';
   const negative = variant === 'negative prices';
-  const priceImport = Array.from({ length: n }, (_, t) => Math.round(100 * (60 + 35 * Math.sin(t / 2 + seed) + span(-20, 20) - (negative ? span(0, 120) : 0))) / 100);
+  const priceImport = Array.from(
+    { length: n },
+    (_, t) => Math.round(100 * (60 + 35 * Math.sin(t / 2 + seed) + span(-20, 20) - (negative ? span(0, 120) : 0))) / 100,
+  );
   const loadKw = Array.from({ length: n }, () => (site ? span(0, 1.5) * powerDischargeKw : 0));
   const generationKw = Array.from({ length: n }, () => (site && r() < 0.5 ? span(0, 1) * powerChargeKw : 0));
-  const priceExport = priceImport.map((p) => (variant === 'site load, generation, grid limits, lower export price' ? p - span(0, 30) : p));
+  const priceExport = priceImport.map((p) =>
+    variant === 'site load, generation, grid limits, lower export price' ? p - span(0, 30) : p,
+  );
   const peakNet = Math.max(...loadKw.map((l, t) => l - generationKw[t]!));
   const peakBack = Math.max(...generationKw.map((g, t) => g - loadKw[t]!));
   const terminal: TerminalRule =
     variant === 'cyclic end' || variant === 'free start with cyclic end (steady cycle)'
       ? { kind: 'cyclic' }
       : variant === 'end target'
-        ? { kind: 'target', socPct: Math.min(socMaxPct, (100 * Math.min(emax, e0 + 0.5 * n * stepHours * powerChargeKw * 0.8)) / energyKwh) * span(0.5, 1) }
+        ? {
+            kind: 'target',
+            socPct:
+              Math.min(socMaxPct, (100 * Math.min(emax, e0 + 0.5 * n * stepHours * powerChargeKw * 0.8)) / energyKwh) *
+              span(0.5, 1),
+          }
         : variant === 'steady-value end'
           ? { kind: 'steady-value', valuePerMwh: span(0, 120) }
           : { kind: 'free' };

@@ -44,17 +44,41 @@ export function referenceLp(p: DispatchProblem): ReferenceLp {
     cost.set(`d${t}`, (b.degradationCostPerMwh * dt) / 1000);
     rows.push({
       name: `soc${t}`,
-      terms: [[`e${t + 1}`, 1], [`e${t}`, -keep], [`c${t}`, -b.efficiencyCharge * dt], [`d${t}`, dt / b.efficiencyDischarge]],
+      terms: [
+        [`e${t + 1}`, 1],
+        [`e${t}`, -keep],
+        [`c${t}`, -b.efficiencyCharge * dt],
+        [`d${t}`, dt / b.efficiencyDischarge],
+      ],
       lo: 0,
       hi: 0,
     });
     const net = p.loadKw[t]! - p.generationKw[t]!;
-    rows.push({ name: `bal${t}`, terms: [[`m${t}`, 1], [`x${t}`, -1], [`c${t}`, -1], [`d${t}`, 1]], lo: net, hi: net });
+    rows.push({
+      name: `bal${t}`,
+      terms: [
+        [`m${t}`, 1],
+        [`x${t}`, -1],
+        [`c${t}`, -1],
+        [`d${t}`, 1],
+      ],
+      lo: net,
+      hi: net,
+    });
   }
   if (p.site.demandChargePerKw !== null) {
     box.set('peak', [0, Infinity]);
     cost.set('peak', p.site.demandChargePerKw);
-    for (let t = 0; t < n; t++) rows.push({ name: `pk${t}`, terms: [['peak', 1], [`m${t}`, -1]], lo: 0, hi: Infinity });
+    for (let t = 0; t < n; t++)
+      rows.push({
+        name: `pk${t}`,
+        terms: [
+          ['peak', 1],
+          [`m${t}`, -1],
+        ],
+        lo: 0,
+        hi: Infinity,
+      });
   }
   if (b.maxCyclesPerDay !== null) {
     for (const day of new Set(p.dayIndex)) {
@@ -63,8 +87,18 @@ export function referenceLp(p: DispatchProblem): ReferenceLp {
     }
   }
   const rule = p.terminal;
-  if (rule.kind === 'cyclic') rows.push({ name: 'end', terms: [[`e${n}`, 1], ['e0', -1]], lo: 0, hi: 0 });
-  if (rule.kind === 'target') rows.push({ name: 'end', terms: [[`e${n}`, 1]], lo: (b.energyKwh * rule.socPct) / 100, hi: Infinity });
+  if (rule.kind === 'cyclic')
+    rows.push({
+      name: 'end',
+      terms: [
+        [`e${n}`, 1],
+        ['e0', -1],
+      ],
+      lo: 0,
+      hi: 0,
+    });
+  if (rule.kind === 'target')
+    rows.push({ name: 'end', terms: [[`e${n}`, 1]], lo: (b.energyKwh * rule.socPct) / 100, hi: Infinity });
   if (rule.kind === 'steady-value') cost.set(`e${n}`, -rule.valuePerMwh / 1000);
   return { cost, box, rows };
 }
@@ -88,12 +122,21 @@ export function solveWithJsLpSolver(lp: ReferenceLp): ReferenceOutcome {
     variables[name][lo === hi ? `fix_${name}` : `box_${name}`] = 1;
   }
   for (const row of lp.rows) {
-    constraints[row.name] = row.lo === row.hi ? { equal: row.lo } : { ...(Number.isFinite(row.lo) ? { min: row.lo } : {}), ...(Number.isFinite(row.hi) ? { max: row.hi } : {}) };
+    constraints[row.name] =
+      row.lo === row.hi
+        ? { equal: row.lo }
+        : { ...(Number.isFinite(row.lo) ? { min: row.lo } : {}), ...(Number.isFinite(row.hi) ? { max: row.hi } : {}) };
     for (const [v, coef] of row.terms) variables[v]![row.name] = (variables[v]![row.name] ?? 0) + coef;
   }
   // Solve's declared return type is unknown; the fields read here are documented in its README.
-  const result = solver.Solve({ optimize: 'cost', opType: 'min', constraints, variables }) as { feasible: boolean; bounded?: boolean; result: number };
-  return result.feasible && result.bounded !== false ? { status: 'optimal', objective: result.result } : { status: 'other', objective: NaN };
+  const result = solver.Solve({ optimize: 'cost', opType: 'min', constraints, variables }) as {
+    feasible: boolean;
+    bounded?: boolean;
+    result: number;
+  };
+  return result.feasible && result.bounded !== false
+    ? { status: 'optimal', objective: result.result }
+    : { status: 'other', objective: NaN };
 }
 
 function glpkBounds(lo: number, hi: number) {
@@ -109,10 +152,16 @@ export function solveWithGlpkDirect(lp: ReferenceLp): ReferenceOutcome {
     {
       name: 'reference',
       objective: { direction: glpk.GLP_MIN, name: 'cost', vars: [...lp.cost].map(([name, coef]) => ({ name, coef })) },
-      subjectTo: lp.rows.map((row) => ({ name: row.name, vars: row.terms.map(([name, coef]) => ({ name, coef })), bnds: glpkBounds(row.lo, row.hi) })),
+      subjectTo: lp.rows.map((row) => ({
+        name: row.name,
+        vars: row.terms.map(([name, coef]) => ({ name, coef })),
+        bnds: glpkBounds(row.lo, row.hi),
+      })),
       bounds: [...lp.box].map(([name, [lo, hi]]) => ({ name, ...glpkBounds(lo, hi) })),
     },
     { msglev: glpk.GLP_MSG_OFF },
   );
-  return result.result.status === glpk.GLP_OPT ? { status: 'optimal', objective: result.result.z } : { status: 'other', objective: NaN };
+  return result.result.status === glpk.GLP_OPT
+    ? { status: 'optimal', objective: result.result.z }
+    : { status: 'other', objective: NaN };
 }

@@ -23,7 +23,10 @@ function BatteryRow({ battery }: { battery: Battery }) {
       <td className="px-3 py-2 tabular-nums">{(battery.efficiencyCharge * battery.efficiencyDischarge * 100).toFixed(1)} %</td>
       <td className="px-3 py-2">
         {battery.warnings.length > 0 ? (
-          <span className="rounded bg-amber-100 px-2 py-0.5 text-sm text-ink-900" title={battery.warnings.map((w) => w.message).join('\n')}>
+          <span
+            className="rounded bg-amber-100 px-2 py-0.5 text-sm text-ink-900"
+            title={battery.warnings.map((w) => w.message).join('\n')}
+          >
             {battery.warnings.length} to check
           </span>
         ) : (
@@ -44,12 +47,24 @@ export function BatteriesList({ siteId }: { siteId: string }) {
       <caption className="sr-only">Batteries</caption>
       <thead className="bg-ink-100 text-sm text-ink-700">
         <tr>
-          <th scope="col" className="px-3 py-2">Battery</th>
-          <th scope="col" className="px-3 py-2">Charge / discharge</th>
-          <th scope="col" className="px-3 py-2">Energy</th>
-          <th scope="col" className="px-3 py-2">SoC window</th>
-          <th scope="col" className="px-3 py-2">Round trip</th>
-          <th scope="col" className="px-3 py-2">Warnings</th>
+          <th scope="col" className="px-3 py-2">
+            Battery
+          </th>
+          <th scope="col" className="px-3 py-2">
+            Charge / discharge
+          </th>
+          <th scope="col" className="px-3 py-2">
+            Energy
+          </th>
+          <th scope="col" className="px-3 py-2">
+            SoC window
+          </th>
+          <th scope="col" className="px-3 py-2">
+            Round trip
+          </th>
+          <th scope="col" className="px-3 py-2">
+            Warnings
+          </th>
         </tr>
       </thead>
       <tbody>

@@ -13,7 +13,11 @@ export function BatteryDetails({ battery, currency }: { battery: Battery; curren
           return (
             <div key={key}>
               <dt className="text-xs uppercase tracking-wide text-ink-500">{label}</dt>
-              <dd className="font-medium tabular-nums">{value === null ? 'none' : `${value.toLocaleString(undefined, { maximumFractionDigits: 4 })} ${unit.replace('currency', currency)}`}</dd>
+              <dd className="font-medium tabular-nums">
+                {value === null
+                  ? 'none'
+                  : `${value.toLocaleString(undefined, { maximumFractionDigits: 4 })} ${unit.replace('currency', currency)}`}
+              </dd>
             </div>
           );
         })}

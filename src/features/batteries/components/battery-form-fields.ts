@@ -27,7 +27,10 @@ export const BATTERY_FIELD_GROUPS: FieldGroup[] = [
   {
     legend: 'Efficiency and losses',
     fields: [
-      { key: 'efficiencyCharge', hint: `Default √${DEFAULT_ROUND_TRIP} ≈ 0.922: ${DEFAULT_ROUND_TRIP * 100} % round trip (NREL ATB 2020).` },
+      {
+        key: 'efficiencyCharge',
+        hint: `Default √${DEFAULT_ROUND_TRIP} ≈ 0.922: ${DEFAULT_ROUND_TRIP * 100} % round trip (NREL ATB 2020).`,
+      },
       { key: 'efficiencyDischarge', hint: 'Default ≈ 0.922, as for charging.' },
       { key: 'selfDischargePctPerHour', hint: 'Lithium-ion loses a few % per month: default 0.' },
     ],

@@ -1,5 +1,11 @@
 import { useState, type FormEvent } from 'react';
-import { BATTERY_FIELD_LABELS, batterySchema, type Battery, type BatteryFields, type BatteryParams } from '@shared/schemas/battery';
+import {
+  BATTERY_FIELD_LABELS,
+  batterySchema,
+  type Battery,
+  type BatteryFields,
+  type BatteryParams,
+} from '@shared/schemas/battery';
 import { lithiumIonDefaults } from '@shared/schemas/battery-defaults';
 import { batteryWarnings, type SiteLimits } from '@shared/schemas/battery-warnings';
 import { FormActions, FormField, WarningNote, buttonClass, describedBy, inputClass } from '@/components/form-field';
@@ -39,9 +45,16 @@ export function BatteryForm({ battery, site, serverError, pending, onSubmit, onC
   const [text, setText] = useState<Text>(() => toText(battery ?? lithiumIonDefaults()));
   const [touched, setTouched] = useState(false);
   const parsed = batterySchema.safeParse(fromText(text));
-  const errors = { ...(touched && !parsed.success ? fieldErrors(parsed.error) : {}), ...(serverError ? fieldErrors(serverError) : {}) };
+  const errors = {
+    ...(touched && !parsed.success ? fieldErrors(parsed.error) : {}),
+    ...(serverError ? fieldErrors(serverError) : {}),
+  };
   const warnings = parsed.success ? batteryWarnings(parsed.data, site) : [];
-  const warningFor = (key: ParamKey) => warnings.filter((w) => w.field === key).map((w) => w.message).join(' ') || undefined;
+  const warningFor = (key: ParamKey) =>
+    warnings
+      .filter((w) => w.field === key)
+      .map((w) => w.message)
+      .join(' ') || undefined;
   const general = warnings.filter((w) => w.field === null);
   const set = (key: keyof Text, value: string) => setText((t) => ({ ...t, [key]: value }));
 
@@ -59,7 +72,14 @@ export function BatteryForm({ battery, site, serverError, pending, onSubmit, onC
     <form onSubmit={submit} noValidate className="space-y-5" aria-label={battery ? 'Edit battery' : 'New battery'}>
       <div className="max-w-md">
         <FormField id="battery-name" label="Name" error={errors.name}>
-          <input id="battery-name" className={inputClass} value={text.name} onChange={(e) => set('name', e.target.value)} aria-invalid={Boolean(errors.name)} aria-describedby={describedBy('battery-name', { error: errors.name })} />
+          <input
+            id="battery-name"
+            className={inputClass}
+            value={text.name}
+            onChange={(e) => set('name', e.target.value)}
+            aria-invalid={Boolean(errors.name)}
+            aria-describedby={describedBy('battery-name', { error: errors.name })}
+          />
         </FormField>
       </div>
       {BATTERY_FIELD_GROUPS.map((group) => (
@@ -98,7 +118,12 @@ export function BatteryForm({ battery, site, serverError, pending, onSubmit, onC
       {general.map((w) => (
         <WarningNote key={w.message} message={w.message} />
       ))}
-      <FormActions pending={pending} submitLabel={battery ? 'Save battery' : 'Add battery'} formError={errors['']} onCancel={onCancel}>
+      <FormActions
+        pending={pending}
+        submitLabel={battery ? 'Save battery' : 'Add battery'}
+        formError={errors['']}
+        onCancel={onCancel}
+      >
         <button type="button" className={buttonClass.secondary} onClick={fillDefaults}>
           Use lithium-ion defaults for this energy
         </button>

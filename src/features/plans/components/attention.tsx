@@ -38,7 +38,9 @@ export function RunningJobs() {
       ))}
       {(failed.data ?? []).slice(0, 5).map((job) => (
         <p key={job.id} className="text-sm">
-          <Link to={entityUrl(job.kind, job.entityId)} className="font-semibold text-brick-700 underline">Failed: {job.label}</Link>
+          <Link to={entityUrl(job.kind, job.entityId)} className="font-semibold text-brick-700 underline">
+            Failed: {job.label}
+          </Link>
           <span className="block text-ink-700">{job.error}</span>
         </p>
       ))}

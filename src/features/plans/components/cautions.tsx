@@ -8,7 +8,10 @@ import { SIGN_OFF_CAUTIONS } from '@shared/schemas/sign-off';
 
 export function Cautions({ warnings }: { warnings: readonly string[] }) {
   return (
-    <section aria-labelledby="cautions-heading" className="rounded-lg border border-amber-500 bg-amber-100 p-4 text-sm text-ink-900">
+    <section
+      aria-labelledby="cautions-heading"
+      className="rounded-lg border border-amber-500 bg-amber-100 p-4 text-sm text-ink-900"
+    >
       <h2 id="cautions-heading" className="font-semibold text-ink-900">
         Cautions
       </h2>

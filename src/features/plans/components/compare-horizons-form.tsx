@@ -50,7 +50,11 @@ export function CompareHorizonsForm({ base, existing }: { base: Plan; existing: 
         failures.push(`${h} h, ${r}: ${error instanceof ApiError ? (error.issues[0]?.message ?? error.message) : String(error)}`);
       }
     }
-    setMessage(failures.length ? `Some plans were not queued: ${failures.join('; ')}` : `${wanted.length} plan${wanted.length === 1 ? '' : 's'} queued.`);
+    setMessage(
+      failures.length
+        ? `Some plans were not queued: ${failures.join('; ')}`
+        : `${wanted.length} plan${wanted.length === 1 ? '' : 's'} queued.`,
+    );
   };
 
   return (
@@ -59,13 +63,24 @@ export function CompareHorizonsForm({ base, existing }: { base: Plan; existing: 
         <legend className="mb-1 font-semibold text-ink-800">Horizons (h)</legend>
         {horizonChoices.map((h) => (
           <label key={h} className={`flex items-center gap-1 ${h < windowHours ? 'text-ink-300' : ''}`}>
-            <input type="checkbox" disabled={h < windowHours} checked={horizons.includes(h)} onChange={() => setHorizons(toggle(horizons, h))} />
+            <input
+              type="checkbox"
+              disabled={h < windowHours}
+              checked={horizons.includes(h)}
+              onChange={() => setHorizons(toggle(horizons, h))}
+            />
             {h}
           </label>
         ))}
         <label className="flex items-center gap-1">
           other
-          <input className={`${inputClass} w-20`} inputMode="decimal" value={extra} onChange={(e) => setExtra(e.target.value)} aria-label="Another horizon in hours" />
+          <input
+            className={`${inputClass} w-20`}
+            inputMode="decimal"
+            value={extra}
+            onChange={(e) => setExtra(e.target.value)}
+            aria-label="Another horizon in hours"
+          />
         </label>
       </fieldset>
       <fieldset className="flex flex-wrap items-center gap-3 text-sm">
@@ -80,7 +95,11 @@ export function CompareHorizonsForm({ base, existing }: { base: Plan; existing: 
       <button type="submit" className={buttonClass.primary} disabled={create.isPending}>
         Add these plans
       </button>
-      {message && <p className="text-sm text-ink-700" role="status">{message}</p>}
+      {message && (
+        <p className="text-sm text-ink-700" role="status">
+          {message}
+        </p>
+      )}
     </form>
   );
 }

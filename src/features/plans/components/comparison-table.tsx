@@ -12,7 +12,11 @@ import { ScrollRegion } from '@/components/scroll-region';
 function longestFor(plan: Plan, plans: Plan[]): Plan | undefined {
   return plans
     .filter((p) => p.results)
-    .sort((a, b) => b.horizonHours - a.horizonHours || Number(b.terminalRule === plan.terminalRule) - Number(a.terminalRule === plan.terminalRule))[0];
+    .sort(
+      (a, b) =>
+        b.horizonHours - a.horizonHours ||
+        Number(b.terminalRule === plan.terminalRule) - Number(a.terminalRule === plan.terminalRule),
+    )[0];
 }
 
 /** Largest SoC difference over the delivery window against the longest plan, % of nameplate. */
@@ -33,8 +37,22 @@ export function ComparisonTable({ plans }: { plans: Plan[] }) {
         <caption className="sr-only">Plans of this delivery window by horizon and terminal rule</caption>
         <thead className="bg-ink-100 text-ink-700">
           <tr>
-            {['Horizon', 'Terminal rule', 'Method', 'Cost', 'Earnings', 'Near-steady', 'Entry arc', 'Leaving arc', 'Commit window', 'Max SoC gap to longest plan', 'Flags'].map((h) => (
-              <th key={h} scope="col" className="whitespace-nowrap px-2 py-1.5">{h}</th>
+            {[
+              'Horizon',
+              'Terminal rule',
+              'Method',
+              'Cost',
+              'Earnings',
+              'Near-steady',
+              'Entry arc',
+              'Leaving arc',
+              'Commit window',
+              'Max SoC gap to longest plan',
+              'Flags',
+            ].map((h) => (
+              <th key={h} scope="col" className="whitespace-nowrap px-2 py-1.5">
+                {h}
+              </th>
             ))}
           </tr>
         </thead>
@@ -45,7 +63,11 @@ export function ComparisonTable({ plans }: { plans: Plan[] }) {
             const gap = differenceToLongest(p, plans);
             return (
               <tr key={p.id} className="border-t border-ink-100 tabular-nums">
-                <td className="px-2 py-1"><Link to={`/plans/${p.id}`} className="font-semibold text-seaglass-700 underline">{p.horizonHours} h</Link></td>
+                <td className="px-2 py-1">
+                  <Link to={`/plans/${p.id}`} className="font-semibold text-seaglass-700 underline">
+                    {p.horizonHours} h
+                  </Link>
+                </td>
                 <td className="px-2 py-1">{ruleLabel(p)}</td>
                 <td className="px-2 py-1">{p.method ?? p.job?.state ?? ''}</td>
                 <td className="px-2 py-1">{formatMoney(r?.summary.cost, currency)}</td>
@@ -53,12 +75,17 @@ export function ComparisonTable({ plans }: { plans: Plan[] }) {
                 <td className="px-2 py-1">{formatPercent(r?.turnpike.nearSteadyShare)}</td>
                 <td className="px-2 py-1">{r ? formatSteps(r.turnpike.entryArcSteps, step) : '–'}</td>
                 <td className="px-2 py-1">{r ? formatSteps(r.turnpike.leavingArcSteps, step) : '–'}</td>
-                <td className="px-2 py-1">{r && r.turnpike.commitWindowSteps !== null ? formatSteps(r.turnpike.commitWindowSteps, step) : '–'}</td>
+                <td className="px-2 py-1">
+                  {r && r.turnpike.commitWindowSteps !== null ? formatSteps(r.turnpike.commitWindowSteps, step) : '–'}
+                </td>
                 <td className="px-2 py-1">{gap === null ? '–' : `${formatNumber(gap, 1)} %`}</td>
                 <td className="px-2 py-1">
                   {/* Flagged plans stand out in amber (DESIGN section 7); the flags' words are on the plan page. */}
                   {r && r.turnpike.flags.length > 0 ? (
-                    <span className="rounded bg-amber-100 px-1.5 py-0.5 font-semibold text-amber-700" title={r.turnpike.flags.join('\n')}>
+                    <span
+                      className="rounded bg-amber-100 px-1.5 py-0.5 font-semibold text-amber-700"
+                      title={r.turnpike.flags.join('\n')}
+                    >
                       {r.turnpike.flags.length} {r.turnpike.flags.length === 1 ? 'flag' : 'flags'}
                     </span>
                   ) : r ? (

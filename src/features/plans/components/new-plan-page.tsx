@@ -13,8 +13,8 @@ export function NewPlanPage() {
     <section className="max-w-4xl space-y-4">
       <h1 className="text-2xl font-semibold text-ink-900">New plan</h1>
       <p className="text-ink-700">
-        The plan is computed in the background; its page shows the progress and then the schedule, how long it stays near the steady cycle,
-        and what is safe to commit.
+        The plan is computed in the background; its page shows the progress and then the schedule, how long it stays near the
+        steady cycle, and what is safe to commit.
       </p>
       <PlanForm initial={prefillFromSearch(params)} />
     </section>

@@ -19,17 +19,33 @@ export interface PlanPrefill extends Partial<RunSource> {
 }
 
 const prefillKeys = [
-  'siteId', 'batteryId', 'priceProfileId', 'loadProfileId', 'generationProfileId',
-  'deliveryStart', 'deliveryEnd', 'horizonHours', 'terminalRule', 'initialSocPct', 'steadyDays',
+  'siteId',
+  'batteryId',
+  'priceProfileId',
+  'loadProfileId',
+  'generationProfileId',
+  'deliveryStart',
+  'deliveryEnd',
+  'horizonHours',
+  'terminalRule',
+  'initialSocPct',
+  'steadyDays',
 ] as const satisfies readonly (keyof PlanPrefill)[];
 
 /** `/plans/new?…` with everything of `plan` but the horizon. */
 export function newPlanUrl(plan: Plan, horizonHours: number): string {
   const values: PlanPrefill = {
-    siteId: plan.siteId, batteryId: plan.batteryId, priceProfileId: plan.priceProfileId,
-    loadProfileId: plan.loadProfileId ?? '', generationProfileId: plan.generationProfileId ?? '',
-    deliveryStart: plan.deliveryStart, deliveryEnd: plan.deliveryEnd, horizonHours: String(horizonHours),
-    terminalRule: plan.terminalRule, initialSocPct: String(plan.initialSocPct), steadyDays: plan.inputs?.steadyDays ?? 'all',
+    siteId: plan.siteId,
+    batteryId: plan.batteryId,
+    priceProfileId: plan.priceProfileId,
+    loadProfileId: plan.loadProfileId ?? '',
+    generationProfileId: plan.generationProfileId ?? '',
+    deliveryStart: plan.deliveryStart,
+    deliveryEnd: plan.deliveryEnd,
+    horizonHours: String(horizonHours),
+    terminalRule: plan.terminalRule,
+    initialSocPct: String(plan.initialSocPct),
+    steadyDays: plan.inputs?.steadyDays ?? 'all',
   };
   const params = new URLSearchParams();
   for (const key of prefillKeys) if (values[key]) params.set(key, values[key]);

@@ -47,7 +47,9 @@ export function PlanForm({ initial }: { initial?: PlanPrefill }) {
   const [source, setSource] = useState<RunSource>(() => runSourceOf(initial));
   const [windowEdit, setWindow] = useState<{ start: string; end: string } | null>(null);
   const [horizon, setHorizon] = useState(initial?.horizonHours ?? '');
-  const [terminal, setTerminal] = useState<{ kind: TerminalKind; targetPct: string }>(() => prefilledTerminal(initial?.terminalRule));
+  const [terminal, setTerminal] = useState<{ kind: TerminalKind; targetPct: string }>(() =>
+    prefilledTerminal(initial?.terminalRule),
+  );
   const [soc, setSoc] = useState(initial?.initialSocPct ?? '');
   const [steadyDays, setSteadyDays] = useState<SteadyDays>(() => steadyDaysOf(initial?.steadyDays));
   const [errors, setErrors] = useState<Record<string, string>>({});
@@ -99,12 +101,26 @@ export function PlanForm({ initial }: { initial?: PlanPrefill }) {
       <fieldset className="grid gap-4 sm:grid-cols-3">
         <legend className="mb-2 text-sm font-semibold text-ink-800">Delivery window ({timeZone} local time)</legend>
         <FormField id="deliveryStart" label="From" error={errors.deliveryStart}>
-          <input id="deliveryStart" type="datetime-local" className={inputClass} value={deliveryWindow.start} aria-invalid={!!errors.deliveryStart}
-            aria-describedby={describedBy('deliveryStart', { error: errors.deliveryStart })} onChange={(e) => setWindow({ ...deliveryWindow, start: e.target.value })} />
+          <input
+            id="deliveryStart"
+            type="datetime-local"
+            className={inputClass}
+            value={deliveryWindow.start}
+            aria-invalid={!!errors.deliveryStart}
+            aria-describedby={describedBy('deliveryStart', { error: errors.deliveryStart })}
+            onChange={(e) => setWindow({ ...deliveryWindow, start: e.target.value })}
+          />
         </FormField>
         <FormField id="deliveryEnd" label="To" error={errors.deliveryEnd}>
-          <input id="deliveryEnd" type="datetime-local" className={inputClass} value={deliveryWindow.end} aria-invalid={!!errors.deliveryEnd}
-            aria-describedby={describedBy('deliveryEnd', { error: errors.deliveryEnd })} onChange={(e) => setWindow({ ...deliveryWindow, end: e.target.value })} />
+          <input
+            id="deliveryEnd"
+            type="datetime-local"
+            className={inputClass}
+            value={deliveryWindow.end}
+            aria-invalid={!!errors.deliveryEnd}
+            aria-describedby={describedBy('deliveryEnd', { error: errors.deliveryEnd })}
+            onChange={(e) => setWindow({ ...deliveryWindow, end: e.target.value })}
+          />
         </FormField>
         <div className="flex items-end">
           <button type="button" className={buttonClass.secondary} onClick={() => setWindow(tomorrow(timeZone))}>
@@ -113,20 +129,59 @@ export function PlanForm({ initial }: { initial?: PlanPrefill }) {
         </div>
       </fieldset>
       <div className="grid gap-4 sm:grid-cols-3">
-        <FormField id="horizonHours" label="Horizon" unit="h" error={errors.horizonHours}
-          hint={horizonHint(siteDefault, defaultHorizon)}>
-          <input id="horizonHours" inputMode="decimal" className={inputClass} value={horizon} placeholder={defaultHorizon !== null ? String(defaultHorizon) : '48'}
-            aria-invalid={!!errors.horizonHours} aria-describedby={describedBy('horizonHours', { error: errors.horizonHours })} onChange={(e) => setHorizon(e.target.value)} />
+        <FormField
+          id="horizonHours"
+          label="Horizon"
+          unit="h"
+          error={errors.horizonHours}
+          hint={horizonHint(siteDefault, defaultHorizon)}
+        >
+          <input
+            id="horizonHours"
+            inputMode="decimal"
+            className={inputClass}
+            value={horizon}
+            placeholder={defaultHorizon !== null ? String(defaultHorizon) : '48'}
+            aria-invalid={!!errors.horizonHours}
+            aria-describedby={describedBy('horizonHours', { error: errors.horizonHours })}
+            onChange={(e) => setHorizon(e.target.value)}
+          />
         </FormField>
-        <FormField id="initialSocPct" label="Initial SoC" unit="%" error={errors.initialSocPct}
-          hint={defaults.data ? `Empty: ${formatNumber(defaults.data.initialSocPct)} %, ${sourceSoc[defaults.data.initialSocSource]}.` : undefined}>
-          <input id="initialSocPct" inputMode="decimal" className={inputClass} value={soc} placeholder={defaults.data ? String(defaults.data.initialSocPct) : ''}
-            aria-invalid={!!errors.initialSocPct} aria-describedby={describedBy('initialSocPct', { error: errors.initialSocPct })} onChange={(e) => setSoc(e.target.value)} />
+        <FormField
+          id="initialSocPct"
+          label="Initial SoC"
+          unit="%"
+          error={errors.initialSocPct}
+          hint={
+            defaults.data
+              ? `Empty: ${formatNumber(defaults.data.initialSocPct)} %, ${sourceSoc[defaults.data.initialSocSource]}.`
+              : undefined
+          }
+        >
+          <input
+            id="initialSocPct"
+            inputMode="decimal"
+            className={inputClass}
+            value={soc}
+            placeholder={defaults.data ? String(defaults.data.initialSocPct) : ''}
+            aria-invalid={!!errors.initialSocPct}
+            aria-describedby={describedBy('initialSocPct', { error: errors.initialSocPct })}
+            onChange={(e) => setSoc(e.target.value)}
+          />
         </FormField>
         <SteadyDaysField value={steadyDays} onChange={setSteadyDays} error={errors.steadyDays} />
       </div>
-      <TerminalRuleField kind={terminal.kind} targetPct={terminal.targetPct} error={errors.terminalRule} onChange={(kind, targetPct) => setTerminal({ kind, targetPct })} />
-      {errors[''] && <p role="alert" className="text-sm text-brick-700">{errors['']}</p>}
+      <TerminalRuleField
+        kind={terminal.kind}
+        targetPct={terminal.targetPct}
+        error={errors.terminalRule}
+        onChange={(kind, targetPct) => setTerminal({ kind, targetPct })}
+      />
+      {errors[''] && (
+        <p role="alert" className="text-sm text-brick-700">
+          {errors['']}
+        </p>
+      )}
       <button type="submit" className={buttonClass.primary} disabled={create.isPending}>
         {create.isPending ? 'Queuing…' : 'Make the plan'}
       </button>

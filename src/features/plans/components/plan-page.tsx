@@ -32,12 +32,18 @@ const socSource: Record<string, string> = {
 function PlanFacts({ plan }: { plan: Plan }) {
   const tz = plan.inputs?.site.timezone ?? 'UTC';
   const facts: [string, string][] = [
-    ['Delivery window', `${formatLocalTime(Date.parse(plan.deliveryStart), tz)} – ${formatLocalTime(Date.parse(plan.deliveryEnd), tz)}`],
+    [
+      'Delivery window',
+      `${formatLocalTime(Date.parse(plan.deliveryStart), tz)} – ${formatLocalTime(Date.parse(plan.deliveryEnd), tz)}`,
+    ],
     ['Horizon', `${plan.horizonHours} h`],
     ['Terminal rule', describeTerminalRule(plan.terminalRule)],
     ['Initial SoC', `${formatNumber(plan.initialSocPct, 1)} % (${socSource[plan.inputs?.initialSocSource ?? 'request'] ?? ''})`],
     ['Steady-cycle days', steadyDaysLabels[plan.inputs?.steadyDays ?? 'all']],
-    ['Method', plan.method === 'dp' ? 'exact dynamic program (fast path)' : plan.method === 'lp' ? 'linear program' : 'not computed yet'],
+    [
+      'Method',
+      plan.method === 'dp' ? 'exact dynamic program (fast path)' : plan.method === 'lp' ? 'linear program' : 'not computed yet',
+    ],
     ['Status', plan.status],
   ];
   return <FactList rows={facts} />;
@@ -63,7 +69,8 @@ export function PlanPage({ signOff }: { signOff?: (planId: string) => ReactNode 
   const { id = '' } = useParams();
   const query = usePlan(id);
   if (query.isPending) return <LoadingState label="Loading the plan…" />;
-  if (query.isError) return <ErrorState error={query.error} onRetry={() => void query.refetch()} title="The plan could not be loaded." />;
+  if (query.isError)
+    return <ErrorState error={query.error} onRetry={() => void query.refetch()} title="The plan could not be loaded." />;
   const plan = query.data;
   const inputs = plan.inputs;
   const tz = inputs?.site.timezone ?? 'UTC';
@@ -74,7 +81,10 @@ export function PlanPage({ signOff }: { signOff?: (planId: string) => ReactNode 
     <article className="space-y-6">
       <header className="space-y-3">
         <p className="text-sm text-ink-500">
-          <Link to="/plans" className="underline">Plans</Link> / {plan.siteName}
+          <Link to="/plans" className="underline">
+            Plans
+          </Link>{' '}
+          / {plan.siteName}
         </p>
         <h1 className="text-2xl font-semibold text-ink-900">
           Plan for {plan.batteryName ?? 'the battery'} at {plan.siteName ?? 'the site'}
@@ -99,11 +109,19 @@ export function PlanPage({ signOff }: { signOff?: (planId: string) => ReactNode 
             <h2 id="charts-heading" className="sr-only">
               Charts
             </h2>
-            <LazyPlanCharts results={plan.results} timeZone={tz} currency={currency} energyKwh={energyKwh} usableKwh={usableKwh} />
+            <LazyPlanCharts
+              results={plan.results}
+              timeZone={tz}
+              currency={currency}
+              energyKwh={energyKwh}
+              usableKwh={usableKwh}
+            />
           </section>
           {inputs && <HorizonPreviewSection plan={plan} inputs={inputs} results={plan.results} />}
           <section aria-labelledby="schedule-heading" className="space-y-2">
-            <h2 id="schedule-heading" className="text-lg font-semibold text-ink-900">Schedule</h2>
+            <h2 id="schedule-heading" className="text-lg font-semibold text-ink-900">
+              Schedule
+            </h2>
             <ScheduleTable results={plan.results} timeZone={tz} currency={currency} energyKwh={energyKwh} />
           </section>
         </>

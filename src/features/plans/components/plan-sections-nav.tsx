@@ -12,7 +12,10 @@ export interface PlanSection {
 
 export function PlanSectionsNav({ sections }: { sections: readonly PlanSection[] }) {
   return (
-    <nav aria-label="On this page" className="sticky top-0 z-10 -mx-2 border-b border-ink-100 bg-ink-50/95 px-2 py-2 backdrop-blur">
+    <nav
+      aria-label="On this page"
+      className="sticky top-0 z-10 -mx-2 border-b border-ink-100 bg-ink-50/95 px-2 py-2 backdrop-blur"
+    >
       <ul className="flex flex-wrap gap-x-4 gap-y-1 text-sm">
         {sections.map((section) => (
           <li key={section.id}>

@@ -18,9 +18,17 @@ export function PlanSummaryCard({ results, currency }: { results: PlanResults; c
     <dl className="grid gap-3 sm:grid-cols-2 lg:grid-cols-5">
       <Figure label="Cost" value={formatMoney(s.cost, currency)} note="paid over the delivery window (negative: net earnings)" />
       <Figure label="Earnings" value={formatMoney(s.earnings, currency)} note="against the same site without the battery" />
-      <Figure label="Equivalent cycles" value={formatNumber(s.equivalentCycles, 2)} note={`${formatNumber(s.dischargedKwh, 0)} kWh discharged`} />
+      <Figure
+        label="Equivalent cycles"
+        value={formatNumber(s.equivalentCycles, 2)}
+        note={`${formatNumber(s.dischargedKwh, 0)} kWh discharged`}
+      />
       <Figure label="Peak import" value={`${formatNumber(s.peakImportKw, 0)} kW`} />
-      <Figure label="End SoC" value={`${formatNumber(s.endSocPct, 1)} %`} note={results.steadyCycle ? `steady cycle: ${formatMoney(results.steadyCycle.costPerDay, currency)} per day` : undefined} />
+      <Figure
+        label="End SoC"
+        value={`${formatNumber(s.endSocPct, 1)} %`}
+        note={results.steadyCycle ? `steady cycle: ${formatMoney(results.steadyCycle.costPerDay, currency)} per day` : undefined}
+      />
     </dl>
   );
 }

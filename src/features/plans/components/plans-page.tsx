@@ -31,7 +31,10 @@ export function PlansPage() {
       <div className="flex flex-wrap items-center justify-between gap-3">
         <h1 className="text-2xl font-semibold text-ink-900">Plans</h1>
         {canPlan && (
-          <Link to="/plans/new" className="rounded bg-seaglass-700 px-4 py-2 text-sm font-semibold text-white hover:bg-seaglass-800">
+          <Link
+            to="/plans/new"
+            className="rounded bg-seaglass-700 px-4 py-2 text-sm font-semibold text-white hover:bg-seaglass-800"
+          >
             New plan
           </Link>
         )}
@@ -42,14 +45,22 @@ export function PlansPage() {
           Status
           <select className={inputClass} value={filters.status ?? ''} onChange={(e) => setFilter('status', e.target.value)}>
             <option value="">Any status</option>
-            {planStatuses.map((s) => <option key={s} value={s}>{s}</option>)}
+            {planStatuses.map((s) => (
+              <option key={s} value={s}>
+                {s}
+              </option>
+            ))}
           </select>
         </label>
         <label className="text-sm">
           Computation
           <select className={inputClass} value={filters.jobState ?? ''} onChange={(e) => setFilter('jobState', e.target.value)}>
             <option value="">Any</option>
-            {jobStates.map((s) => <option key={s} value={s}>{s === 'active' ? 'queued or running' : s}</option>)}
+            {jobStates.map((s) => (
+              <option key={s} value={s}>
+                {s === 'active' ? 'queued or running' : s}
+              </option>
+            ))}
           </select>
         </label>
       </div>

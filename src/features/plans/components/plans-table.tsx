@@ -13,19 +13,27 @@ export function PlansTable({ plans }: { plans: Plan[] }) {
       <table className="w-full rounded bg-white text-left text-sm shadow-sm">
         <thead className="bg-ink-100 text-ink-700">
           <tr>
-            {['Battery', 'Delivery (site time)', 'Horizon', 'Rule', 'Status', 'Computation', 'Cost', 'Near-steady', 'Flags'].map((h) => (
-              <th key={h} scope="col" className="whitespace-nowrap px-2 py-1.5">{h}</th>
-            ))}
+            {['Battery', 'Delivery (site time)', 'Horizon', 'Rule', 'Status', 'Computation', 'Cost', 'Near-steady', 'Flags'].map(
+              (h) => (
+                <th key={h} scope="col" className="whitespace-nowrap px-2 py-1.5">
+                  {h}
+                </th>
+              ),
+            )}
           </tr>
         </thead>
         <tbody>
           {plans.map((p) => (
             <tr key={p.id} className="border-t border-ink-100 tabular-nums">
               <td className="px-2 py-1">
-                <Link to={`/plans/${p.id}`} className="font-semibold text-seaglass-700 underline">{p.batteryName ?? 'battery'}</Link>
+                <Link to={`/plans/${p.id}`} className="font-semibold text-seaglass-700 underline">
+                  {p.batteryName ?? 'battery'}
+                </Link>
                 <span className="block text-xs text-ink-500">{p.siteName}</span>
               </td>
-              <td className="whitespace-nowrap px-2 py-1">{local(p.deliveryStart, p.siteId)} – {local(p.deliveryEnd, p.siteId)}</td>
+              <td className="whitespace-nowrap px-2 py-1">
+                {local(p.deliveryStart, p.siteId)} – {local(p.deliveryEnd, p.siteId)}
+              </td>
               <td className="px-2 py-1">{p.horizonHours} h</td>
               <td className="px-2 py-1">{p.terminalRule}</td>
               <td className="px-2 py-1">{p.status}</td>
@@ -35,7 +43,9 @@ export function PlansTable({ plans }: { plans: Plan[] }) {
               </td>
               <td className="px-2 py-1">{formatMoney(p.headline?.cost, '')}</td>
               <td className="px-2 py-1">{formatPercent(p.headline?.nearSteadyShare)}</td>
-              <td className={`px-2 py-1 ${p.headline?.flags ? 'font-semibold text-amber-700' : ''}`}>{p.headline ? p.headline.flags : '–'}</td>
+              <td className={`px-2 py-1 ${p.headline?.flags ? 'font-semibold text-amber-700' : ''}`}>
+                {p.headline ? p.headline.flags : '–'}
+              </td>
             </tr>
           ))}
         </tbody>

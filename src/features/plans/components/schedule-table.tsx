@@ -3,7 +3,13 @@
  * step, delivery window first, lookahead rows faded (TanStack Table v9).
  */
 import { useMemo } from 'react';
-import { createColumnHelper, createPaginatedRowModel, rowPaginationFeature, tableFeatures, useTable } from '@tanstack/react-table';
+import {
+  createColumnHelper,
+  createPaginatedRowModel,
+  rowPaginationFeature,
+  tableFeatures,
+  useTable,
+} from '@tanstack/react-table';
 import type { PlanResults, PlanStep } from '@shared/schemas/plan';
 import { buttonClass } from '@/components/form-field';
 import { formatLocalTime, formatNumber } from '@/lib/format';
@@ -12,35 +18,69 @@ import { ScrollRegion } from '@/components/scroll-region';
 const features = tableFeatures({ rowPaginationFeature, paginatedRowModel: createPaginatedRowModel() });
 const helper = createColumnHelper<typeof features, PlanStep>();
 
-const arcWords: Record<PlanStep['arc'], string> = { entry: 'entry arc', near: 'near steady', leaving: 'leaving arc', outside: 'off the band' };
+const arcWords: Record<PlanStep['arc'], string> = {
+  entry: 'entry arc',
+  near: 'near steady',
+  leaving: 'leaving arc',
+  outside: 'off the band',
+};
 
-export function ScheduleTable({ results, timeZone, currency, energyKwh }: { results: PlanResults; timeZone: string; currency: string; energyKwh: number }) {
+export function ScheduleTable({
+  results,
+  timeZone,
+  currency,
+  energyKwh,
+}: {
+  results: PlanResults;
+  timeZone: string;
+  currency: string;
+  energyKwh: number;
+}) {
   const columns = useMemo(
     () =>
       helper.columns([
-        helper.accessor('time', { header: `Start (${timeZone})`, cell: (i) => formatLocalTime(Date.parse(i.getValue()), timeZone) }),
+        helper.accessor('time', {
+          header: `Start (${timeZone})`,
+          cell: (i) => formatLocalTime(Date.parse(i.getValue()), timeZone),
+        }),
         helper.accessor('delivery', { header: 'Part', cell: (i) => (i.getValue() ? 'delivery' : 'lookahead') }),
         helper.accessor('priceImport', { header: `Price ${currency}/MWh`, cell: (i) => formatNumber(i.getValue(), 2) }),
         helper.accessor('chargeKw', { header: 'Charge kW', cell: (i) => formatNumber(i.getValue(), 1) }),
         helper.accessor('dischargeKw', { header: 'Discharge kW', cell: (i) => formatNumber(i.getValue(), 1) }),
         helper.accessor('socKwh', { header: 'SoC kWh (end)', cell: (i) => formatNumber(i.getValue(), 1) }),
         helper.accessor('socPct', { header: 'SoC %', cell: (i) => formatNumber(i.getValue(), 1) }),
-        helper.accessor('steadySocKwh', { header: 'Steady SoC %', cell: (i) => formatNumber(i.getValue() === null ? null : (i.getValue()! / energyKwh) * 100, 1) }),
+        helper.accessor('steadySocKwh', {
+          header: 'Steady SoC %',
+          cell: (i) => formatNumber(i.getValue() === null ? null : (i.getValue()! / energyKwh) * 100, 1),
+        }),
         helper.accessor('gridImportKw', { header: 'Import kW', cell: (i) => formatNumber(i.getValue(), 1) }),
         helper.accessor('gridExportKw', { header: 'Export kW', cell: (i) => formatNumber(i.getValue(), 1) }),
-        helper.accessor('storedEnergyValue', { header: `Stored-energy value ${currency}/MWh`, cell: (i) => formatNumber(i.getValue(), 2) }),
-        helper.accessor('distance', { header: 'Distance % usable', cell: (i) => formatNumber(i.getValue() === null ? null : i.getValue()! * 100, 1) }),
+        helper.accessor('storedEnergyValue', {
+          header: `Stored-energy value ${currency}/MWh`,
+          cell: (i) => formatNumber(i.getValue(), 2),
+        }),
+        helper.accessor('distance', {
+          header: 'Distance % usable',
+          cell: (i) => formatNumber(i.getValue() === null ? null : i.getValue()! * 100, 1),
+        }),
         helper.accessor('arc', { header: 'Arc', cell: (i) => arcWords[i.getValue()] }),
       ]),
     [timeZone, currency, energyKwh],
   );
-  const table = useTable({ features, columns, data: results.steps, initialState: { pagination: { pageIndex: 0, pageSize: Math.min(96, Math.max(24, results.deliverySteps)) } } });
+  const table = useTable({
+    features,
+    columns,
+    data: results.steps,
+    initialState: { pagination: { pageIndex: 0, pageSize: Math.min(96, Math.max(24, results.deliverySteps)) } },
+  });
   const { pageIndex } = table.state.pagination;
   return (
     <div className="space-y-2">
       <ScrollRegion label="Schedule table (scrolls sideways)">
         <table className="w-full rounded bg-white text-left text-sm shadow-sm">
-          <caption className="sr-only">Schedule, one row per step; page {pageIndex + 1} of {table.getPageCount()}</caption>
+          <caption className="sr-only">
+            Schedule, one row per step; page {pageIndex + 1} of {table.getPageCount()}
+          </caption>
           <thead className="bg-ink-100 text-ink-700">
             {table.getHeaderGroups().map((group) => (
               <tr key={group.id}>
@@ -69,13 +109,23 @@ export function ScheduleTable({ results, timeZone, currency, energyKwh }: { resu
         </table>
       </ScrollRegion>
       <nav aria-label="Pages of the schedule" className="flex items-center gap-2 text-sm">
-        <button type="button" className={buttonClass.secondary} onClick={() => table.previousPage()} disabled={!table.getCanPreviousPage()}>
+        <button
+          type="button"
+          className={buttonClass.secondary}
+          onClick={() => table.previousPage()}
+          disabled={!table.getCanPreviousPage()}
+        >
           Previous
         </button>
         <span>
           Page {pageIndex + 1} of {table.getPageCount()}
         </span>
-        <button type="button" className={buttonClass.secondary} onClick={() => table.nextPage()} disabled={!table.getCanNextPage()}>
+        <button
+          type="button"
+          className={buttonClass.secondary}
+          onClick={() => table.nextPage()}
+          disabled={!table.getCanNextPage()}
+        >
           Next
         </button>
       </nav>

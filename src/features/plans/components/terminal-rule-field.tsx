@@ -42,7 +42,13 @@ export function TerminalRuleField({ kind, targetPct, onChange, error }: Props) {
       </FormField>
       {kind === 'target' && (
         <FormField id="targetPct" label="End SoC at least" unit="%">
-          <input id="targetPct" inputMode="decimal" className={inputClass} value={targetPct} onChange={(e) => onChange(kind, e.target.value)} />
+          <input
+            id="targetPct"
+            inputMode="decimal"
+            className={inputClass}
+            value={targetPct}
+            onChange={(e) => onChange(kind, e.target.value)}
+          />
         </FormField>
       )}
     </div>

@@ -11,13 +11,25 @@ export function TurnpikePanel({ results }: { results: PlanResults }) {
   const tp = results.turnpike;
   const step = results.stepMinutes;
   const rows: [string, string][] = [
-    ['Near-steady share', `${formatPercent(tp.nearSteadyShare)} of the steps within ${tp.bandPct} % of usable energy (${tp.bandKwh.toFixed(0)} kWh) of the steady cycle`],
-    ['Entry arc', tp.entryArcSteps > 0 ? `the first ${formatSteps(tp.entryArcSteps, step)}` : 'none: the plan starts on the steady cycle'],
+    [
+      'Near-steady share',
+      `${formatPercent(tp.nearSteadyShare)} of the steps within ${tp.bandPct} % of usable energy (${tp.bandKwh.toFixed(0)} kWh) of the steady cycle`,
+    ],
+    [
+      'Entry arc',
+      tp.entryArcSteps > 0 ? `the first ${formatSteps(tp.entryArcSteps, step)}` : 'none: the plan starts on the steady cycle',
+    ],
     ['Leaving arc', tp.leavingArcSteps > 0 ? `the last ${formatSteps(tp.leavingArcSteps, step)}` : 'none'],
-    ['Commit window', tp.commitWindowSteps === null ? 'not checked (no longer lookahead available)' : `${formatSteps(tp.commitWindowSteps, step)} agree with a ${tp.longerLookaheadHours ?? '?'} h lookahead`],
+    [
+      'Commit window',
+      tp.commitWindowSteps === null
+        ? 'not checked (no longer lookahead available)'
+        : `${formatSteps(tp.commitWindowSteps, step)} agree with a ${tp.longerLookaheadHours ?? '?'} h lookahead`,
+    ],
     ['Stored-energy value', `near its steady value in ${formatPercent(tp.value.nearSteadyShare)} of the comparable steps`],
   ];
-  if (results.decisionHorizonHours !== null) rows.push(['Decision horizon', `delivery decisions depend on prices at most ${results.decisionHorizonHours} h ahead`]);
+  if (results.decisionHorizonHours !== null)
+    rows.push(['Decision horizon', `delivery decisions depend on prices at most ${results.decisionHorizonHours} h ahead`]);
   return (
     <section aria-labelledby="turnpike-heading" className="space-y-3 rounded-lg border border-ink-100 bg-white p-5 shadow-sm">
       <h2 id="turnpike-heading" className="text-lg font-semibold text-ink-900">

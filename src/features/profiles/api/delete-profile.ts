@@ -2,7 +2,8 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
 
 /** 409 with the reason (and the plans) when a submitted or approved plan rests on the profile. */
-export const deleteProfile = ({ id }: { id: string; siteId: string }) => api.delete<void>(`/api/profiles/${encodeURIComponent(id)}`);
+export const deleteProfile = ({ id }: { id: string; siteId: string }) =>
+  api.delete<void>(`/api/profiles/${encodeURIComponent(id)}`);
 
 export function useDeleteProfile() {
   const queryClient = useQueryClient();

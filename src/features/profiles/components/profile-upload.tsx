@@ -41,7 +41,12 @@ export function ProfileUpload({ siteId, timezone, currency }: ProfileUploadProps
     accept: ACCEPT,
     multiple: false,
     maxSize: MAX_PROFILE_UPLOAD_BYTES,
-    getErrorMessage: (error) => (error.code === 'file-too-large' ? 'the file is larger than 20 MB' : error.code === 'file-invalid-type' ? 'only .csv or .txt files are accepted' : error.message),
+    getErrorMessage: (error) =>
+      error.code === 'file-too-large'
+        ? 'the file is larger than 20 MB'
+        : error.code === 'file-invalid-type'
+          ? 'only .csv or .txt files are accepted'
+          : error.message,
   });
 
   const chooseKind = (next: ProfileKind) => {
@@ -79,25 +84,48 @@ export function ProfileUpload({ siteId, timezone, currency }: ProfileUploadProps
           {file ? ` ${(file.size / 1024).toFixed(1)} kB chosen.` : ''}
         </p>
       </div>
-      {rejection && <p role="alert" className="text-sm text-brick-700">{rejection}</p>}
+      {rejection && (
+        <p role="alert" className="text-sm text-brick-700">
+          {rejection}
+        </p>
+      )}
 
       <div className="grid gap-4 sm:grid-cols-3">
         <FormField id="profile-kind" label="Kind">
-          <select id="profile-kind" className={inputClass} value={kind} onChange={(e) => chooseKind(e.target.value as ProfileKind)}>
+          <select
+            id="profile-kind"
+            className={inputClass}
+            value={kind}
+            onChange={(e) => chooseKind(e.target.value as ProfileKind)}
+          >
             {PROFILE_KINDS.map((k) => (
-              <option key={k} value={k}>{KIND_LABELS[k]}</option>
+              <option key={k} value={k}>
+                {KIND_LABELS[k]}
+              </option>
             ))}
           </select>
         </FormField>
-        <FormField id="profile-unit" label="Unit in the file" hint={kind === 'price' ? undefined : 'kWh or MWh = energy per interval, stored as average kW.'}>
+        <FormField
+          id="profile-unit"
+          label="Unit in the file"
+          hint={kind === 'price' ? undefined : 'kWh or MWh = energy per interval, stored as average kW.'}
+        >
           <select id="profile-unit" className={inputClass} value={unit} onChange={(e) => setUnit(e.target.value)}>
             {ACCEPTED_UNITS[kind].map((u) => (
-              <option key={u} value={u}>{u.replace('currency', currency)}</option>
+              <option key={u} value={u}>
+                {u.replace('currency', currency)}
+              </option>
             ))}
           </select>
         </FormField>
         <FormField id="profile-name" label="Name (optional)" hint="Defaults to the file name.">
-          <input id="profile-name" className={inputClass} value={name} maxLength={120} onChange={(e) => setName(e.target.value)} />
+          <input
+            id="profile-name"
+            className={inputClass}
+            value={name}
+            maxLength={120}
+            onChange={(e) => setName(e.target.value)}
+          />
         </FormField>
       </div>
       <div className="flex flex-wrap gap-6 text-sm">
@@ -119,16 +147,23 @@ export function ProfileUpload({ siteId, timezone, currency }: ProfileUploadProps
       {upload.isSuccess && (
         <p role="status" className="rounded bg-seaglass-100 px-3 py-2">
           Stored “{upload.data.name}”: {upload.data.valueCount.toLocaleString()} intervals.{' '}
-          <Link className="font-medium text-seaglass-700 underline" to={`/profiles/${upload.data.id}`}>Open it</Link>
+          <Link className="font-medium text-seaglass-700 underline" to={`/profiles/${upload.data.id}`}>
+            Open it
+          </Link>
         </p>
       )}
-      {upload.isError && (
-        serverError && serverError.issues.length > 0 ? (
-          <UploadIssuesTable title={`The server refused the file: ${serverError.message}`} issues={serverError.issues} hint={hint} />
+      {upload.isError &&
+        (serverError && serverError.issues.length > 0 ? (
+          <UploadIssuesTable
+            title={`The server refused the file: ${serverError.message}`}
+            issues={serverError.issues}
+            hint={hint}
+          />
         ) : (
-          <p role="alert" className="text-brick-700">{upload.error.message}</p>
-        )
-      )}
+          <p role="alert" className="text-brick-700">
+            {upload.error.message}
+          </p>
+        ))}
     </form>
   );
 }

@@ -1,6 +1,12 @@
 /** The numbers behind the chart, paged (TanStack Table v9: useTable, tableFeatures, table.FlexRender). */
 import { useMemo } from 'react';
-import { createColumnHelper, createPaginatedRowModel, rowPaginationFeature, tableFeatures, useTable } from '@tanstack/react-table';
+import {
+  createColumnHelper,
+  createPaginatedRowModel,
+  rowPaginationFeature,
+  tableFeatures,
+  useTable,
+} from '@tanstack/react-table';
 import { buttonClass, compactSelect } from '@/components/form-field';
 import { formatLocalTime, formatNumber } from '@/lib/format';
 
@@ -27,13 +33,21 @@ export interface ProfileValuesTableProps {
 export function ProfileValuesTable({ startMs, stepMinutes, values, filledIndexes, timeZone, unit }: ProfileValuesTableProps) {
   const data = useMemo(() => {
     const filled = new Set(filledIndexes);
-    return values.map((value, index) => ({ index, startMs: startMs + index * stepMinutes * 60_000, value, filled: filled.has(index) }));
+    return values.map((value, index) => ({
+      index,
+      startMs: startMs + index * stepMinutes * 60_000,
+      value,
+      filled: filled.has(index),
+    }));
   }, [startMs, stepMinutes, values, filledIndexes]);
   const columns = useMemo(
     () =>
       helper.columns([
         helper.accessor('index', { header: '#', cell: (info) => info.getValue() + 1 }),
-        helper.accessor('startMs', { header: `Interval start (${timeZone})`, cell: (info) => formatLocalTime(info.getValue(), timeZone) }),
+        helper.accessor('startMs', {
+          header: `Interval start (${timeZone})`,
+          cell: (info) => formatLocalTime(info.getValue(), timeZone),
+        }),
         helper.accessor('value', { header: unit, cell: (info) => formatNumber(info.getValue(), 4) }),
         helper.accessor('filled', { header: 'Filled', cell: (info) => (info.getValue() ? 'interpolated' : '') }),
       ]),
@@ -45,7 +59,9 @@ export function ProfileValuesTable({ startMs, stepMinutes, values, filledIndexes
   return (
     <div className="space-y-2">
       <table className="w-full rounded bg-white text-left text-sm shadow-sm">
-        <caption className="sr-only">Values, page {pageIndex + 1} of {table.getPageCount()}</caption>
+        <caption className="sr-only">
+          Values, page {pageIndex + 1} of {table.getPageCount()}
+        </caption>
         <thead className="bg-ink-100 text-ink-700">
           {table.getHeaderGroups().map((group) => (
             <tr key={group.id}>
@@ -70,18 +86,48 @@ export function ProfileValuesTable({ startMs, stepMinutes, values, filledIndexes
         </tbody>
       </table>
       <nav aria-label="Pages of values" className="flex flex-wrap items-center gap-2 text-sm">
-        <button type="button" className={buttonClass.secondary} onClick={() => table.firstPage()} disabled={!table.getCanPreviousPage()}>First</button>
-        <button type="button" className={buttonClass.secondary} onClick={() => table.previousPage()} disabled={!table.getCanPreviousPage()}>Previous</button>
+        <button
+          type="button"
+          className={buttonClass.secondary}
+          onClick={() => table.firstPage()}
+          disabled={!table.getCanPreviousPage()}
+        >
+          First
+        </button>
+        <button
+          type="button"
+          className={buttonClass.secondary}
+          onClick={() => table.previousPage()}
+          disabled={!table.getCanPreviousPage()}
+        >
+          Previous
+        </button>
         <span>
           Page {pageIndex + 1} of {table.getPageCount().toLocaleString()}
         </span>
-        <button type="button" className={buttonClass.secondary} onClick={() => table.nextPage()} disabled={!table.getCanNextPage()}>Next</button>
-        <button type="button" className={buttonClass.secondary} onClick={() => table.lastPage()} disabled={!table.getCanNextPage()}>Last</button>
+        <button
+          type="button"
+          className={buttonClass.secondary}
+          onClick={() => table.nextPage()}
+          disabled={!table.getCanNextPage()}
+        >
+          Next
+        </button>
+        <button
+          type="button"
+          className={buttonClass.secondary}
+          onClick={() => table.lastPage()}
+          disabled={!table.getCanNextPage()}
+        >
+          Last
+        </button>
         <label className="ml-4 flex items-center gap-2">
           Rows per page
           <select className={compactSelect} value={pageSize} onChange={(e) => table.setPageSize(Number(e.target.value))}>
             {PAGE_SIZES.map((size) => (
-              <option key={size} value={size}>{size}</option>
+              <option key={size} value={size}>
+                {size}
+              </option>
             ))}
           </select>
         </label>

@@ -27,8 +27,14 @@ export default function SeriesChart({ points, timeZone, unit, label, height = 26
   return (
     // The page titles the chart; the caption names it for screen readers.
     <ChartFigure hideCaption caption={`${label} in ${unit}; the numbers are in the table below.`}>
-      <ChartPlot height={height} gridTicks={5} theme={theme} xScale={{ type: 'time' }} yScale={{ type: 'linear', nice: true, zero: false }}
-        accessibilityLabel={`${label}, ${unit}, ${points.length} points`}>
+      <ChartPlot
+        height={height}
+        gridTicks={5}
+        theme={theme}
+        xScale={{ type: 'time' }}
+        yScale={{ type: 'linear', nice: true, zero: false }}
+        accessibilityLabel={`${label}, ${unit}, ${points.length} points`}
+      >
         <Axis orientation="bottom" numTicks={6} tickFormat={tickDate} />
         <Axis orientation="left" numTicks={5} label={unit} tickFormat={(v: number) => formatNumber(v, 1)} />
         <LineSeries dataKey={label} data={points} {...accessors} />

@@ -11,8 +11,12 @@ export function UploadIssuesTable({ title, issues, hint }: { title: string; issu
       <table className="w-full text-left text-sm">
         <thead className="text-ink-700">
           <tr>
-            <th scope="col" className="w-20 px-3 py-1.5">Line</th>
-            <th scope="col" className="px-3 py-1.5">Problem</th>
+            <th scope="col" className="w-20 px-3 py-1.5">
+              Line
+            </th>
+            <th scope="col" className="px-3 py-1.5">
+              Problem
+            </th>
           </tr>
         </thead>
         <tbody>

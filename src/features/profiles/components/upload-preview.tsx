@@ -7,8 +7,18 @@ import { UploadIssuesTable } from './upload-issues-table';
 
 export function UploadPreview({ state, timezone, currency }: { state: PreviewState; timezone: string; currency: string }) {
   if (state.status === 'idle') return null;
-  if (state.status === 'working') return <p role="status" className="text-ink-500">Reading the file…</p>;
-  if (state.status === 'failed-to-read') return <p role="alert" className="text-brick-700">The browser could not read the file: {state.message}</p>;
+  if (state.status === 'working')
+    return (
+      <p role="status" className="text-ink-500">
+        Reading the file…
+      </p>
+    );
+  if (state.status === 'failed-to-read')
+    return (
+      <p role="alert" className="text-brick-700">
+        The browser could not read the file: {state.message}
+      </p>
+    );
 
   const { firstLines, result } = state;
   return (
@@ -17,8 +27,14 @@ export function UploadPreview({ state, timezone, currency }: { state: PreviewSta
         <h3 className="text-sm font-semibold text-ink-700">First lines of the file</h3>
         <pre className="mt-1 max-h-40 overflow-auto rounded bg-ink-900 p-2 text-xs text-ink-50">{firstLines.join('\n')}</pre>
       </div>
-      {result.ok ? <AcceptedPreview profile={result.profile} timezone={timezone} currency={currency} /> : (
-        <UploadIssuesTable title={`The preview found ${result.issues.length === 1 ? 'a problem' : `${result.issues.length} problems`}`} issues={result.issues} hint={result.hint} />
+      {result.ok ? (
+        <AcceptedPreview profile={result.profile} timezone={timezone} currency={currency} />
+      ) : (
+        <UploadIssuesTable
+          title={`The preview found ${result.issues.length === 1 ? 'a problem' : `${result.issues.length} problems`}`}
+          issues={result.issues}
+          hint={result.hint}
+        />
       )}
     </section>
   );
@@ -56,7 +72,13 @@ function AcceptedPreview({ profile, timezone, currency }: { profile: Accepted; t
           </div>
         ))}
       </dl>
-      <LazySeriesChart points={downsampleMinMax(profile.startMs, stepMs, profile.values, 400)} timeZone={timezone} unit={unit} label="Preview" height={160} />
+      <LazySeriesChart
+        points={downsampleMinMax(profile.startMs, stepMs, profile.values, 400)}
+        timeZone={timezone}
+        unit={unit}
+        label="Preview"
+        height={160}
+      />
       <details>
         <summary className="cursor-pointer text-sm font-medium text-ink-700">What was detected and done</summary>
         <ul className="mt-1 list-disc pl-5 text-sm text-ink-700">

@@ -31,7 +31,9 @@ export function useProfilePreview(file: File | null, options: PreviewOptions, ti
       const { id, ...rest } = event.data;
       if (id === lastId.current) setState(rest);
     });
-    w.addEventListener('error', (event) => setState({ status: 'failed-to-read', message: `The preview could not run: ${event.message}` }));
+    w.addEventListener('error', (event) =>
+      setState({ status: 'failed-to-read', message: `The preview could not run: ${event.message}` }),
+    );
     worker.current = w;
     return () => {
       w.terminate();

@@ -23,7 +23,8 @@ export function downsampleMinMax(startMs: number, stepMs: number, values: readon
       if ((values[i] ?? 0) < (values[lo] ?? 0)) lo = i;
       if ((values[i] ?? 0) > (values[hi] ?? 0)) hi = i;
     }
-    for (const i of lo === hi ? [lo] : [Math.min(lo, hi), Math.max(lo, hi)]) out.push({ t: startMs + i * stepMs, v: values[i] ?? 0 });
+    for (const i of lo === hi ? [lo] : [Math.min(lo, hi), Math.max(lo, hi)])
+      out.push({ t: startMs + i * stepMs, v: values[i] ?? 0 });
   }
   return out;
 }

@@ -11,7 +11,8 @@ const answer = (response: ParseResponse) => self.postMessage(response);
 // The last file's text, so changing the kind or unit does not read and decode it again.
 let cached: { file: File; text: Promise<string> } | null = null;
 const textOf = (file: File) => {
-  if (cached?.file !== file) cached = { file, text: file.arrayBuffer().then((buffer) => decodeProfileBytes(new Uint8Array(buffer))) };
+  if (cached?.file !== file)
+    cached = { file, text: file.arrayBuffer().then((buffer) => decodeProfileBytes(new Uint8Array(buffer))) };
   return cached.text;
 };
 
@@ -23,5 +24,7 @@ self.addEventListener('message', (event: MessageEvent<ParseRequest>) => {
       const firstLines = text.replace(/^\uFEFF/, '').split(/\r\n|\n|\r/, 6);
       answer({ id, status: 'done', firstLines, result });
     })
-    .catch((error: unknown) => answer({ id, status: 'failed-to-read', message: error instanceof Error ? error.message : String(error) }));
+    .catch((error: unknown) =>
+      answer({ id, status: 'failed-to-read', message: error instanceof Error ? error.message : String(error) }),
+    );
 });

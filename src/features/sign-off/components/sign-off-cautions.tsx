@@ -21,7 +21,11 @@ export function SignOffCautions() {
 export function SignOffCautionsReminder({ cautionsId }: { cautionsId: string }) {
   return (
     // A note, not an aside: it sits inside the sign-off region (complementary landmarks stay top level).
-    <div role="note" aria-label="Before you sign off" className="rounded border border-amber-500 bg-amber-100 p-3 text-sm text-ink-900">
+    <div
+      role="note"
+      aria-label="Before you sign off"
+      className="rounded border border-amber-500 bg-amber-100 p-3 text-sm text-ink-900"
+    >
       <span className="font-semibold text-amber-700">Before you sign off</span>, read the{' '}
       <a href={`#${cautionsId}`} className="font-semibold underline">
         cautions

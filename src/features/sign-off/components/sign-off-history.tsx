@@ -17,9 +17,7 @@ export function SignOffHistory({ events }: { events: PlanEvent[] }) {
     <ol aria-label="Sign-off history" className="space-y-2 border-l-2 border-ink-100 pl-4">
       {events.map((e) => (
         <li key={e.id} className="text-sm">
-          <span className="text-ink-500">
-            {formatMoment(e.at, true)}
-          </span>{' '}
+          <span className="text-ink-500">{formatMoment(e.at, true)}</span>{' '}
           <span className="font-medium text-ink-900">{e.actorName ?? e.actorEmail ?? 'someone'}</span> {WORDS[e.action]}
           {e.version !== null && <span className="text-ink-500"> (version {e.version})</span>}
           {e.comment && <q className="block text-ink-700">{e.comment}</q>}

@@ -4,7 +4,10 @@ import { FormActions, FormField, describedBy, inputClass } from '@/components/fo
 import { fieldErrors, numberText, parseNumberInput } from '@/lib/form-values';
 import { TimeZoneSelect } from './time-zone-select';
 
-type Text = Record<'name' | 'timezone' | 'importLimitKw' | 'exportLimitKw' | 'demandChargePerKw' | 'currency' | 'defaultHorizonHours', string>;
+type Text = Record<
+  'name' | 'timezone' | 'importLimitKw' | 'exportLimitKw' | 'demandChargePerKw' | 'currency' | 'defaultHorizonHours',
+  string
+>;
 
 const ZONE_HINT = 'Local times in uploaded profiles are read in this zone.';
 const CURRENCY_HINT = 'ISO 4217 code, e.g. EUR, USD, GBP.';
@@ -49,7 +52,10 @@ export function SiteForm({ site, serverError, pending, onSubmit, onCancel }: Sit
   const [text, setText] = useState<Text>(() => toText(site));
   const [touched, setTouched] = useState(false);
   const parsed = siteCreateSchema.safeParse(fromText(text));
-  const errors = { ...(touched && !parsed.success ? fieldErrors(parsed.error) : {}), ...(serverError ? fieldErrors(serverError) : {}) };
+  const errors = {
+    ...(touched && !parsed.success ? fieldErrors(parsed.error) : {}),
+    ...(serverError ? fieldErrors(serverError) : {}),
+  };
   const set = (key: keyof Text) => (value: string) => setText((t) => ({ ...t, [key]: value }));
 
   const submit = (event: FormEvent) => {
@@ -58,7 +64,12 @@ export function SiteForm({ site, serverError, pending, onSubmit, onCancel }: Sit
     if (parsed.success) onSubmit(parsed.data);
   };
 
-  const numberField = (key: 'importLimitKw' | 'exportLimitKw' | 'demandChargePerKw' | 'defaultHorizonHours', label: string, unit: string, hint: string) => {
+  const numberField = (
+    key: 'importLimitKw' | 'exportLimitKw' | 'demandChargePerKw' | 'defaultHorizonHours',
+    label: string,
+    unit: string,
+    hint: string,
+  ) => {
     const id = `site-${key}`;
     return (
       <FormField id={id} label={label} unit={unit} error={errors[key]} hint={hint}>
@@ -76,21 +87,56 @@ export function SiteForm({ site, serverError, pending, onSubmit, onCancel }: Sit
   };
 
   return (
-    <form onSubmit={submit} noValidate className="grid max-w-3xl gap-4 sm:grid-cols-2" aria-label={site ? 'Edit site' : 'New site'}>
+    <form
+      onSubmit={submit}
+      noValidate
+      className="grid max-w-3xl gap-4 sm:grid-cols-2"
+      aria-label={site ? 'Edit site' : 'New site'}
+    >
       <FormField id="site-name" label="Name" error={errors.name}>
-        <input id="site-name" className={inputClass} value={text.name} onChange={(e) => set('name')(e.target.value)} aria-invalid={Boolean(errors.name)} aria-describedby={describedBy('site-name', { error: errors.name })} />
+        <input
+          id="site-name"
+          className={inputClass}
+          value={text.name}
+          onChange={(e) => set('name')(e.target.value)}
+          aria-invalid={Boolean(errors.name)}
+          aria-describedby={describedBy('site-name', { error: errors.name })}
+        />
       </FormField>
       <FormField id="site-timezone" label="Time zone" error={errors.timezone} hint={ZONE_HINT}>
-        <TimeZoneSelect id="site-timezone" value={text.timezone} onChange={set('timezone')} describedBy={describedBy('site-timezone', { error: errors.timezone, hint: ZONE_HINT })} />
+        <TimeZoneSelect
+          id="site-timezone"
+          value={text.timezone}
+          onChange={set('timezone')}
+          describedBy={describedBy('site-timezone', { error: errors.timezone, hint: ZONE_HINT })}
+        />
       </FormField>
       {numberField('importLimitKw', 'Import limit', 'kW', 'Largest grid import; empty = no limit.')}
       {numberField('exportLimitKw', 'Export limit', 'kW', 'Largest grid export; empty = no limit.')}
-      {numberField('demandChargePerKw', 'Demand charge', `${text.currency || 'currency'}/kW`, 'Per kW of peak import; empty = none.')}
+      {numberField(
+        'demandChargePerKw',
+        'Demand charge',
+        `${text.currency || 'currency'}/kW`,
+        'Per kW of peak import; empty = none.',
+      )}
       <FormField id="site-currency" label="Currency" error={errors.currency} hint={CURRENCY_HINT}>
-        <input id="site-currency" className={`${inputClass} uppercase`} maxLength={3} value={text.currency} onChange={(e) => set('currency')(e.target.value)} aria-invalid={Boolean(errors.currency)} aria-describedby={describedBy('site-currency', { error: errors.currency, hint: CURRENCY_HINT })} />
+        <input
+          id="site-currency"
+          className={`${inputClass} uppercase`}
+          maxLength={3}
+          value={text.currency}
+          onChange={(e) => set('currency')(e.target.value)}
+          aria-invalid={Boolean(errors.currency)}
+          aria-describedby={describedBy('site-currency', { error: errors.currency, hint: CURRENCY_HINT })}
+        />
       </FormField>
       {numberField('defaultHorizonHours', 'Default horizon', 'hours', 'Proposed for new plans; empty = choose each time.')}
-      <FormActions pending={pending} submitLabel={site ? 'Save site' : 'Create site'} formError={errors['']} onCancel={onCancel} />
+      <FormActions
+        pending={pending}
+        submitLabel={site ? 'Save site' : 'Create site'}
+        formError={errors['']}
+        onCancel={onCancel}
+      />
     </form>
   );
 }

@@ -9,18 +9,32 @@ export function SitesList() {
   if (sites.isPending) return <LoadingState label="Loading sites…" />;
   if (sites.isError) return <ErrorState error={sites.error} onRetry={() => void sites.refetch()} />;
   if (sites.data.length === 0) {
-    return <EmptyState title="No sites yet.">Create a site to describe a grid connection, then add its batteries and upload profiles.</EmptyState>;
+    return (
+      <EmptyState title="No sites yet.">
+        Create a site to describe a grid connection, then add its batteries and upload profiles.
+      </EmptyState>
+    );
   }
   return (
     <table className="w-full overflow-hidden rounded bg-white text-left shadow-sm">
       <caption className="sr-only">Sites</caption>
       <thead className="bg-ink-100 text-sm text-ink-700">
         <tr>
-          <th scope="col" className="px-3 py-2">Site</th>
-          <th scope="col" className="px-3 py-2">Time zone</th>
-          <th scope="col" className="px-3 py-2">Import / export limit</th>
-          <th scope="col" className="px-3 py-2 text-right">Batteries</th>
-          <th scope="col" className="px-3 py-2 text-right">Profiles</th>
+          <th scope="col" className="px-3 py-2">
+            Site
+          </th>
+          <th scope="col" className="px-3 py-2">
+            Time zone
+          </th>
+          <th scope="col" className="px-3 py-2">
+            Import / export limit
+          </th>
+          <th scope="col" className="px-3 py-2 text-right">
+            Batteries
+          </th>
+          <th scope="col" className="px-3 py-2 text-right">
+            Profiles
+          </th>
         </tr>
       </thead>
       <tbody>

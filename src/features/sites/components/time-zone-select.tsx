@@ -3,7 +3,17 @@ import { timeZoneChoices } from '@shared/schemas/site';
 import { inputClass } from '@/components/form-field';
 
 /** IANA zones grouped by region (Europe/…, America/…); typing the first letters jumps through a long list. */
-export function TimeZoneSelect({ id, value, onChange, describedBy }: { id: string; value: string; onChange: (zone: string) => void; describedBy?: string | undefined }) {
+export function TimeZoneSelect({
+  id,
+  value,
+  onChange,
+  describedBy,
+}: {
+  id: string;
+  value: string;
+  onChange: (zone: string) => void;
+  describedBy?: string | undefined;
+}) {
   const groups = useMemo(() => {
     const byRegion = new Map<string, string[]>();
     for (const zone of timeZoneChoices()) {
@@ -14,7 +24,13 @@ export function TimeZoneSelect({ id, value, onChange, describedBy }: { id: strin
   }, []);
   const known = groups.some(([, zones]) => zones.includes(value));
   return (
-    <select id={id} className={inputClass} value={value} onChange={(e) => onChange(e.target.value)} aria-describedby={describedBy}>
+    <select
+      id={id}
+      className={inputClass}
+      value={value}
+      onChange={(e) => onChange(e.target.value)}
+      aria-describedby={describedBy}
+    >
       {!value && <option value="">Choose a time zone…</option>}
       {value && !known && <option value={value}>{value}</option>}
       {groups.map(([region, zones]) => (

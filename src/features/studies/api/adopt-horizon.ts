@@ -3,7 +3,8 @@ import type { Site } from '@shared/schemas/site';
 import { api } from '@/lib/api-client';
 
 /** Makes a horizon the site's default for new plans (PATCH /api/sites/:id). */
-export const adoptHorizon = ({ siteId, hours }: { siteId: string; hours: number }) => api.patch<Site>(`/api/sites/${siteId}`, { defaultHorizonHours: hours });
+export const adoptHorizon = ({ siteId, hours }: { siteId: string; hours: number }) =>
+  api.patch<Site>(`/api/sites/${siteId}`, { defaultHorizonHours: hours });
 
 export function useAdoptHorizon() {
   const queryClient = useQueryClient();

@@ -20,7 +20,10 @@ export function RecommendationCard({ study }: { study: Study }) {
   const rounded = adopted !== hours ? ` (${hours} h rounded up)` : '';
   const current = site?.defaultHorizonHours ?? null;
   return (
-    <section aria-labelledby="recommendation-heading" className="space-y-2 rounded-lg border-l-4 border-seaglass-600 bg-seaglass-100 p-4">
+    <section
+      aria-labelledby="recommendation-heading"
+      className="space-y-2 rounded-lg border-l-4 border-seaglass-600 bg-seaglass-100 p-4"
+    >
       <h2 id="recommendation-heading" className="text-lg font-semibold text-ink-900">
         {hours === null ? 'No recommendation' : `Recommended: ${hours} h with the ${rec.terminal} terminal rule`}
       </h2>
@@ -38,8 +41,16 @@ export function RecommendationCard({ study }: { study: Study }) {
               : `Make ${adopted} h${rounded} the default for new plans at ${study.siteName}`}
           </button>
           {current !== null && current !== adopted && <span className="text-sm text-ink-700">Now: {current} h.</span>}
-          {adopt.isError && <span role="alert" className="text-sm text-brick-700">{adopt.error.message}</span>}
-          {adopt.isSuccess && <span role="status" className="text-sm text-seaglass-700">Saved: new plans at this site start with {adopted} h.</span>}
+          {adopt.isError && (
+            <span role="alert" className="text-sm text-brick-700">
+              {adopt.error.message}
+            </span>
+          )}
+          {adopt.isSuccess && (
+            <span role="status" className="text-sm text-seaglass-700">
+              Saved: new plans at this site start with {adopted} h.
+            </span>
+          )}
         </div>
       )}
     </section>

@@ -28,7 +28,14 @@ export function StudiesPage() {
     <section className="space-y-4">
       <div className="flex flex-wrap items-center justify-between gap-3">
         <h1 className="text-2xl font-semibold text-ink-900">Horizon studies</h1>
-        {canRun && <Link to="/studies/new" className="rounded bg-seaglass-700 px-4 py-2 text-sm font-semibold text-white hover:bg-seaglass-800">New study</Link>}
+        {canRun && (
+          <Link
+            to="/studies/new"
+            className="rounded bg-seaglass-700 px-4 py-2 text-sm font-semibold text-white hover:bg-seaglass-800"
+          >
+            New study
+          </Link>
+        )}
       </div>
       <div className="grid gap-3 sm:grid-cols-2" role="search">
         <SiteFilter value={siteId ?? ''} onChange={(id) => setFilter('siteId', id)} />
@@ -36,7 +43,11 @@ export function StudiesPage() {
           State
           <select className={inputClass} value={status ?? ''} onChange={(e) => setFilter('status', e.target.value)}>
             <option value="">Any</option>
-            {states.map((s) => <option key={s} value={s}>{s === 'active' ? 'queued or running' : s}</option>)}
+            {states.map((s) => (
+              <option key={s} value={s}>
+                {s === 'active' ? 'queued or running' : s}
+              </option>
+            ))}
           </select>
         </label>
       </div>
@@ -49,19 +60,35 @@ export function StudiesPage() {
       ) : (
         <table className="w-full rounded bg-white text-left text-sm shadow-sm">
           <thead className="bg-ink-100 text-ink-700">
-            <tr>{['Battery', 'Period (site time)', 'Horizons', 'State', 'Recommendation'].map((h) => <th key={h} scope="col" className="px-2 py-1.5">{h}</th>)}</tr>
+            <tr>
+              {['Battery', 'Period (site time)', 'Horizons', 'State', 'Recommendation'].map((h) => (
+                <th key={h} scope="col" className="px-2 py-1.5">
+                  {h}
+                </th>
+              ))}
+            </tr>
           </thead>
           <tbody>
             {studies.data.map((s) => (
               <tr key={s.id} className="border-t border-ink-100">
                 <td className="px-2 py-1">
-                  <Link to={`/studies/${s.id}`} className="font-semibold text-seaglass-700 underline">{s.batteryName}</Link>
+                  <Link to={`/studies/${s.id}`} className="font-semibold text-seaglass-700 underline">
+                    {s.batteryName}
+                  </Link>
                   <span className="block text-xs text-ink-500">{s.siteName}</span>
                 </td>
-                <td className="px-2 py-1">{local(s.start, s.siteId)} – {local(s.end, s.siteId)}</td>
-                <td className="px-2 py-1">{s.horizonsHours.join(', ')} h × {s.terminalRules.join(', ')}</td>
+                <td className="px-2 py-1">
+                  {local(s.start, s.siteId)} – {local(s.end, s.siteId)}
+                </td>
+                <td className="px-2 py-1">
+                  {s.horizonsHours.join(', ')} h × {s.terminalRules.join(', ')}
+                </td>
                 <td className="px-2 py-1">{s.status === 'running' ? `running ${formatPercent(s.job?.shareDone)}` : s.status}</td>
-                <td className="px-2 py-1">{s.recommendation?.horizonHours != null ? `${s.recommendation.horizonHours} h, ${s.recommendation.terminal}` : '–'}</td>
+                <td className="px-2 py-1">
+                  {s.recommendation?.horizonHours != null
+                    ? `${s.recommendation.horizonHours} h, ${s.recommendation.terminal}`
+                    : '–'}
+                </td>
               </tr>
             ))}
           </tbody>

@@ -16,24 +16,68 @@ export interface StudyChartsProps {
   targetGapPct: number;
 }
 
-function ByHorizon({ runs, title, label, value, extra }: { runs: StudyRun[]; title: string; label: string; value: (r: StudyRun) => number | null; extra?: { y: number; text: string } }) {
+function ByHorizon({
+  runs,
+  title,
+  label,
+  value,
+  extra,
+}: {
+  runs: StudyRun[];
+  title: string;
+  label: string;
+  value: (r: StudyRun) => number | null;
+  extra?: { y: number; text: string };
+}) {
   const rules = [...new Set(runs.map((r) => r.terminal))];
   const horizons = [...new Set(runs.map((r) => r.horizonHours))].sort((a, b) => a - b);
   return (
     <ChartFigure caption={title}>
       {/* Taller bottom margin: room for the "horizon" axis label. */}
-      <ChartPlot height={240} gridTicks={4} theme={theme} xScale={{ type: 'log', domain: [horizons[0] ?? 1, horizons.at(-1) ?? 2] }} yScale={{ type: 'linear', nice: true, zero: true }} margin={{ bottom: 40 }}
-        accessibilityLabel={`${title}; the numbers are in the table of runs`}>
+      <ChartPlot
+        height={240}
+        gridTicks={4}
+        theme={theme}
+        xScale={{ type: 'log', domain: [horizons[0] ?? 1, horizons.at(-1) ?? 2] }}
+        yScale={{ type: 'linear', nice: true, zero: true }}
+        margin={{ bottom: 40 }}
+        accessibilityLabel={`${title}; the numbers are in the table of runs`}
+      >
         <Axis orientation="bottom" tickValues={horizons} tickFormat={(h: number) => `${h} h`} label="horizon" />
         <Axis orientation="left" numTicks={4} label={label} />
         {extra && (
-          <LineSeries dataKey={extra.text} data={horizons.map((h) => ({ h }))} xAccessor={(d) => d.h} yAccessor={() => extra.y} stroke={colours.amber} strokeDasharray="4 3" />
+          <LineSeries
+            dataKey={extra.text}
+            data={horizons.map((h) => ({ h }))}
+            xAccessor={(d) => d.h}
+            yAccessor={() => extra.y}
+            stroke={colours.amber}
+            strokeDasharray="4 3"
+          />
         )}
         {rules.map((rule, i) => {
-          const data = runs.filter((r) => r.terminal === rule && value(r) !== null).sort((a, b) => a.horizonHours - b.horizonHours);
+          const data = runs
+            .filter((r) => r.terminal === rule && value(r) !== null)
+            .sort((a, b) => a.horizonHours - b.horizonHours);
           return [
-            <LineSeries key={`${rule}-line`} dataKey={rule} data={data} xAccessor={(r) => r.horizonHours} yAccessor={value} stroke={palette[i % palette.length]} strokeWidth={2} />,
-            <GlyphSeries key={`${rule}-dots`} dataKey={`${rule} runs`} data={data} xAccessor={(r) => r.horizonHours} yAccessor={value} colorAccessor={() => palette[i % palette.length]} size={7} />,
+            <LineSeries
+              key={`${rule}-line`}
+              dataKey={rule}
+              data={data}
+              xAccessor={(r) => r.horizonHours}
+              yAccessor={value}
+              stroke={palette[i % palette.length]}
+              strokeWidth={2}
+            />,
+            <GlyphSeries
+              key={`${rule}-dots`}
+              dataKey={`${rule} runs`}
+              data={data}
+              xAccessor={(r) => r.horizonHours}
+              yAccessor={value}
+              colorAccessor={() => palette[i % palette.length]}
+              size={7}
+            />,
           ];
         })}
       </ChartPlot>
@@ -52,8 +96,19 @@ function ByHorizon({ runs, title, label, value, extra }: { runs: StudyRun[]; tit
 export default function StudyCharts({ runs, targetGapPct }: StudyChartsProps) {
   return (
     <div className="grid gap-4 lg:grid-cols-2">
-      <ByHorizon runs={runs} title="Gap to the reference path against horizon" label="gap %" value={(r) => r.gapPct} extra={{ y: targetGapPct, text: `target ${targetGapPct} %` }} />
-      <ByHorizon runs={runs} title="Near-steady share against horizon" label="share of steps %" value={(r) => r.nearSteadyShare * 100} />
+      <ByHorizon
+        runs={runs}
+        title="Gap to the reference path against horizon"
+        label="gap %"
+        value={(r) => r.gapPct}
+        extra={{ y: targetGapPct, text: `target ${targetGapPct} %` }}
+      />
+      <ByHorizon
+        runs={runs}
+        title="Near-steady share against horizon"
+        label="share of steps %"
+        value={(r) => r.nearSteadyShare * 100}
+      />
     </div>
   );
 }

@@ -42,7 +42,10 @@ export function StudyForm({ initial }: { initial?: Partial<RunSource> }) {
       generationProfileId: source.generationProfileId || null,
       start: startMs === null ? '' : new Date(startMs).toISOString(),
       end: endMs === null ? '' : new Date(endMs).toISOString(),
-      horizonsHours: horizons.split(/[,;\s]+/).filter(Boolean).map((h) => parseNumberInput(h)),
+      horizonsHours: horizons
+        .split(/[,;\s]+/)
+        .filter(Boolean)
+        .map((h) => parseNumberInput(h)),
       replanHours: parseNumberInput(replan),
       terminalRules: rules,
       initialSocPct: parseNumberInput(soc),
@@ -60,9 +63,23 @@ export function StudyForm({ initial }: { initial?: Partial<RunSource> }) {
     });
   };
 
-  const field = (id: 'horizonsHours' | 'replanHours' | 'initialSocPct', label: string, value: string, set: (v: string) => void, unit: string, hint?: string) => (
+  const field = (
+    id: 'horizonsHours' | 'replanHours' | 'initialSocPct',
+    label: string,
+    value: string,
+    set: (v: string) => void,
+    unit: string,
+    hint?: string,
+  ) => (
     <FormField id={id} label={label} unit={unit} error={errors[id]} hint={hint}>
-      <input id={id} className={inputClass} value={value} aria-invalid={!!errors[id]} aria-describedby={describedBy(id, { error: errors[id], hint })} onChange={(e) => set(e.target.value)} />
+      <input
+        id={id}
+        className={inputClass}
+        value={value}
+        aria-invalid={!!errors[id]}
+        aria-describedby={describedBy(id, { error: errors[id], hint })}
+        onChange={(e) => set(e.target.value)}
+      />
     </FormField>
   );
 
@@ -70,16 +87,39 @@ export function StudyForm({ initial }: { initial?: Partial<RunSource> }) {
     <form onSubmit={submit} noValidate className="space-y-5 rounded-lg border border-ink-100 bg-white p-5 shadow-sm">
       <RunSourceFields value={source} onChange={setSource} errors={errors} />
       <fieldset className="grid gap-4 sm:grid-cols-2">
-        <legend className="mb-2 text-sm font-semibold text-ink-800">Period ({timeZone} local time; empty: the whole price profile)</legend>
+        <legend className="mb-2 text-sm font-semibold text-ink-800">
+          Period ({timeZone} local time; empty: the whole price profile)
+        </legend>
         <FormField id="start" label="From" error={errors.start}>
-          <input id="start" type="datetime-local" className={inputClass} value={period.start} aria-invalid={!!errors.start} onChange={(e) => setPeriod({ ...period, start: e.target.value })} />
+          <input
+            id="start"
+            type="datetime-local"
+            className={inputClass}
+            value={period.start}
+            aria-invalid={!!errors.start}
+            onChange={(e) => setPeriod({ ...period, start: e.target.value })}
+          />
         </FormField>
         <FormField id="end" label="To" error={errors.end}>
-          <input id="end" type="datetime-local" className={inputClass} value={period.end} aria-invalid={!!errors.end} onChange={(e) => setPeriod({ ...period, end: e.target.value })} />
+          <input
+            id="end"
+            type="datetime-local"
+            className={inputClass}
+            value={period.end}
+            aria-invalid={!!errors.end}
+            onChange={(e) => setPeriod({ ...period, end: e.target.value })}
+          />
         </FormField>
       </fieldset>
       <div className="grid gap-4 sm:grid-cols-3">
-        {field('horizonsHours', 'Horizons', horizons, setHorizons, 'h', 'Separated by commas; each at least the re-plan interval.')}
+        {field(
+          'horizonsHours',
+          'Horizons',
+          horizons,
+          setHorizons,
+          'h',
+          'Separated by commas; each at least the re-plan interval.',
+        )}
         {field('replanHours', 'Re-plan every', replan, setReplan, 'h')}
         {field('initialSocPct', 'Initial SoC', soc, setSoc, '%', 'Empty: as for a new plan.')}
       </div>
@@ -91,14 +131,26 @@ export function StudyForm({ initial }: { initial?: Partial<RunSource> }) {
         <div className="flex flex-wrap gap-4">
           {ruleChoices.map((r) => (
             <label key={r} className="flex items-center gap-1">
-              <input type="checkbox" checked={rules.includes(r)} onChange={() => setRules(rules.includes(r) ? rules.filter((x) => x !== r) : [...rules, r])} />
+              <input
+                type="checkbox"
+                checked={rules.includes(r)}
+                onChange={() => setRules(rules.includes(r) ? rules.filter((x) => x !== r) : [...rules, r])}
+              />
               {r}
             </label>
           ))}
         </div>
-        {errors.terminalRules && <p role="alert" className="text-brick-700">{errors.terminalRules}</p>}
+        {errors.terminalRules && (
+          <p role="alert" className="text-brick-700">
+            {errors.terminalRules}
+          </p>
+        )}
       </fieldset>
-      {errors[''] && <p role="alert" className="text-sm text-brick-700">{errors['']}</p>}
+      {errors[''] && (
+        <p role="alert" className="text-sm text-brick-700">
+          {errors['']}
+        </p>
+      )}
       <button type="submit" className={buttonClass.primary} disabled={create.isPending}>
         {create.isPending ? 'Queuing…' : 'Run the study'}
       </button>

@@ -33,7 +33,14 @@ export function splitSteps(results: PlanResults): SplitSteps {
 }
 
 export const timeTick = (timeZone: string) => (d: Date | number) =>
-  new Intl.DateTimeFormat('en-GB', { timeZone, day: '2-digit', month: 'short', hour: '2-digit', minute: '2-digit', hourCycle: 'h23' }).format(typeof d === 'number' ? d : d.getTime());
+  new Intl.DateTimeFormat('en-GB', {
+    timeZone,
+    day: '2-digit',
+    month: 'short',
+    hour: '2-digit',
+    minute: '2-digit',
+    hourCycle: 'h23',
+  }).format(typeof d === 'number' ? d : d.getTime());
 
 /** SoC and stored-energy value belong to the end of their step. */
 export const atStepEnd = (p: StepPoint) => new Date(p.tEnd);

@@ -19,16 +19,55 @@ export function DistanceChart({ split, timeZone, bandPct }: { split: SplitSteps;
         { colour: colours.amber, label: 'leaving arc' },
       ]}
     >
-      <ChartPlot height={200} gridTicks={4} xScale={{ type: 'time' }} yScale={{ type: 'linear', nice: true, zero: true }}
-        accessibilityLabel="Distance to the steady cycle in % of usable energy per step">
+      <ChartPlot
+        height={200}
+        gridTicks={4}
+        xScale={{ type: 'time' }}
+        yScale={{ type: 'linear', nice: true, zero: true }}
+        accessibilityLabel="Distance to the steady cycle in % of usable energy per step"
+      >
         {/* Half width: fewer time labels, or they run together. */}
         <Axis orientation="bottom" numTicks={3} tickFormat={timeTick(timeZone)} />
         <Axis orientation="left" numTicks={4} label="% of usable energy" tickFormat={(v: number) => formatNumber(v, 0)} />
-        <LineSeries dataKey="band edge" data={edge} xAccessor={(d) => new Date(d.t)} yAccessor={(d) => d.v} stroke={colours.seaglass} strokeDasharray="2 3" />
+        <LineSeries
+          dataKey="band edge"
+          data={edge}
+          xAccessor={(d) => new Date(d.t)}
+          yAccessor={(d) => d.v}
+          stroke={colours.seaglass}
+          strokeDasharray="2 3"
+        />
         <LineSeries dataKey="distance" data={split.delivery} xAccessor={x} yAccessor={y} stroke={colours.ink} strokeWidth={2} />
-        {split.lookahead.length > 0 && <LineSeries dataKey="distance (lookahead)" data={split.lookahead} xAccessor={x} yAccessor={y} stroke={colours.inkSoft} {...lookaheadLine} />}
-        {split.entry.length > 0 && <GlyphSeries dataKey="entry arc" data={split.entry} xAccessor={x} yAccessor={y} colorAccessor={() => colours.inkSoft} size={6} />}
-        {split.leaving.length > 0 && <GlyphSeries dataKey="leaving arc" data={split.leaving} xAccessor={x} yAccessor={y} colorAccessor={() => colours.amber} size={7} />}
+        {split.lookahead.length > 0 && (
+          <LineSeries
+            dataKey="distance (lookahead)"
+            data={split.lookahead}
+            xAccessor={x}
+            yAccessor={y}
+            stroke={colours.inkSoft}
+            {...lookaheadLine}
+          />
+        )}
+        {split.entry.length > 0 && (
+          <GlyphSeries
+            dataKey="entry arc"
+            data={split.entry}
+            xAccessor={x}
+            yAccessor={y}
+            colorAccessor={() => colours.inkSoft}
+            size={6}
+          />
+        )}
+        {split.leaving.length > 0 && (
+          <GlyphSeries
+            dataKey="leaving arc"
+            data={split.leaving}
+            xAccessor={x}
+            yAccessor={y}
+            colorAccessor={() => colours.amber}
+            size={7}
+          />
+        )}
       </ChartPlot>
     </ChartFigure>
   );

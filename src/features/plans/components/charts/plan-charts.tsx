@@ -25,12 +25,20 @@ export default function PlanCharts({ results, timeZone, currency, energyKwh, usa
   return (
     <div className="space-y-4">
       <PriceDispatchChart split={split} timeZone={timeZone} currency={currency} />
-      <SocChart split={split} timeZone={timeZone} energyKwh={energyKwh} bandSocPct={bandSocPct} bandPct={results.turnpike.bandPct} />
+      <SocChart
+        split={split}
+        timeZone={timeZone}
+        energyKwh={energyKwh}
+        bandSocPct={bandSocPct}
+        bandPct={results.turnpike.bandPct}
+      />
       <div className="grid gap-4 lg:grid-cols-2">
         <DistanceChart split={split} timeZone={timeZone} bandPct={results.turnpike.bandPct} />
         <ValueChart split={split} timeZone={timeZone} currency={currency} />
       </div>
-      {results.valueCurves.length > 0 && <ValueCurvesChart curves={results.valueCurves} timeZone={timeZone} currency={currency} />}
+      {results.valueCurves.length > 0 && (
+        <ValueCurvesChart curves={results.valueCurves} timeZone={timeZone} currency={currency} />
+      )}
     </div>
   );
 }

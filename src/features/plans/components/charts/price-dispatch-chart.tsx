@@ -24,31 +24,79 @@ export function PriceDispatchChart({ split, timeZone, currency }: { split: Split
         { colour: colours.inkFaint, label: 'lookahead: dashed price, pale bars', dashed: true },
       ]}
     >
-      <ChartPlot height={180} gridTicks={4} xScale={{ type: 'time' }} yScale={{ type: 'linear', nice: true, zero: false }}
-        accessibilityLabel={`Price in ${currency}/MWh per step; the numbers are in the schedule table`}>
+      <ChartPlot
+        height={180}
+        gridTicks={4}
+        xScale={{ type: 'time' }}
+        yScale={{ type: 'linear', nice: true, zero: false }}
+        accessibilityLabel={`Price in ${currency}/MWh per step; the numbers are in the schedule table`}
+      >
         <Axis orientation="left" numTicks={4} label={`${currency}/MWh`} />
-        <LineSeries dataKey="price" data={split.delivery} xAccessor={x} yAccessor={(p) => p.step.priceImport} stroke={colours.ink} />
+        <LineSeries
+          dataKey="price"
+          data={split.delivery}
+          xAccessor={x}
+          yAccessor={(p) => p.step.priceImport}
+          stroke={colours.ink}
+        />
         {split.lookahead.length > 0 && (
-          <LineSeries dataKey="price (lookahead)" data={split.lookahead} xAccessor={x} yAccessor={(p) => p.step.priceImport} stroke={colours.inkSoft} {...lookaheadLine} />
+          <LineSeries
+            dataKey="price (lookahead)"
+            data={split.lookahead}
+            xAccessor={x}
+            yAccessor={(p) => p.step.priceImport}
+            stroke={colours.inkSoft}
+            {...lookaheadLine}
+          />
         )}
         <NearestTooltip<StepPoint>
           render={({ datum: p }) => (
             <>
               {formatLocalTime(p.t, timeZone)} {p.step.delivery ? '' : '(lookahead)'}
               <br />
-              price {formatNumber(p.step.priceImport, 2)} {currency}/MWh · charge {formatNumber(p.step.chargeKw, 0)} kW · discharge {formatNumber(p.step.dischargeKw, 0)} kW
+              price {formatNumber(p.step.priceImport, 2)} {currency}/MWh · charge {formatNumber(p.step.chargeKw, 0)} kW ·
+              discharge {formatNumber(p.step.dischargeKw, 0)} kW
             </>
           )}
         />
       </ChartPlot>
-      <ChartPlot height={170} gridTicks={4} xScale={{ type: 'band', paddingInner: 0.15 }} yScale={{ type: 'linear', nice: true }}
-        accessibilityLabel="Charge (above zero) and discharge (below zero) in kW per step">
+      <ChartPlot
+        height={170}
+        gridTicks={4}
+        xScale={{ type: 'band', paddingInner: 0.15 }}
+        yScale={{ type: 'linear', nice: true }}
+        accessibilityLabel="Charge (above zero) and discharge (below zero) in kW per step"
+      >
         <Axis orientation="bottom" tickValues={tickValues} tickFormat={(v: number) => timeTick(timeZone)(v)} />
         <Axis orientation="left" numTicks={4} label="kW" />
-        <BarSeries dataKey="charge" data={part(true)} xAccessor={(p) => p.t} yAccessor={(p) => p.step.chargeKw} colorAccessor={() => colours.seaglass} />
-        <BarSeries dataKey="discharge" data={part(true)} xAccessor={(p) => p.t} yAccessor={(p) => -p.step.dischargeKw} colorAccessor={() => colours.inkSoft} />
-        <BarSeries dataKey="charge (lookahead)" data={part(false)} xAccessor={(p) => p.t} yAccessor={(p) => p.step.chargeKw} colorAccessor={() => colours.seaglassSoft} />
-        <BarSeries dataKey="discharge (lookahead)" data={part(false)} xAccessor={(p) => p.t} yAccessor={(p) => -p.step.dischargeKw} colorAccessor={() => colours.inkFaint} />
+        <BarSeries
+          dataKey="charge"
+          data={part(true)}
+          xAccessor={(p) => p.t}
+          yAccessor={(p) => p.step.chargeKw}
+          colorAccessor={() => colours.seaglass}
+        />
+        <BarSeries
+          dataKey="discharge"
+          data={part(true)}
+          xAccessor={(p) => p.t}
+          yAccessor={(p) => -p.step.dischargeKw}
+          colorAccessor={() => colours.inkSoft}
+        />
+        <BarSeries
+          dataKey="charge (lookahead)"
+          data={part(false)}
+          xAccessor={(p) => p.t}
+          yAccessor={(p) => p.step.chargeKw}
+          colorAccessor={() => colours.seaglassSoft}
+        />
+        <BarSeries
+          dataKey="discharge (lookahead)"
+          data={part(false)}
+          xAccessor={(p) => p.t}
+          yAccessor={(p) => -p.step.dischargeKw}
+          colorAccessor={() => colours.inkFaint}
+        />
       </ChartPlot>
     </ChartFigure>
   );

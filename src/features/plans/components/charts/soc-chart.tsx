@@ -33,29 +33,79 @@ export function SocChart({ split, timeZone, energyKwh, bandSocPct, bandPct }: Pr
         { colour: colours.amber, label: 'leaving arc (dots)' },
       ]}
     >
-      <ChartPlot height={260} gridTicks={5} xScale={{ type: 'time' }} yScale={{ type: 'linear', domain: [0, 100] }}
-        accessibilityLabel="SoC in % with the steady cycle and its band; the numbers are in the schedule table">
+      <ChartPlot
+        height={260}
+        gridTicks={5}
+        xScale={{ type: 'time' }}
+        yScale={{ type: 'linear', domain: [0, 100] }}
+        accessibilityLabel="SoC in % with the steady cycle and its band; the numbers are in the schedule table"
+      >
         <Axis orientation="bottom" numTicks={6} tickFormat={timeTick(timeZone)} />
         <Axis orientation="left" numTicks={5} label="SoC %" />
-        <AreaSeries dataKey="band" data={withSteady} xAccessor={x} yAccessor={(p) => pct(p.step.steadySocKwh)! + bandSocPct}
-          y0Accessor={(p) => pct(p.step.steadySocKwh)! - bandSocPct} fill={colours.seaglassBand} fillOpacity={0.9} renderLine={false} />
-        <LineSeries dataKey="steady cycle" data={withSteady} xAccessor={x} yAccessor={(p) => pct(p.step.steadySocKwh)} stroke={colours.seaglass} strokeWidth={1.5} />
-        <LineSeries dataKey="SoC" data={split.delivery} xAccessor={x} yAccessor={(p) => p.step.socPct} stroke={colours.ink} strokeWidth={2} />
+        <AreaSeries
+          dataKey="band"
+          data={withSteady}
+          xAccessor={x}
+          yAccessor={(p) => pct(p.step.steadySocKwh)! + bandSocPct}
+          y0Accessor={(p) => pct(p.step.steadySocKwh)! - bandSocPct}
+          fill={colours.seaglassBand}
+          fillOpacity={0.9}
+          renderLine={false}
+        />
+        <LineSeries
+          dataKey="steady cycle"
+          data={withSteady}
+          xAccessor={x}
+          yAccessor={(p) => pct(p.step.steadySocKwh)}
+          stroke={colours.seaglass}
+          strokeWidth={1.5}
+        />
+        <LineSeries
+          dataKey="SoC"
+          data={split.delivery}
+          xAccessor={x}
+          yAccessor={(p) => p.step.socPct}
+          stroke={colours.ink}
+          strokeWidth={2}
+        />
         {split.lookahead.length > 0 && (
-          <LineSeries dataKey="SoC (lookahead)" data={split.lookahead} xAccessor={x} yAccessor={(p) => p.step.socPct} stroke={colours.inkSoft} strokeWidth={2} {...lookaheadLine} />
+          <LineSeries
+            dataKey="SoC (lookahead)"
+            data={split.lookahead}
+            xAccessor={x}
+            yAccessor={(p) => p.step.socPct}
+            stroke={colours.inkSoft}
+            strokeWidth={2}
+            {...lookaheadLine}
+          />
         )}
         {split.entry.length > 0 && (
-          <GlyphSeries dataKey="entry arc" data={split.entry} xAccessor={x} yAccessor={(p) => p.step.socPct} colorAccessor={() => colours.inkSoft} size={6} />
+          <GlyphSeries
+            dataKey="entry arc"
+            data={split.entry}
+            xAccessor={x}
+            yAccessor={(p) => p.step.socPct}
+            colorAccessor={() => colours.inkSoft}
+            size={6}
+          />
         )}
         {split.leaving.length > 0 && (
-          <GlyphSeries dataKey="leaving arc" data={split.leaving} xAccessor={x} yAccessor={(p) => p.step.socPct} colorAccessor={() => colours.amber} size={7} />
+          <GlyphSeries
+            dataKey="leaving arc"
+            data={split.leaving}
+            xAccessor={x}
+            yAccessor={(p) => p.step.socPct}
+            colorAccessor={() => colours.amber}
+            size={7}
+          />
         )}
         <NearestTooltip<StepPoint>
           render={({ datum: p }) => (
             <>
               end of step {formatLocalTime(p.tEnd, timeZone)} {p.step.delivery ? '' : '(lookahead)'}
               <br />
-              SoC {formatNumber(p.step.socPct, 1)} % · steady {formatNumber(pct(p.step.steadySocKwh), 1)} % · {p.step.arc.replace('near', 'near steady')}
+              SoC {formatNumber(p.step.socPct, 1)} % · steady {formatNumber(pct(p.step.steadySocKwh), 1)} % ·{' '}
+              {p.step.arc.replace('near', 'near steady')}
             </>
           )}
         />

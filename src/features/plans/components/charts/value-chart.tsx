@@ -15,15 +15,40 @@ export function ValueChart({ split, timeZone, currency }: { split: SplitSteps; t
         { colour: colours.seaglass, label: 'steady cycle’s value at that time of day' },
       ]}
     >
-      <ChartPlot height={220} gridTicks={4} xScale={{ type: 'time' }} yScale={{ type: 'linear', nice: true, zero: false }}
-        accessibilityLabel={`Value of one more MWh stored, ${currency}/MWh, and the steady cycle's value`}>
+      <ChartPlot
+        height={220}
+        gridTicks={4}
+        xScale={{ type: 'time' }}
+        yScale={{ type: 'linear', nice: true, zero: false }}
+        accessibilityLabel={`Value of one more MWh stored, ${currency}/MWh, and the steady cycle's value`}
+      >
         {/* Half width: fewer time labels, or they run together. */}
         <Axis orientation="bottom" numTicks={3} tickFormat={timeTick(timeZone)} />
         <Axis orientation="left" numTicks={4} label={`${currency}/MWh`} />
-        <LineSeries dataKey="steady value" data={steady} xAccessor={x} yAccessor={(p) => p.step.steadyValue} stroke={colours.seaglass} />
-        <LineSeries dataKey="stored-energy value" data={split.delivery} xAccessor={x} yAccessor={(p) => p.step.storedEnergyValue} stroke={colours.ink} strokeWidth={2} />
+        <LineSeries
+          dataKey="steady value"
+          data={steady}
+          xAccessor={x}
+          yAccessor={(p) => p.step.steadyValue}
+          stroke={colours.seaglass}
+        />
+        <LineSeries
+          dataKey="stored-energy value"
+          data={split.delivery}
+          xAccessor={x}
+          yAccessor={(p) => p.step.storedEnergyValue}
+          stroke={colours.ink}
+          strokeWidth={2}
+        />
         {split.lookahead.length > 0 && (
-          <LineSeries dataKey="value (lookahead)" data={split.lookahead} xAccessor={x} yAccessor={(p) => p.step.storedEnergyValue} stroke={colours.inkSoft} {...lookaheadLine} />
+          <LineSeries
+            dataKey="value (lookahead)"
+            data={split.lookahead}
+            xAccessor={x}
+            yAccessor={(p) => p.step.storedEnergyValue}
+            stroke={colours.inkSoft}
+            {...lookaheadLine}
+          />
         )}
       </ChartPlot>
     </ChartFigure>

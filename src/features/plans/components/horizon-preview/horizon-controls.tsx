@@ -22,13 +22,23 @@ function problemWith(text: string, r: HorizonRange): string | null {
   const hours = Number(text.trim().replace(',', '.'));
   if (text.trim() === '' || !Number.isFinite(hours)) return 'Enter the horizon in hours, e.g. 48.';
   if (hours < r.min - 1e-9) return `At least ${formatNumber(r.min, 2)} h: the horizon must cover the delivery window.`;
-  if (hours > r.maxHours + 1e-9) return `At most ${formatNumber(r.maxHours, 2)} h for a preview; make a full plan for a longer one.`;
+  if (hours > r.maxHours + 1e-9)
+    return `At most ${formatNumber(r.maxHours, 2)} h for a preview; make a full plan for a longer one.`;
   const steps = hours / r.stepHours;
-  if (Math.abs(steps - Math.round(steps)) > 1e-9) return `Use a multiple of ${formatNumber(r.stepHours * 60, 0)} minutes, the profiles’ step.`;
+  if (Math.abs(steps - Math.round(steps)) > 1e-9)
+    return `Use a multiple of ${formatNumber(r.stepHours * 60, 0)} minutes, the profiles’ step.`;
   return null;
 }
 
-export function HorizonControls({ hours, range, onChange }: { hours: number; range: HorizonRange; onChange: (hours: number) => void }) {
+export function HorizonControls({
+  hours,
+  range,
+  onChange,
+}: {
+  hours: number;
+  range: HorizonRange;
+  onChange: (hours: number) => void;
+}) {
   // What is typed, while it differs from the value in use (null: show the value).
   const [draft, setDraft] = useState<string | null>(null);
   const problem = draft === null ? null : problemWith(draft, range);
@@ -39,12 +49,20 @@ export function HorizonControls({ hours, range, onChange }: { hours: number; ran
           Horizon
         </label>
         <div className="flex items-center gap-3">
-          <input id="preview-horizon-range" type="range" className="w-full accent-seaglass-700" min={range.min} max={range.sliderMax} step={range.sliderStep}
-            value={Math.min(hours, range.sliderMax)} aria-valuetext={`${formatNumber(hours, 2)} hours`}
+          <input
+            id="preview-horizon-range"
+            type="range"
+            className="w-full accent-seaglass-700"
+            min={range.min}
+            max={range.sliderMax}
+            step={range.sliderStep}
+            value={Math.min(hours, range.sliderMax)}
+            aria-valuetext={`${formatNumber(hours, 2)} hours`}
             onChange={(e) => {
               setDraft(null);
               onChange(Number(e.target.value));
-            }} />
+            }}
+          />
           <output htmlFor="preview-horizon-range" className="w-16 shrink-0 text-right font-semibold tabular-nums text-ink-900">
             {formatNumber(hours, 2)} h
           </output>
@@ -58,13 +76,23 @@ export function HorizonControls({ hours, range, onChange }: { hours: number; ran
         <label htmlFor="preview-horizon-hours" className="text-sm font-medium text-ink-800">
           Horizon in hours
         </label>
-        <input id="preview-horizon-hours" type="number" inputMode="decimal" className={inputClass} min={range.min} max={range.maxHours} step={range.stepHours}
-          value={draft ?? String(hours)} aria-invalid={problem !== null} aria-describedby={describedBy('preview-horizon-hours', { error: problem ?? undefined })}
+        <input
+          id="preview-horizon-hours"
+          type="number"
+          inputMode="decimal"
+          className={inputClass}
+          min={range.min}
+          max={range.maxHours}
+          step={range.stepHours}
+          value={draft ?? String(hours)}
+          aria-invalid={problem !== null}
+          aria-describedby={describedBy('preview-horizon-hours', { error: problem ?? undefined })}
           onChange={(e) => {
             setDraft(e.target.value);
             if (problemWith(e.target.value, range) === null) onChange(Number(e.target.value.trim().replace(',', '.')));
           }}
-          onBlur={() => problem === null && setDraft(null)} />
+          onBlur={() => problem === null && setDraft(null)}
+        />
         {problem && (
           <p id="preview-horizon-hours-error" role="alert" className="text-sm text-brick-700">
             {problem}

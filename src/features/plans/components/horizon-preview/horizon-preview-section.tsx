@@ -29,7 +29,13 @@ function rangeFor(plan: Plan, inputs: PlanInputs): HorizonRange {
   const sliderMax = Math.max(limits.minHours, Math.min(limits.maxHours, Math.max(SLIDER_SPAN_HOURS, plan.horizonHours)));
   // Whole hours on the slider when the profiles' step divides an hour (5, 15, 30, 60 minutes).
   const sliderStep = limits.stepHours <= 1 && Number.isInteger(1 / limits.stepHours) ? 1 : limits.stepHours;
-  return { min: limits.minHours, sliderMax, sliderStep, maxHours: Math.max(limits.minHours, limits.maxHours), stepHours: limits.stepHours };
+  return {
+    min: limits.minHours,
+    sliderMax,
+    sliderStep,
+    maxHours: Math.max(limits.minHours, limits.maxHours),
+    stepHours: limits.stepHours,
+  };
 }
 
 export function HorizonPreviewSection({ plan, inputs, results }: { plan: Plan; inputs: PlanInputs; results: PlanResults }) {
@@ -45,12 +51,19 @@ export function HorizonPreviewSection({ plan, inputs, results }: { plan: Plan; i
 
   return (
     <section aria-labelledby="try-horizon-heading" className="space-y-4 rounded-lg border border-ink-100 bg-white p-5 shadow-sm">
-      <h2 id="try-horizon-heading" className="text-lg font-semibold text-ink-900">Try another horizon</h2>
+      <h2 id="try-horizon-heading" className="text-lg font-semibold text-ink-900">
+        Try another horizon
+      </h2>
       {unavailable ? (
         <div className="space-y-2">
-          <p role="note" className="rounded bg-amber-100 p-3 text-sm text-ink-900">{unavailable.message}</p>
+          <p role="note" className="rounded bg-amber-100 p-3 text-sm text-ink-900">
+            {unavailable.message}
+          </p>
           {canEdit && (
-            <Link to={newPlanUrl(plan, plan.horizonHours)} className="inline-block text-sm font-semibold text-seaglass-700 underline">
+            <Link
+              to={newPlanUrl(plan, plan.horizonHours)}
+              className="inline-block text-sm font-semibold text-seaglass-700 underline"
+            >
               Open the plan form with this plan’s inputs
             </Link>
           )}
@@ -58,8 +71,8 @@ export function HorizonPreviewSection({ plan, inputs, results }: { plan: Plan; i
       ) : (
         <>
           <p className="text-sm text-ink-700">
-            Re-plans this plan’s inputs (battery, profiles, window, terminal rule, initial SoC) with another horizon on the exact fast path.
-            Nothing is saved; make a plan with a horizon you like.
+            Re-plans this plan’s inputs (battery, profiles, window, terminal rule, initial SoC) with another horizon on the exact
+            fast path. Nothing is saved; make a plan with a horizon you like.
           </p>
           <HorizonControls hours={hours} range={range} onChange={setHours} />
           <p role="status" aria-live="polite" className="text-sm text-ink-500">
@@ -71,14 +84,25 @@ export function HorizonPreviewSection({ plan, inputs, results }: { plan: Plan; i
           </p>
           {query.isError && (
             <p role="alert" className="rounded border border-brick-600 bg-brick-100 p-3 text-sm text-ink-900">
-              The preview could not be made: {query.error instanceof ApiError ? (query.error.issues[0]?.message ?? query.error.message) : String(query.error)}
+              The preview could not be made:{' '}
+              {query.error instanceof ApiError ? (query.error.issues[0]?.message ?? query.error.message) : String(query.error)}
             </p>
           )}
           {preview && !query.isError && (
             <>
-              <PreviewFigures preview={preview} planHorizonHours={plan.horizonHours} currency={inputs.site.currency}
-                makePlanUrl={canEdit ? newPlanUrl(plan, preview.horizonHours) : null} />
-              <Suspense fallback={<div role="status" className="h-72 rounded bg-white p-4 text-ink-500 shadow-sm">Loading the chart…</div>}>
+              <PreviewFigures
+                preview={preview}
+                planHorizonHours={plan.horizonHours}
+                currency={inputs.site.currency}
+                makePlanUrl={canEdit ? newPlanUrl(plan, preview.horizonHours) : null}
+              />
+              <Suspense
+                fallback={
+                  <div role="status" className="h-72 rounded bg-white p-4 text-ink-500 shadow-sm">
+                    Loading the chart…
+                  </div>
+                }
+              >
                 <PreviewSocChart results={results} planHorizonHours={plan.horizonHours} preview={preview} timeZone={tz} />
               </Suspense>
               <PreviewSocTable results={results} preview={preview} timeZone={tz} />

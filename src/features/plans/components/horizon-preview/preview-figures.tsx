@@ -25,15 +25,24 @@ export function PreviewFigures({ preview, planHorizonHours, currency, makePlanUr
   const h = `${formatNumber(preview.horizonHours, 2)} h`;
   const dh = preview.decisionHorizonHours;
   const rows: [string, string][] = [
-    ['Cost over the delivery window', `${formatMoney(preview.cost, currency)}. ${costChange(preview, planHorizonHours, currency)}`],
+    [
+      'Cost over the delivery window',
+      `${formatMoney(preview.cost, currency)}. ${costChange(preview, planHorizonHours, currency)}`,
+    ],
     [
       'Decision horizon',
       dh === null
         ? 'not available'
         : `delivery decisions depend on prices at most ${formatNumber(dh, 2)} h ahead${preview.decisionHorizonLimitedByData ? ', the whole lookahead: a longer horizon might still change them' : ''}`,
     ],
-    ['Near the steady cycle', `${formatPercent(preview.turnpike.nearSteadyShare)} of the steps; end SoC ${formatNumber(preview.endSocPct, 1)} %`],
-    ['Computed in', `${formatNumber(preview.computeMs, 1)} ms on the exact fast path (${formatNumber(preview.serverMs, 1)} ms on the server in all)`],
+    [
+      'Near the steady cycle',
+      `${formatPercent(preview.turnpike.nearSteadyShare)} of the steps; end SoC ${formatNumber(preview.endSocPct, 1)} %`,
+    ],
+    [
+      'Computed in',
+      `${formatNumber(preview.computeMs, 1)} ms on the exact fast path (${formatNumber(preview.serverMs, 1)} ms on the server in all)`,
+    ],
   ];
   return (
     <div className="space-y-3">
@@ -46,7 +55,10 @@ export function PreviewFigures({ preview, planHorizonHours, currency, makePlanUr
         </ul>
       )}
       {makePlanUrl && (
-        <Link to={makePlanUrl} className="inline-block rounded bg-seaglass-700 px-4 py-2 text-sm font-semibold text-white hover:bg-seaglass-800">
+        <Link
+          to={makePlanUrl}
+          className="inline-block rounded bg-seaglass-700 px-4 py-2 text-sm font-semibold text-white hover:bg-seaglass-800"
+        >
           Make a plan with {h}
         </Link>
       )}

@@ -35,17 +35,45 @@ export default function PreviewSocChart({ results, planHorizonHours, preview, ti
         { colour: colours.seaglass, label: `SoC, ${previewLabel} (lookahead dashed)` },
       ]}
     >
-      <ChartPlot height={260} gridTicks={5} xScale={{ type: 'time' }} yScale={{ type: 'linear', domain: [0, 100] }}
-        accessibilityLabel="SoC in % of the plan and of the preview; the numbers are in the table below the chart">
+      <ChartPlot
+        height={260}
+        gridTicks={5}
+        xScale={{ type: 'time' }}
+        yScale={{ type: 'linear', domain: [0, 100] }}
+        accessibilityLabel="SoC in % of the plan and of the preview; the numbers are in the table below the chart"
+      >
         <Axis orientation="bottom" numTicks={6} tickFormat={timeTick(timeZone)} />
         <Axis orientation="left" numTicks={5} label="SoC %" />
         <LineSeries dataKey={planLabel} data={plan.delivery} xAccessor={x} yAccessor={y} stroke={colours.ink} strokeWidth={2} />
         {plan.lookahead.length > 0 && (
-          <LineSeries dataKey={`${planLabel} (lookahead)`} data={plan.lookahead} xAccessor={x} yAccessor={y} stroke={colours.ink} strokeWidth={2} {...lookaheadLine} />
+          <LineSeries
+            dataKey={`${planLabel} (lookahead)`}
+            data={plan.lookahead}
+            xAccessor={x}
+            yAccessor={y}
+            stroke={colours.ink}
+            strokeWidth={2}
+            {...lookaheadLine}
+          />
         )}
-        <LineSeries dataKey={previewLabel} data={other.delivery} xAccessor={x} yAccessor={y} stroke={colours.seaglass} strokeWidth={2.5} />
+        <LineSeries
+          dataKey={previewLabel}
+          data={other.delivery}
+          xAccessor={x}
+          yAccessor={y}
+          stroke={colours.seaglass}
+          strokeWidth={2.5}
+        />
         {other.lookahead.length > 0 && (
-          <LineSeries dataKey={`${previewLabel} (lookahead)`} data={other.lookahead} xAccessor={x} yAccessor={y} stroke={colours.seaglass} strokeWidth={2.5} {...lookaheadLine} />
+          <LineSeries
+            dataKey={`${previewLabel} (lookahead)`}
+            data={other.lookahead}
+            xAccessor={x}
+            yAccessor={y}
+            stroke={colours.seaglass}
+            strokeWidth={2.5}
+            {...lookaheadLine}
+          />
         )}
         <NearestTooltip<SocPoint>
           render={({ datum, key }) => (
