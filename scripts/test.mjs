@@ -9,6 +9,7 @@ ensureDependencies(root);
 const steps = [
   ['Preparing test databases', 'tsx', ['scripts/prepare-test.ts']],
   ['Type-checking', 'tsc', ['--noEmit', '-p', 'tsconfig.json']],
+  ['Checking formatting', 'prettier', ['--check', '.', '--log-level', 'warn']],
   ['Linting', 'eslint', ['.', '--max-warnings=0']],
   ['Unit and integration tests', 'vitest', ['run', '--config', 'vitest.config.ts']],
   ['Building the web client for browser tests', 'vite', ['build', '--logLevel', 'warn']],
