@@ -3,9 +3,9 @@
  * through a seeder here; seeders are idempotent (a second run changes nothing).
  */
 import { closeDb, initDb } from '../../server/db/client';
-import { seedDemoAccounts } from '../../server/users/demo-accounts';
-import { seedDemoSite } from '../../server/sites/demo-site';
-import { seedDemoPlans } from '../../server/plans/demo-plans';
+import { seedDemoAccounts } from '../../server/demo/demo-accounts';
+import { seedDemoSite } from '../../server/demo/demo-site';
+import { seedDemoPlans } from '../../server/demo/demo-plans';
 
 type Seeder = (log: (m: string) => void, databaseUrl: string) => Promise<void>;
 

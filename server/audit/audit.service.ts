@@ -3,19 +3,24 @@
  * the table is append-only (a trigger refuses UPDATE and DELETE). Never put passwords,
  * tokens or session ids in `details` (ASVS 5.0 16.2-16.4).
  */
-import type { Request } from 'express';
 import type { AuditFilters, AuditPage } from '@shared/schemas/audit';
 import type { DbOrTx } from '../db/client';
 import { getDb } from '../db/client';
-import { clientIp } from '../auth/current-user';
+import type { Actor } from '../http/request-context';
 import { insertAuditEvent, listAuditEvents } from './audit.repo';
 
-/** Who acted: the request's signed-in user and address, or explicit fields (jobs, scripts). */
-export interface AuditActor {
-  actorId?: string | null;
-  actorEmail?: string | null;
-  ip?: string | null;
+/**
+ * Whom a row names when no user is signed in: the e-mail typed at a sign-in
+ * attempt, a script's name, nothing at all for a background job.
+ */
+export interface AnonymousAuthor {
+  readonly actorId?: string | null;
+  readonly actorEmail?: string | null;
+  readonly ip?: string | null;
 }
+
+/** No actor: what a background job records on its own. */
+export const NO_ACTOR: AnonymousAuthor = {};
 
 export interface AuditEventInput {
   /** Dotted verb, e.g. `auth.sign_in`, `user.role_changed`, `plan.approved`. */
@@ -25,21 +30,16 @@ export interface AuditEventInput {
   details?: Record<string, unknown>;
 }
 
-function actorOf(source: Request | AuditActor): AuditActor {
-  if ('method' in source && 'headers' in source) {
-    const req = source;
-    return { actorId: req.user?.id ?? null, actorEmail: req.user?.email ?? null, ip: clientIp(req) };
-  }
-  return source;
-}
+const isActor = (who: Actor | AnonymousAuthor): who is Actor => 'origin' in who;
 
 /**
- * Appends one audit event. Pass the transaction that makes the change, so the event
- * commits (or rolls back) with it: `await recordAudit(tx, req, { action: 'plan.approved', entityType: 'plan', entityId })`.
+ * Appends one audit event, the only way any module writes one. Pass the transaction that
+ * makes the change, so the event commits (or rolls back) with it:
+ * `await recordAudit(tx, actor, { action: 'plan.approved', entityType: 'plan', entityId })`.
  */
-export async function recordAudit(db: DbOrTx, who: Request | AuditActor, event: AuditEventInput): Promise<void> {
-  const actor = actorOf(who);
-  await insertAuditEvent(db, { ...actor, ...event });
+export async function recordAudit(db: DbOrTx, who: Actor | AnonymousAuthor, event: AuditEventInput): Promise<void> {
+  const author = isActor(who) ? { actorId: who.id, actorEmail: who.email, ip: who.ip } : who;
+  await insertAuditEvent(db, { ...author, ...event });
 }
 
 /** One page of the trail, newest first; `nextBefore` continues it. */

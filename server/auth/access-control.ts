@@ -9,6 +9,7 @@ import { getDb } from '../db/client';
 import { AppError } from '../http/app-error';
 import { logger } from '../logger';
 import { recordAudit } from '../audit/audit.service';
+import { requestAuthor } from '../http/request-context';
 import { accessTable, type Access } from './access-table';
 import { compilePattern, findPattern, parseRouteKey, type RoutePattern } from './route-pattern';
 import type { RegisteredRoute } from './route-inventory';
@@ -56,7 +57,7 @@ export function accessControl(registeredRoutes: () => readonly RegisteredRoute[]
 
 async function auditRefusal(req: Parameters<RequestHandler>[0], path: string, reason: string) {
   try {
-    await recordAudit(getDb(), req, {
+    await recordAudit(getDb(), requestAuthor(req), {
       action: 'access.denied',
       details: { method: req.method, path: path.slice(0, 300), reason },
     });

@@ -7,13 +7,12 @@ import {
   passwordResetRequestSchema,
   signInRequestSchema,
 } from '@shared/schemas/auth';
-import { getDb } from '../db/client';
 import { AppError } from '../http/app-error';
 import { logger } from '../logger';
-import { recordAudit } from '../audit/audit.service';
+import { requestAuthor } from '../http/request-context';
 import { appConfig, clientIp, requireUser } from './current-user';
 import { appendCookie, storeFor } from './session-middleware';
-import { changePassword, requestPasswordReset, signIn } from './auth.service';
+import { changePassword, recordSignOut, requestPasswordReset, signIn } from './auth.service';
 import { checkLink, redeemLink } from './password-links.service';
 
 export const authRouter = Router();
@@ -45,7 +44,7 @@ authRouter.post('/auth/sign-out', async (req, res) => {
   const store = storeFor(appConfig(req));
   if (req.sessionId) {
     await store.invalidate(req.sessionId);
-    await recordAudit(getDb(), req, { action: 'auth.sign_out', entityType: 'user', entityId: req.user?.id });
+    await recordSignOut(requestAuthor(req), req.user?.id);
   }
   appendCookie(res, store.blankCookie());
   res.status(204).end();

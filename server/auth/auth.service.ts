@@ -3,7 +3,7 @@ import type { AuthUser } from '@shared/schemas/auth';
 import { getDb } from '../db/client';
 import { AppError, unprocessable } from '../http/app-error';
 import { logger } from '../logger';
-import { recordAudit } from '../audit/audit.service';
+import { recordAudit, type AnonymousAuthor } from '../audit/audit.service';
 import { sendMail } from '../mail/mail.service';
 import * as repo from './auth.repo';
 import { hashPassword, needsRehash, spendVerifyTime, verifyPassword } from './password-hash';
@@ -150,4 +150,9 @@ export async function requestPasswordReset(email: string, ip: string, appOrigin:
   if (!user || !('token' in plan)) return async () => undefined;
   const mail = passwordLinkMail('reset', user, passwordLinkUrl(appOrigin, plan.token));
   return () => sendMail(mail);
+}
+
+/** The audit row of a sign-out (the session itself ends in the session store). */
+export async function recordSignOut(author: AnonymousAuthor, userId: string | undefined): Promise<void> {
+  await recordAudit(getDb(), author, { action: 'auth.sign_out', entityType: 'user', entityId: userId });
 }

@@ -6,7 +6,7 @@ import { createHash, randomBytes } from 'node:crypto';
 import type { PasswordLinkInfo } from '@shared/schemas/auth';
 import { getDb, type DbOrTx } from '../db/client';
 import { AppError } from '../http/app-error';
-import { recordAudit, type AuditActor } from '../audit/audit.service';
+import { recordAudit, type AnonymousAuthor } from '../audit/audit.service';
 import * as repo from './auth.repo';
 import { linkLifetimeHours } from './password-link-mail';
 import { hashPassword } from './password-hash';
@@ -45,7 +45,7 @@ export async function checkLink(token: string): Promise<PasswordLinkInfo> {
  * of two simultaneous redemptions exactly one succeeds. A password the policy refuses
  * leaves the link usable. Returns the user whose sessions must now end.
  */
-export async function redeemLink(token: string, password: string, who: AuditActor): Promise<{ userId: string }> {
+export async function redeemLink(token: string, password: string, who: AnonymousAuthor): Promise<{ userId: string }> {
   return getDb().transaction(async (tx) => {
     const { link, user } = usableLink(await repo.findLink(tx, sha256(token), true));
     assertAcceptablePassword(password, { email: user.email, name: user.name });

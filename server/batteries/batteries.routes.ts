@@ -1,7 +1,7 @@
 /** `GET|POST /api/sites/:id/batteries`, `GET|PATCH /api/batteries/:id` (DESIGN section 6). */
 import { Router } from 'express';
 import { batteryCreateSchema, batteryPatchSchema } from '@shared/schemas/battery';
-import { actorFrom, pathId } from '../sites/request-context';
+import { actorOf, pathId } from '../http/request-context';
 import * as service from './batteries.service';
 
 export const batteriesRouter = Router();
@@ -13,7 +13,7 @@ batteriesRouter.get('/sites/:id/batteries', async (req, res) => {
 batteriesRouter.post('/sites/:id/batteries', async (req, res) => {
   const siteId = pathId(req, 'site');
   const input = batteryCreateSchema.parse(req.body);
-  res.status(201).json(await service.createBattery(siteId, input, actorFrom(req)));
+  res.status(201).json(await service.createBattery(siteId, input, actorOf(req)));
 });
 
 batteriesRouter.get('/batteries/:id', async (req, res) => {
@@ -23,5 +23,5 @@ batteriesRouter.get('/batteries/:id', async (req, res) => {
 batteriesRouter.patch('/batteries/:id', async (req, res) => {
   const id = pathId(req, 'battery');
   const patch = batteryPatchSchema.parse(req.body);
-  res.json(await service.updateBattery(id, patch, actorFrom(req)));
+  res.json(await service.updateBattery(id, patch, actorOf(req)));
 });

@@ -12,10 +12,11 @@ import {
 } from '@shared/schemas/battery';
 import { withLithiumIonDefaults } from '@shared/schemas/battery-defaults';
 import { batteryWarnings, type SiteLimits } from '@shared/schemas/battery-warnings';
-import { insertAuditEvent } from '../audit/audit.repo';
+import { recordAudit } from '../audit/audit.service';
 import { getDb } from '../db/client';
 import { conflict, notFound } from '../http/app-error';
-import { auditActor, withUniqueCheck, type Actor } from '../sites/request-context';
+import { withUniqueCheck } from '../db/pg-errors';
+import type { Actor } from '../http/request-context';
 import { requireSite } from '../sites/sites.service';
 import type { BatteryRow } from './batteries.schema';
 import * as repo from './batteries.repo';
@@ -75,8 +76,7 @@ export async function createBattery(siteId: string, input: BatteryCreateInput, a
         // Throws a ZodError (422 with the field's path) when the filled-in battery is inconsistent.
         const fields = batterySchema.parse(withLithiumIonDefaults(input));
         const row = await repo.insertBattery(tx, { ...fields, siteId, createdBy: actor.id });
-        await insertAuditEvent(tx, {
-          ...auditActor(actor),
+        await recordAudit(tx, actor, {
           action: 'battery.create',
           entityType: 'battery',
           entityId: row.id,
@@ -110,8 +110,7 @@ export async function updateBattery(id: string, patch: BatteryPatch, actor: Acto
             .filter(([key, value]) => before[key as keyof BatteryFields] !== value)
             .map(([key, value]) => [key, { from: before[key as keyof BatteryFields], to: value }]),
         );
-        await insertAuditEvent(tx, {
-          ...auditActor(actor),
+        await recordAudit(tx, actor, {
           action: 'battery.update',
           entityType: 'battery',
           entityId: id,

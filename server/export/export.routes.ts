@@ -1,15 +1,14 @@
 /** `GET /api/plans/:id/export.csv`: RFC 4180 CSV with the checksum and status in headers. */
 import { Router } from 'express';
-import { planIdParamsSchema } from '@shared/schemas/sign-off';
-import { clientIp, requireUser } from '../auth/current-user';
+import { actorOf } from '../http/request-context';
+import { planPathId } from '../sign-off/plan-path-id';
 import { CSV_MEDIA_TYPE } from './csv-writer';
 import { exportPlan } from './export.service';
 
 export const exportRouter = Router();
 
 exportRouter.get('/plans/:id/export.csv', async (req, res) => {
-  const { id } = planIdParamsSchema.parse(req.params);
-  const file = await exportPlan({ user: requireUser(req), ip: clientIp(req) }, id);
+  const file = await exportPlan(actorOf(req), planPathId(req));
   res.setHeader('Content-Type', CSV_MEDIA_TYPE);
   // The name is ASCII by construction (export-file-name.ts), so the plain form of RFC 6266 suffices.
   res.setHeader('Content-Disposition', `attachment; filename="${file.fileName}"`);

@@ -5,13 +5,13 @@
  * that no longer matches what was approved is never served (SECURITY.md,
  * "Data integrity").
  */
-import type { AuthUser } from '@shared/schemas/auth';
 import type { PlanResults, PlanStep } from '@shared/schemas/plan';
 import { SIGN_OFF_CAUTIONS } from '@shared/schemas/sign-off';
 import { getDb } from '../db/client';
 import { AppError, forbidden, notFound } from '../http/app-error';
 import { logger } from '../logger';
 import { recordAudit } from '../audit/audit.service';
+import type { Actor } from '../http/request-context';
 import type { PlanRow } from '../plans/plans.schema';
 import { checksumMatches } from '../sign-off/plan-checksum';
 import { exportFileName } from './export-file-name';
@@ -24,11 +24,6 @@ export interface PlanExport {
   status: PlanRow['status'];
   /** Only for signed-off plans, after it was verified. */
   checksum: string | null;
-}
-
-export interface Requester {
-  user: AuthUser;
-  ip: string | null;
 }
 
 function deliverySteps(results: PlanResults): PlanStep[] {
@@ -73,11 +68,11 @@ function notice(status: PlanRow['status']): string {
   return [head, ...SIGN_OFF_CAUTIONS].join(' ');
 }
 
-export async function exportPlan(who: Requester, id: string): Promise<PlanExport> {
+export async function exportPlan(actor: Actor, id: string): Promise<PlanExport> {
   const db = getDb();
   const plan = await findPlanForExport(db, id);
   if (!plan) throw notFound('The plan');
-  if (who.user.role === 'viewer' && plan.status !== 'approved') {
+  if (actor.role === 'viewer' && plan.status !== 'approved') {
     throw forbidden(`Viewers may export approved plans only; this plan is ${plan.status}.`);
   }
   if (plan.results === null) {
@@ -92,11 +87,12 @@ export async function exportPlan(who: Requester, id: string): Promise<PlanExport
   const signedOff = plan.status === 'approved' || plan.status === 'superseded';
   if (signedOff && !checksumMatches(plan.checksum, { planId: plan.id, inputs: plan.inputs, results: plan.results })) {
     logger.error(`Checksum mismatch on export of plan ${plan.id}: its stored inputs or results changed after approval`);
-    await recordAudit(
-      db,
-      { actorId: who.user.id, actorEmail: who.user.email, ip: who.ip },
-      { action: 'plan.checksum_mismatch', entityType: 'plan', entityId: plan.id, details: { stored: plan.checksum } },
-    );
+    await recordAudit(db, actor, {
+      action: 'plan.checksum_mismatch',
+      entityType: 'plan',
+      entityId: plan.id,
+      details: { stored: plan.checksum },
+    });
     throw new AppError(
       'checksum_mismatch',
       'This plan no longer matches the checksum taken when it was approved, so it is not exported. Its stored data was changed outside Slackwater; an administrator must restore it from a backup.',
@@ -130,15 +126,11 @@ export async function exportPlan(who: Requester, id: string): Promise<PlanExport
     status: plan.status,
     checksum: signedOff ? plan.checksum : null,
   });
-  await recordAudit(
-    db,
-    { actorId: who.user.id, actorEmail: who.user.email, ip: who.ip },
-    {
-      action: 'plan.exported',
-      entityType: 'plan',
-      entityId: plan.id,
-      details: { status: plan.status, checksum: signedOff ? plan.checksum : null, fileName },
-    },
-  );
+  await recordAudit(db, actor, {
+    action: 'plan.exported',
+    entityType: 'plan',
+    entityId: plan.id,
+    details: { status: plan.status, checksum: signedOff ? plan.checksum : null, fileName },
+  });
   return { fileName, csv, status: plan.status, checksum: signedOff ? plan.checksum : null };
 }

@@ -8,7 +8,7 @@ import { MemoryStore, rateLimit } from 'express-rate-limit';
 import { horizonPreviewRequestSchema } from '@shared/schemas/horizon-preview';
 import { requireUser } from '../auth/current-user';
 import { AppError } from '../http/app-error';
-import { pathId } from '../sites/request-context';
+import { pathId } from '../http/request-context';
 import { PreviewBusyError } from './preview-thread-client';
 import * as service from './horizon-preview.service';
 

@@ -6,7 +6,7 @@ import { randomUUID } from 'node:crypto';
 import type { JobKind } from '@shared/schemas/job';
 import type { Db } from '../db/client';
 import { insertAuditEvent } from '../audit/audit.repo';
-import type { Actor } from '../sites/request-context';
+import type { Actor } from '../http/request-context';
 import { inJobTransaction } from './job-transaction';
 import { enqueueJob, newJobId } from './enqueue';
 

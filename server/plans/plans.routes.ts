@@ -7,14 +7,14 @@ import { Router } from 'express';
 import { z } from 'zod';
 import { planCreateSchema, planListQuerySchema } from '@shared/schemas/plan';
 import { appConfig } from '../auth/current-user';
-import { actorFrom, pathId } from '../sites/request-context';
+import { actorOf, pathId } from '../http/request-context';
 import * as service from './plans.service';
 
 export const plansRouter = Router();
 
 plansRouter.post('/plans', async (req, res) => {
   const body = planCreateSchema.parse(req.body);
-  res.status(202).json(await service.createPlan(body, actorFrom(req), appConfig(req).DATABASE_URL));
+  res.status(202).json(await service.createPlan(body, actorOf(req), appConfig(req).DATABASE_URL));
 });
 
 plansRouter.get('/plans', async (req, res) => {

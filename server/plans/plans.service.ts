@@ -8,7 +8,7 @@ import { findSite } from '../sites/sites.repo';
 import { createWithJob } from '../jobs/create-with-job';
 import { toJobProgress } from '../jobs/job-serializer';
 import { getJobProgress } from '../jobs/job-progress.repo';
-import type { Actor } from '../sites/request-context';
+import type { Actor } from '../http/request-context';
 import { checkWholeSteps, gridStepMinutes, resolveRunInputs, runColumns } from './run-inputs';
 import { checkTerminalTarget, resolveInitialSoc } from './initial-soc';
 import { findPlan, insertPlan, listPlans } from './plans.repo';

@@ -8,10 +8,10 @@
 import { createHash } from 'node:crypto';
 import { decodeProfileBytes, parseProfileCsv } from '@shared/profile-csv';
 import type { ProfileUploadOptions } from '@shared/schemas/profile-upload';
-import { insertAuditEvent } from '../audit/audit.repo';
+import { recordAudit } from '../audit/audit.service';
 import { getDb } from '../db/client';
 import { AppError } from '../http/app-error';
-import { auditActor, type Actor } from '../sites/request-context';
+import type { Actor } from '../http/request-context';
 import { requireSite } from '../sites/sites.service';
 import * as repo from './profiles.repo';
 
@@ -113,8 +113,7 @@ export async function uploadProfile(
       originalSha256: sha256,
       uploadedBy: actor.id,
     });
-    await insertAuditEvent(tx, {
-      ...auditActor(actor),
+    await recordAudit(tx, actor, {
       action: 'profile.upload',
       entityType: 'profile',
       entityId: id,

@@ -7,7 +7,7 @@ import { Router } from 'express';
 import { profileListQuerySchema, profileNameSchema, profileWindowQuerySchema } from '@shared/schemas/profile';
 import { profileUploadOptionsSchema } from '@shared/schemas/profile-upload';
 import { AppError } from '../http/app-error';
-import { actorFrom, pathId } from '../sites/request-context';
+import { actorOf, pathId } from '../http/request-context';
 import { receiveProfileUpload } from './profile-upload.middleware';
 import { uploadProfile } from './profile-upload.service';
 import * as service from './profiles.service';
@@ -32,7 +32,7 @@ function parseUploadFields(body: unknown) {
 profilesRouter.post('/sites/:id/profiles', receiveProfileUpload, async (req, res) => {
   const siteId = pathId(req, 'site');
   const options = parseUploadFields(req.body ?? {});
-  const id = await uploadProfile(siteId, req.file, options, actorFrom(req));
+  const id = await uploadProfile(siteId, req.file, options, actorOf(req));
   res.status(201).json(await service.getProfileSummary(id));
 });
 
@@ -56,6 +56,6 @@ profilesRouter.get('/profiles/:id/original', async (req, res) => {
 });
 
 profilesRouter.delete('/profiles/:id', async (req, res) => {
-  await service.deleteProfile(pathId(req, 'profile'), actorFrom(req));
+  await service.deleteProfile(pathId(req, 'profile'), actorOf(req));
   res.status(204).end();
 });

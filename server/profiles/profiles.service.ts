@@ -1,10 +1,11 @@
 /** Reading and deleting profiles; uploads live in profile-upload.service.ts. */
 import type { ProfileDetail, ProfileSummary, ProfileWindowQuery } from '@shared/schemas/profile';
 import type { ProfileKind } from '@shared/profile-csv';
-import { insertAuditEvent } from '../audit/audit.repo';
+import { recordAudit } from '../audit/audit.service';
 import { getDb } from '../db/client';
 import { AppError, conflict, notFound, unprocessable } from '../http/app-error';
-import { auditActor, FOREIGN_KEY_VIOLATION, pgErrorCode, type Actor } from '../sites/request-context';
+import { FOREIGN_KEY_VIOLATION, pgErrorCode } from '../db/pg-errors';
+import type { Actor } from '../http/request-context';
 import { requireSite } from '../sites/sites.service';
 import { findProtectingPlans } from './profile-usage';
 import * as repo from './profiles.repo';
@@ -120,8 +121,7 @@ export async function deleteProfile(id: string, actor: Actor): Promise<void> {
         );
       }
       await repo.deleteProfile(tx, id);
-      await insertAuditEvent(tx, {
-        ...auditActor(actor),
+      await recordAudit(tx, actor, {
         action: 'profile.delete',
         entityType: 'profile',
         entityId: id,

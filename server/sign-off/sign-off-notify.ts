@@ -12,7 +12,7 @@ import { sendMail } from '../mail/mail.service';
 import { planFacts } from './plan-facts';
 import { decisionMail, planLink, submittedMail, type MailText, type PlanMailFacts } from './sign-off-mail';
 import { findPeople, listSignOffRecipients } from './sign-off.repo';
-import type { Actor } from './actor';
+import type { Actor } from '../http/request-context';
 
 function mailFacts(actor: Actor, plan: PlanRow): PlanMailFacts {
   const facts = planFacts(plan);
@@ -21,7 +21,7 @@ function mailFacts(actor: Actor, plan: PlanRow): PlanMailFacts {
     siteName: facts.siteName,
     batteryName: facts.batteryName,
     window: facts.window,
-    link: planLink(actor.appOrigin, plan.id),
+    link: planLink(actor.origin, plan.id),
   };
 }
 
@@ -31,16 +31,12 @@ async function deliver(actor: Actor, plan: PlanRow, to: string, mail: MailText, 
   } catch (error) {
     logger.error(`Could not send the ${purpose} e-mail for plan ${plan.id}`, error);
     try {
-      await recordAudit(
-        getDb(),
-        { actorId: actor.user.id, actorEmail: actor.user.email, ip: actor.ip },
-        {
-          action: 'mail.failed',
-          entityType: 'plan',
-          entityId: plan.id,
-          details: { purpose, to },
-        },
-      );
+      await recordAudit(getDb(), actor, {
+        action: 'mail.failed',
+        entityType: 'plan',
+        entityId: plan.id,
+        details: { purpose, to },
+      });
     } catch (auditError) {
       logger.error('Could not record the failed e-mail in the audit trail', auditError);
     }
@@ -49,8 +45,8 @@ async function deliver(actor: Actor, plan: PlanRow, to: string, mail: MailText, 
 
 /** Every approver and admin except the submitter hears of the submitted plan, with a link to it. */
 export async function notifySubmitted(actor: Actor, plan: PlanRow, comment: string | undefined): Promise<void> {
-  const recipients = await listSignOffRecipients(getDb(), actor.user.id);
-  const mail = submittedMail(mailFacts(actor, plan), actor.user.name, comment);
+  const recipients = await listSignOffRecipients(getDb(), actor.id);
+  const mail = submittedMail(mailFacts(actor, plan), actor.name, comment);
   await Promise.all(recipients.map((r) => deliver(actor, plan, r.email, mail, 'sign-off request')));
 }
 
@@ -67,7 +63,7 @@ export async function notifyDecision(
   const mail = decisionMail(
     mailFacts(actor, plan),
     decision,
-    actor.user.name,
+    actor.name,
     comment,
     decision === 'approved' ? plan.checksum : null,
   );

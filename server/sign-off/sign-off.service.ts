@@ -22,7 +22,7 @@ import {
   type NewPlanEvent,
 } from './sign-off.repo';
 import { notifyDecision, notifySubmitted } from './sign-off-notify';
-import type { Actor } from './actor';
+import type { Actor } from '../http/request-context';
 import { refusal, VERB, type Step } from './sign-off-rules';
 
 async function load(tx: DbOrTx, id: string) {
@@ -51,9 +51,9 @@ function event(
   return {
     planId: plan.id,
     action,
-    actorId: actor.user.id,
-    actorName: actor.user.name,
-    actorEmail: actor.user.email,
+    actorId: actor.id,
+    actorName: actor.name,
+    actorEmail: actor.email,
     fromStatus: from,
     toStatus: plan.status,
     version: plan.version,
@@ -61,8 +61,6 @@ function event(
     details,
   };
 }
-
-const auditActor = (actor: Actor) => ({ actorId: actor.user.id, actorEmail: actor.user.email, ip: actor.ip });
 
 /**
  * Runs an action's transaction; a refusal on segregation of duties is a refused
@@ -74,7 +72,7 @@ async function auditingRefusals<T>(actor: Actor, id: string, step: Step, run: ()
     return await run();
   } catch (error) {
     if (error instanceof AppError && error.status === 403) {
-      await recordAudit(getDb(), auditActor(actor), {
+      await recordAudit(getDb(), actor, {
         action: 'access.denied',
         entityType: 'plan',
         entityId: id,
@@ -88,12 +86,12 @@ async function auditingRefusals<T>(actor: Actor, id: string, step: Step, run: ()
 export async function submitPlan(actor: Actor, id: string, body: SignOffAction): Promise<PlanRow> {
   const plan = await getDb().transaction(async (tx) => {
     const before = await load(tx, id);
-    const refused = refusal(before, 'submitted', body.version, actor.user.id);
+    const refused = refusal(before, 'submitted', body.version, actor.id);
     if (refused) throw refused;
-    const row = await markSubmitted(tx, id, body.version, actor.user.id);
-    if (!row) throw await lostRace(tx, id, 'submitted', body.version, actor.user.id);
+    const row = await markSubmitted(tx, id, body.version, actor.id);
+    if (!row) throw await lostRace(tx, id, 'submitted', body.version, actor.id);
     await insertPlanEvent(tx, event(row, actor, 'submitted', before.status, body.comment ?? null));
-    await recordAudit(tx, auditActor(actor), {
+    await recordAudit(tx, actor, {
       action: 'plan.submitted',
       entityType: 'plan',
       entityId: id,
@@ -125,21 +123,21 @@ export async function approvePlan(actor: Actor, id: string, body: SignOffAction)
 function approveInTransaction(actor: Actor, id: string, body: SignOffAction): Promise<Approval> {
   return getDb().transaction(async (tx) => {
     const before = await load(tx, id);
-    const refused = refusal(before, 'approved', body.version, actor.user.id);
+    const refused = refusal(before, 'approved', body.version, actor.id);
     if (refused) throw refused;
     await lockBatteryApprovals(tx, before.batteryId);
     const checksum = planChecksum({ planId: before.id, inputs: before.inputs, results: before.results });
     const row = await markApproved(tx, {
       id,
       version: body.version,
-      userId: actor.user.id,
+      userId: actor.id,
       comment: body.comment ?? null,
       checksum,
       fingerprint: before.fingerprint,
     });
-    if (!row) throw await lostRace(tx, id, 'approved', body.version, actor.user.id);
+    if (!row) throw await lostRace(tx, id, 'approved', body.version, actor.id);
     await insertPlanEvent(tx, event(row, actor, 'approved', before.status, body.comment ?? null, { checksum }));
-    await recordAudit(tx, auditActor(actor), {
+    await recordAudit(tx, actor, {
       action: 'plan.approved',
       entityType: 'plan',
       entityId: id,
@@ -156,16 +154,16 @@ function approveInTransaction(actor: Actor, id: string, body: SignOffAction): Pr
       await insertPlanEvent(tx, {
         planId: old.id,
         action: 'superseded',
-        actorId: actor.user.id,
-        actorName: actor.user.name,
-        actorEmail: actor.user.email,
+        actorId: actor.id,
+        actorName: actor.name,
+        actorEmail: actor.email,
         fromStatus: 'approved',
         toStatus: 'superseded',
         version: old.version,
         comment: null,
         details: { supersededBy: id },
       });
-      await recordAudit(tx, auditActor(actor), {
+      await recordAudit(tx, actor, {
         action: 'plan.superseded',
         entityType: 'plan',
         entityId: old.id,
@@ -185,12 +183,12 @@ export async function rejectPlan(actor: Actor, id: string, body: { comment: stri
 function rejectInTransaction(actor: Actor, id: string, body: { comment: string; version: number }): Promise<PlanRow> {
   return getDb().transaction(async (tx) => {
     const before = await load(tx, id);
-    const refused = refusal(before, 'rejected', body.version, actor.user.id);
+    const refused = refusal(before, 'rejected', body.version, actor.id);
     if (refused) throw refused;
-    const row = await markRejected(tx, id, body.version, actor.user.id, body.comment);
-    if (!row) throw await lostRace(tx, id, 'rejected', body.version, actor.user.id);
+    const row = await markRejected(tx, id, body.version, actor.id, body.comment);
+    if (!row) throw await lostRace(tx, id, 'rejected', body.version, actor.id);
     await insertPlanEvent(tx, event(row, actor, 'rejected', before.status, body.comment));
-    await recordAudit(tx, auditActor(actor), {
+    await recordAudit(tx, actor, {
       action: 'plan.rejected',
       entityType: 'plan',
       entityId: id,
@@ -207,9 +205,9 @@ export async function copyPlan(actor: Actor, id: string): Promise<PlanRow> {
     if (source.status !== 'rejected') {
       throw new AppError('wrong_status', `The plan is ${source.status}; only a rejected plan is copied into a new draft.`, 409);
     }
-    const copy = await insertDraftCopy(tx, source, actor.user.id);
+    const copy = await insertDraftCopy(tx, source, actor.id);
     await insertPlanEvent(tx, event(source, actor, 'copied', source.status, null, { copyId: copy.id }));
-    await recordAudit(tx, auditActor(actor), {
+    await recordAudit(tx, actor, {
       action: 'plan.copied',
       entityType: 'plan',
       entityId: copy.id,

@@ -1,7 +1,7 @@
 /** `GET|POST /api/sites`, `GET|PATCH /api/sites/:id` (DESIGN section 6). HTTP only: rules live in the service. */
 import { Router } from 'express';
 import { siteCreateSchema, sitePatchSchema } from '@shared/schemas/site';
-import { actorFrom, pathId } from './request-context';
+import { actorOf, pathId } from '../http/request-context';
 import * as service from './sites.service';
 
 export const sitesRouter = Router();
@@ -12,7 +12,7 @@ sitesRouter.get('/sites', async (_req, res) => {
 
 sitesRouter.post('/sites', async (req, res) => {
   const fields = siteCreateSchema.parse(req.body);
-  res.status(201).json(await service.createSite(fields, actorFrom(req)));
+  res.status(201).json(await service.createSite(fields, actorOf(req)));
 });
 
 sitesRouter.get('/sites/:id', async (req, res) => {
@@ -22,5 +22,5 @@ sitesRouter.get('/sites/:id', async (req, res) => {
 sitesRouter.patch('/sites/:id', async (req, res) => {
   const id = pathId(req, 'site');
   const patch = sitePatchSchema.parse(req.body);
-  res.json(await service.updateSite(id, patch, actorFrom(req)));
+  res.json(await service.updateSite(id, patch, actorOf(req)));
 });

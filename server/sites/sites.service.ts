@@ -1,9 +1,10 @@
 /** Site rules: unique names, audit on every change, one transaction per change. */
 import type { Site, SiteFields, SitePatch } from '@shared/schemas/site';
-import { insertAuditEvent } from '../audit/audit.repo';
+import { recordAudit } from '../audit/audit.service';
 import { getDb, type DbOrTx } from '../db/client';
 import { conflict, notFound } from '../http/app-error';
-import { auditActor, withUniqueCheck, type Actor } from './request-context';
+import { withUniqueCheck } from '../db/pg-errors';
+import type { Actor } from '../http/request-context';
 import * as repo from './sites.repo';
 
 function toSite(row: repo.SiteWithCounts): Site {
@@ -47,8 +48,7 @@ export async function createSite(fields: SiteFields, actor: Actor): Promise<Site
     () =>
       getDb().transaction(async (tx) => {
         const row = await repo.insertSite(tx, { ...fields, createdBy: actor.id });
-        await insertAuditEvent(tx, {
-          ...auditActor(actor),
+        await recordAudit(tx, actor, {
           action: 'site.create',
           entityType: 'site',
           entityId: row.id,
@@ -71,8 +71,7 @@ export async function updateSite(id: string, patch: SitePatch, actor: Actor): Pr
         const changes = Object.fromEntries(
           Object.entries(patch).map(([key, value]) => [key, { from: before[key as keyof SitePatch], to: value }]),
         );
-        await insertAuditEvent(tx, {
-          ...auditActor(actor),
+        await recordAudit(tx, actor, {
           action: 'site.update',
           entityType: 'site',
           entityId: id,

@@ -2,14 +2,14 @@
 import { Router } from 'express';
 import { studyCreateSchema, studyListQuerySchema } from '@shared/schemas/study';
 import { appConfig } from '../auth/current-user';
-import { actorFrom, pathId } from '../sites/request-context';
+import { actorOf, pathId } from '../http/request-context';
 import * as service from './studies.service';
 
 export const studiesRouter = Router();
 
 studiesRouter.post('/studies', async (req, res) => {
   const body = studyCreateSchema.parse(req.body);
-  res.status(202).json(await service.createStudy(body, actorFrom(req), appConfig(req).DATABASE_URL));
+  res.status(202).json(await service.createStudy(body, actorOf(req), appConfig(req).DATABASE_URL));
 });
 
 studiesRouter.get('/studies', async (req, res) => {

@@ -6,7 +6,7 @@ import { notFound } from '../http/app-error';
 import { createWithJob } from '../jobs/create-with-job';
 import { toJobProgress } from '../jobs/job-serializer';
 import { getJobProgress } from '../jobs/job-progress.repo';
-import type { Actor } from '../sites/request-context';
+import type { Actor } from '../http/request-context';
 import { checkWholeSteps, gridStepMinutes, resolveRunInputs, runColumns } from '../plans/run-inputs';
 import { checkTerminalTarget, resolveInitialSoc } from '../plans/initial-soc';
 import { DEFAULT_BAND_PCT } from '../plans/plans.service';

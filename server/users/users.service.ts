@@ -5,7 +5,8 @@ import type { InviteResult, User } from '@shared/schemas/users';
 import { getDb } from '../db/client';
 import { conflict, notFound } from '../http/app-error';
 import { logger } from '../logger';
-import { recordAudit, type AuditActor } from '../audit/audit.service';
+import { recordAudit } from '../audit/audit.service';
+import type { Actor } from '../http/request-context';
 import { sendMail } from '../mail/mail.service';
 import { issueLink } from '../auth/password-links.service';
 import { passwordLinkMail, passwordLinkUrl } from '../auth/password-link-mail';
@@ -27,20 +28,13 @@ export function toUser(row: UserRow): User {
   };
 }
 
-/** Who acts, for the audit trail and the invitation e-mail. */
-export interface Admin extends AuditActor {
-  actorId: string;
-  actorEmail: string;
-  name: string;
-}
-
 export async function listUsers(): Promise<User[]> {
   return (await repo.listUsers(getDb())).map(toUser);
 }
 
-async function mailLink(user: UserRow, token: string, appOrigin: string, admin: Admin): Promise<'sent' | 'failed'> {
+async function mailLink(user: UserRow, token: string, admin: Actor): Promise<'sent' | 'failed'> {
   try {
-    await sendMail(passwordLinkMail('invite', user, passwordLinkUrl(appOrigin, token), admin.name));
+    await sendMail(passwordLinkMail('invite', user, passwordLinkUrl(admin.origin, token), admin.name));
     return 'sent';
   } catch (error) {
     logger.error(`The invitation e-mail to user ${user.id} could not be sent`, error);
@@ -48,11 +42,7 @@ async function mailLink(user: UserRow, token: string, appOrigin: string, admin: 
   }
 }
 
-export async function inviteUser(
-  input: { email: string; name: string; role: Role },
-  admin: Admin,
-  appOrigin: string,
-): Promise<InviteResult> {
+export async function inviteUser(input: { email: string; name: string; role: Role }, admin: Actor): Promise<InviteResult> {
   const { user, token } = await getDb().transaction(async (tx) => {
     const created = await repo.insertUser(tx, { id: randomUUID(), email: input.email, name: input.name, role: input.role });
     if (!created) throw conflict(`A user with the e-mail ${input.email} already exists.`);
@@ -64,11 +54,11 @@ export async function inviteUser(
     });
     return { user: created, token: await issueLink(tx, created.id, 'invite') };
   });
-  return { user: toUser(user), mail: await mailLink(user, token, appOrigin, admin) };
+  return { user: toUser(user), mail: await mailLink(user, token, admin) };
 }
 
 /** A fresh invitation link (the old one stops working) for someone who has not set a password yet. */
-export async function resendInvitation(id: string, admin: Admin, appOrigin: string): Promise<InviteResult> {
+export async function resendInvitation(id: string, admin: Actor): Promise<InviteResult> {
   const { user, token } = await getDb().transaction(async (tx) => {
     const row = await repo.findUserById(tx, id, true);
     if (!row) throw notFound('The user');
@@ -78,7 +68,7 @@ export async function resendInvitation(id: string, admin: Admin, appOrigin: stri
     await recordAudit(tx, admin, { action: 'user.invitation_resent', entityType: 'user', entityId: row.id });
     return { user: row, token: await issueLink(tx, row.id, 'invite') };
   });
-  return { user: toUser(user), mail: await mailLink(user, token, appOrigin, admin) };
+  return { user: toUser(user), mail: await mailLink(user, token, admin) };
 }
 
 function guardLastAdmin(admins: string[], row: UserRow, patch: repo.UserPatch) {
@@ -89,7 +79,7 @@ function guardLastAdmin(admins: string[], row: UserRow, patch: repo.UserPatch) {
   }
 }
 
-export async function updateUser(id: string, patch: repo.UserPatch, admin: Admin): Promise<User> {
+export async function updateUser(id: string, patch: repo.UserPatch, admin: Actor): Promise<User> {
   const updated = await getDb().transaction(async (tx) => {
     // Admin rows are locked before the target row, in the same order by every transaction.
     const admins = patch.role !== undefined || patch.disabled !== undefined ? await repo.lockActiveAdmins(tx) : [];

@@ -36,8 +36,6 @@ export const rejectActionSchema = z.strictObject({
 
 export const copyActionSchema = z.strictObject({});
 
-export const planIdParamsSchema = z.object({ id: z.uuid({ message: 'The plan id is not a valid id.' }) });
-
 export const PLAN_EVENT_ACTIONS = ['submitted', 'approved', 'rejected', 'superseded', 'copied'] as const;
 export type PlanEventAction = (typeof PLAN_EVENT_ACTIONS)[number];
 

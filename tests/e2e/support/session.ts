@@ -8,7 +8,7 @@ import type { APIResponse, BrowserContext, Page } from 'playwright-core';
 
 export type DemoRole = 'viewer' | 'planner' | 'approver' | 'admin';
 
-/** The demo accounts' shared password (server/users/demo-accounts.ts; demo only). */
+/** The demo accounts' shared password (server/demo/demo-accounts.ts; demo only). */
 export const demoPassword = 'slackwater-demo';
 export const demoEmail = (role: DemoRole) => `${role}@slackwater.example`;
 

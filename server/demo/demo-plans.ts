@@ -10,7 +10,6 @@
 import { eq } from 'drizzle-orm';
 import { planCreateSchema, type PlanCreateInput } from '@shared/schemas/plan';
 import { studyCreateSchema } from '@shared/schemas/study';
-import type { Role } from '@shared/schemas/auth';
 import { getDb } from '../db/client';
 import { loadConfig } from '../config';
 import { listBatteries } from '../batteries/batteries.repo';
@@ -19,12 +18,12 @@ import { stopBoss } from '../jobs/boss';
 import { configureMail, stopFakeSmtp } from '../mail/mail.service';
 import { profiles } from '../profiles/profiles.schema';
 import { findSiteByName } from '../sites/sites.repo';
-import { DEMO_BATTERY_NAME, DEMO_SITE_NAME } from '../sites/demo-site';
 import { approvePlan, submitPlan } from '../sign-off/sign-off.service';
 import { createStudy, getStudy } from '../studies/studies.service';
-import { demoAccounts, demoUserId } from '../users/demo-accounts';
-import { plans } from './plans.schema';
-import { createPlan, getPlan } from './plans.service';
+import { plans } from '../plans/plans.schema';
+import { createPlan, getPlan } from '../plans/plans.service';
+import { demoActor } from './demo-accounts';
+import { DEMO_BATTERY_NAME, DEMO_SITE_NAME } from './demo-site';
 
 const DEMO_PRICES = 'Day-ahead prices 2026 (hourly)';
 const DEMO_LOAD = 'Site load 2026 (hourly)';
@@ -32,12 +31,6 @@ const DEMO_GENERATION = 'Rooftop PV 2026 (hourly)';
 /** Site time (Europe/Berlin) in late autumn: UTC+1. */
 const day = (date: string) => `${date}T00:00:00+01:00`;
 const JOB_TIMEOUT_MS = 180_000;
-
-function account(role: Role) {
-  const found = demoAccounts.find((a) => a.role === role);
-  if (!found) throw new Error(`no demo ${role} account`);
-  return { id: demoUserId(role), email: found.email, name: found.name, role };
-}
 
 async function settled<T extends { job?: { state: string } | null; errorMessage?: string | null }>(
   read: () => Promise<T>,
@@ -81,9 +74,8 @@ export async function seedDemoPlans(log: (m: string) => void, databaseUrl: strin
   const config = loadConfig({ ...process.env, DATABASE_URL: databaseUrl });
   // Submitting e-mails the approvers (the fake SMTP server keeps it for the outbox page).
   configureMail(config);
-  const planner = account('planner');
-  const plannerActor = { id: planner.id, email: planner.email, ip: 'seed' };
-  const signOffActor = (role: Role) => ({ user: account(role), ip: 'seed', appOrigin: config.appOrigin });
+  const plannerActor = demoActor('planner', databaseUrl);
+  const approverActor = demoActor('approver', databaseUrl);
   const worker = await startJobWorker(databaseUrl);
   try {
     const queuePlan = async (body: Omit<PlanCreateInput, keyof typeof runSource>) =>
@@ -113,11 +105,11 @@ export async function seedDemoPlans(log: (m: string) => void, databaseUrl: strin
         initialSocPct: 50,
       }),
     );
-    const submitted = await submitPlan(signOffActor('planner'), approved.id, {
+    const submitted = await submitPlan(plannerActor, approved.id, {
       version: approved.version,
       comment: 'Steady-value end, two days ahead.',
     });
-    await approvePlan(signOffActor('approver'), approved.id, {
+    await approvePlan(approverActor, approved.id, {
       version: submitted.version,
       comment: 'Checked against the site limits and the operator’s instructions.',
     });
@@ -143,7 +135,7 @@ export async function seedDemoPlans(log: (m: string) => void, databaseUrl: strin
       ),
     );
     const saturday = await computed(saturdayId);
-    await submitPlan(signOffActor('planner'), saturday.id, { version: saturday.version, comment: 'Same settings as yesterday.' });
+    await submitPlan(plannerActor, saturday.id, { version: saturday.version, comment: 'Same settings as yesterday.' });
     await Promise.all(sundayIds.map(computed));
     await settled(() => getStudy(study.study.id), 'horizon study');
     log('Demo plans (approved, awaiting sign-off, four horizons of one Sunday) and a horizon study computed.');

@@ -17,10 +17,9 @@ import { listBatteries } from '../batteries/batteries.repo';
 import { createBattery } from '../batteries/batteries.service';
 import { profiles } from '../profiles/profiles.schema';
 import { uploadProfile } from '../profiles/profile-upload.service';
-import { demoAccounts, demoUserId } from '../users/demo-accounts';
-import type { Actor } from './request-context';
-import { findSiteByName } from './sites.repo';
-import { createSite } from './sites.service';
+import { findSiteByName } from '../sites/sites.repo';
+import { createSite } from '../sites/sites.service';
+import { demoActor } from './demo-accounts';
 
 const sampleDir = path.resolve(import.meta.dirname, '..', '..', 'sample-data');
 export const DEMO_SITE_NAME = 'Harbourside Depot';
@@ -45,10 +44,9 @@ const readJson = (file: string): Record<string, unknown> =>
     ? (JSON.parse(readFileSync(path.join(sampleDir, file), 'utf8')) as Record<string, unknown>)
     : {};
 
-export async function seedDemoSite(log: (m: string) => void): Promise<void> {
+export async function seedDemoSite(log: (m: string) => void, databaseUrl: string): Promise<void> {
   const db = getDb();
-  const planner = demoAccounts.find((a) => a.role === 'planner');
-  const actor: Actor = { id: demoUserId('planner'), email: planner?.email ?? 'planner@slackwater.example', ip: 'seed' };
+  const actor = demoActor('planner', databaseUrl);
 
   let site = await findSiteByName(db, DEMO_SITE_NAME);
   if (!site) {

@@ -4,9 +4,11 @@
  * everywhere else; the seeder hashes it directly. Idempotent: existing accounts are kept.
  */
 import type { Role } from '@shared/schemas/auth';
+import { loadConfig } from '../config';
 import { getDb } from '../db/client';
 import { hashPassword } from '../auth/password-hash';
-import { findUserByEmail, insertUser } from './users.repo';
+import type { Actor } from '../http/request-context';
+import { findUserByEmail, insertUser } from '../users/users.repo';
 
 export const demoPassword = 'slackwater-demo';
 
@@ -20,6 +22,14 @@ export const demoAccounts: readonly { email: string; name: string; role: Role }[
 /** Deterministic ids, so other seeders can refer to the demo planner and approver. */
 export const demoUserId = (role: Role) =>
   `00000000-0000-4000-a000-00000000000${demoAccounts.findIndex((a) => a.role === role) + 1}`;
+
+/** A demo account acting for a seeder: audit rows name it, from the address "seed". */
+export function demoActor(role: Role, databaseUrl: string): Actor {
+  const account = demoAccounts.find((a) => a.role === role);
+  if (!account) throw new Error(`no demo ${role} account`);
+  const { appOrigin } = loadConfig({ ...process.env, DATABASE_URL: databaseUrl });
+  return { id: demoUserId(role), email: account.email, name: account.name, role, ip: 'seed', origin: appOrigin };
+}
 
 export async function seedDemoAccounts(log: (m: string) => void): Promise<void> {
   const db = getDb();
