@@ -25,6 +25,7 @@ import { plansRouter } from './plans/plans.routes';
 import { studiesRouter } from './studies/studies.routes';
 import { jobsRouter } from './jobs/jobs.routes';
 import { horizonPreviewRouter } from './horizon-preview/horizon-preview.routes';
+import { registerJobKinds } from './job-kinds';
 
 const clientDir = path.resolve(import.meta.dirname, '..', 'dist', 'client');
 
@@ -54,6 +55,8 @@ export function createApp(config: AppConfig) {
   app.set('trust proxy', 'loopback');
   app.locals.config = config;
   configureMail(config);
+  // The web process queues plans and studies (and, with RUN_WORKER, works them).
+  registerJobKinds();
 
   app.use(
     helmet({

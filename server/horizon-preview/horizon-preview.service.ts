@@ -13,7 +13,7 @@ import {
 } from '@shared/schemas/horizon-preview';
 import { getDb } from '../db/client';
 import { notFound, unprocessable } from '../http/app-error';
-import { checkWholeSteps } from '../plans/run-inputs';
+import { checkWholeSteps } from '../runs/run-inputs';
 import { findPlanForPreview } from './horizon-preview.repo';
 import { loadPreviewSeries } from './preview-inputs';
 import { hours } from './preview-solve';

@@ -8,15 +8,10 @@
  */
 import type { PlanInputs } from '@shared/schemas/plan';
 import type { SteadyDays } from '@shared/schemas/steady-days';
-import { solveSteadyCycle, type AlignedInputs, type ProfileSeries, type SteadyCycle } from '../engine';
+import { solveSteadyCycle, type AlignedInputs, type SteadyCycle } from '../engine';
 import { unprocessable } from '../http/app-error';
-import { alignSnapshot } from '../plans/plan-compute';
-
-export interface SnapshotSeries {
-  readonly price: ProfileSeries;
-  readonly load: ProfileSeries | null;
-  readonly generation: ProfileSeries | null;
-}
+import { alignSnapshot } from '../runs/align-snapshot';
+import type { SnapshotSeries } from '../runs/profile-series';
 
 export interface PreviewSource {
   readonly aligned: AlignedInputs;

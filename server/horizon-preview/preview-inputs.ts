@@ -6,9 +6,7 @@
 import type { PlanInputs } from '@shared/schemas/plan';
 import { getDb } from '../db/client';
 import { AppError } from '../http/app-error';
-import { JobFailure } from '../jobs/job-types';
-import { loadSnapshotProfiles } from '../plans/profile-series';
-import type { SnapshotSeries } from './preview-cache';
+import { loadSnapshotProfiles, SnapshotProfileError, type SnapshotSeries } from '../runs/profile-series';
 
 /** Loads shared by concurrent previews of the same snapshot, so a burst of slider moves reads once. */
 const loading = new Map<string, Promise<SnapshotSeries>>();
@@ -27,7 +25,8 @@ async function read(inputs: PlanInputs): Promise<SnapshotSeries> {
     return await loadSnapshotProfiles(getDb(), inputs.profiles);
   } catch (error) {
     // The job's wording ("after this was queued") fits here too: the plan rests on a profile that is gone.
-    if (error instanceof JobFailure) throw new AppError('conflict', `The plan cannot be previewed: ${error.message}`, 409);
+    if (error instanceof SnapshotProfileError)
+      throw new AppError('conflict', `The plan cannot be previewed: ${error.message}`, 409);
     throw error;
   }
 }

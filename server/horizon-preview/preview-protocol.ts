@@ -1,7 +1,7 @@
 /** Messages between the web process and the preview thread (structured-clone data only). */
 import type { PlanInputs } from '@shared/schemas/plan';
 import type { ErrorIssue } from '../http/app-error';
-import type { SnapshotSeries } from './preview-cache';
+import type { SnapshotSeries } from '../runs/profile-series';
 import type { PreviewFigures } from './preview-solve';
 
 export interface PreviewRequest {

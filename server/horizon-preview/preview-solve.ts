@@ -16,7 +16,7 @@ import {
   type SteadyCycle,
 } from '../engine';
 import { AppError } from '../http/app-error';
-import { summarisePlan } from '../plans/plan-summary';
+import { summarisePlan } from '../plans/insights/plan-summary';
 
 export const hours = (h: number) => `${Number(h.toFixed(4))} h`;
 

@@ -1,24 +1,18 @@
 /**
  * The web process's side of the preview thread: one long-lived worker thread
  * that solves previews in arrival order while the event loop keeps answering
- * other requests (issue 6). The thread keeps the aligned profiles of recent
- * plans; the database stays here, and the profile values cross over only when
- * the thread asks for them. Started on first use; a thread that dies fails the
+ * other requests. The thread keeps the aligned profiles of recent plans; the
+ * database stays here, and the profile values cross over only when the thread
+ * asks for them. Started on first use (through the one thread bootstrap,
+ * server/engine/threads/worker-thread.ts); a thread that dies fails the
  * previews it held and the next preview starts a new one.
- *
- * Under tsx on Node 20 a worker cannot load a .ts file by itself
- * (ERR_UNKNOWN_FILE_EXTENSION, STACK.md): as the study worker pool does, the
- * entry next to this module is loaded with this module's own extension, through
- * an eval that registers tsx first when that extension is .ts.
  */
-import { createRequire } from 'node:module';
-import { dirname, extname, join } from 'node:path';
-import { pathToFileURL } from 'node:url';
-import { Worker } from 'node:worker_threads';
+import type { Worker } from 'node:worker_threads';
+import { siblingEntry, startWorkerThread } from '../engine/threads/worker-thread';
 import type { PlanInputs } from '@shared/schemas/plan';
 import { AppError } from '../http/app-error';
 import { logger } from '../logger';
-import type { SnapshotSeries } from './preview-cache';
+import type { SnapshotSeries } from '../runs/profile-series';
 import type { PreviewReply, PreviewRequest } from './preview-protocol';
 import type { PreviewFigures } from './preview-solve';
 
@@ -32,17 +26,7 @@ export class PreviewBusyError extends AppError {
   }
 }
 
-function spawnPreviewThread(): Worker {
-  const extension = extname(new URL(import.meta.url).pathname);
-  const entry = new URL(`./preview-thread${extension}`, import.meta.url);
-  if (extension !== '.ts') return new Worker(entry);
-  const tsxDir = dirname(createRequire(import.meta.url).resolve('tsx/package.json'));
-  const tsxApi = pathToFileURL(join(tsxDir, 'dist/esm/api/index.mjs')).href;
-  return new Worker(
-    `import(${JSON.stringify(tsxApi)}).then((api) => { api.register(); return import(${JSON.stringify(entry.href)}); });`,
-    { eval: true },
-  );
-}
+const spawnPreviewThread = (): Worker => startWorkerThread(siblingEntry(import.meta.url, 'preview-thread'));
 
 type Answer = PreviewFigures | 'miss';
 

@@ -1,24 +1,20 @@
 /**
  * The process's pg-boss instance, in the application's PostgreSQL. Queues are
- * created before anything is sent or worked (pg-boss 10 requires it); every
- * work queue sends exhausted jobs to one dead-letter queue.
+ * created before anything is sent or worked (pg-boss 10 requires it): one per
+ * registered job kind, each sending exhausted jobs to one dead-letter queue.
  */
 import PgBoss from 'pg-boss';
 import { logger } from '../logger';
+import { registeredHandlers } from './job-registry';
 import { loadJobsConfig, type JobsConfig } from './jobs-config';
 
-export const queues = {
-  plan: 'plan-solve',
-  study: 'horizon-study',
-  deadLetter: 'job-dead-letter',
-} as const;
-export type WorkQueue = typeof queues.plan | typeof queues.study;
+export const DEAD_LETTER_QUEUE = 'job-dead-letter';
 
 let starting: Promise<PgBoss> | null = null;
 let current: PgBoss | null = null;
 
 async function ensureQueues(boss: PgBoss, config: JobsConfig): Promise<void> {
-  const dead: PgBoss.Queue = { name: queues.deadLetter, policy: 'standard', retryLimit: 0, retentionMinutes: 7 * 24 * 60 };
+  const dead: PgBoss.Queue = { name: DEAD_LETTER_QUEUE, policy: 'standard', retryLimit: 0, retentionMinutes: 7 * 24 * 60 };
   const work = (name: string): PgBoss.Queue => ({
     name,
     policy: 'standard',
@@ -27,10 +23,10 @@ async function ensureQueues(boss: PgBoss, config: JobsConfig): Promise<void> {
     retryBackoff: false,
     expireInSeconds: config.JOB_EXPIRE_MINUTES * 60,
     retentionMinutes: 7 * 24 * 60,
-    deadLetter: queues.deadLetter,
+    deadLetter: DEAD_LETTER_QUEUE,
   });
   // The dead-letter queue first: the work queues reference it.
-  for (const queue of [dead, work(queues.plan), work(queues.study)]) {
+  for (const queue of [dead, ...registeredHandlers().map((h) => work(h.queue))]) {
     if (await boss.getQueue(queue.name)) await boss.updateQueue(queue.name, queue);
     else await boss.createQueue(queue.name, queue);
   }
@@ -75,4 +71,19 @@ export async function stopBoss(timeoutMs = 10_000): Promise<void> {
   if (!pending) return;
   const boss = await pending.catch(() => null);
   await boss?.stop({ graceful: true, timeout: timeoutMs, wait: true });
+}
+
+/**
+ * Puts an active job back in its queue as if it had never started (pg-boss counts
+ * a retry only for a job that has a start time), so a shutdown costs no attempt.
+ * pg-boss has no call for this; the statement is written against its 10.x job
+ * table (package.json pins the version). Runs on the caller's transaction.
+ */
+export async function returnToQueue(db: PgBoss.Db, schema: string, queue: string, jobId: string): Promise<boolean> {
+  const { rows } = await db.executeSql(
+    `update ${schema}.job set state = 'created', started_on = null, start_after = now()
+     where name = $1 and id = $2 and state = 'active' returning id`,
+    [queue, jobId],
+  );
+  return rows.length === 1;
 }

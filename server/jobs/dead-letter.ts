@@ -7,13 +7,13 @@ import type PgBoss from 'pg-boss';
 import type { Db } from '../db/client';
 import { logger } from '../logger';
 import { getJobProgress } from './job-progress.repo';
-import { jobHandlers } from './job-handlers';
+import { registeredHandlers } from './job-registry';
 import { failJobFinally } from './run-job';
 import type { JobData } from './job-types';
 
 export async function failDeadJob(db: Db, job: PgBoss.JobWithMetadata<JobData>): Promise<void> {
   const data = job.data;
-  const handler = jobHandlers.find((h) => h.kind === data.kind);
+  const handler = registeredHandlers().find((h) => h.kind === data.kind);
   const progress = await getJobProgress(db, data.jobId);
   if (!handler || !progress || progress.state === 'completed' || progress.state === 'failed') return;
   const last = progress.error ? ` Last error: ${progress.error}` : '';

@@ -1,11 +1,13 @@
 /**
  * What a job handler gets: its job and attempt, a progress reporter (share done,
- * estimated time left) and an abort signal that fires when the attempt must
- * stop (shutdown, or a newer attempt took over).
+ * estimated time left), an abort signal that fires when the attempt must stop
+ * (shutdown), and the threads to compute in.
  */
 import { getDb } from '../db/client';
 import { logger } from '../logger';
 import { recordProgress } from './job-progress.repo';
+import { runInThread } from './thread-pool';
+import type { ReportProgress, ThreadTask } from './thread-task';
 
 /** Progress writes are throttled: the browser polls about once a second. */
 const minProgressIntervalMs = 500;
@@ -33,6 +35,11 @@ export class JobContext {
     this.pending = this.pending
       .then(() => recordProgress(getDb(), this.jobId, this.attempt, { shareDone: share, etaSeconds, message }))
       .catch((error: unknown) => logger.error(`Could not record progress of job ${this.jobId}`, error));
+  }
+
+  /** Runs `task` in a worker thread, cancelled with this attempt; the thread's progress goes to `onProgress`. */
+  inThread<I, O>(task: ThreadTask<I, O>, input: I, onProgress: ReportProgress): Promise<O> {
+    return runInThread(task, input, { signal: this.signal, onProgress });
   }
 
   /** Waits until every progress write has landed (before the final state is written). */

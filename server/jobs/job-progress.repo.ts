@@ -83,14 +83,34 @@ export async function finishJob(
 }
 
 /** Returns false when the attempt is no longer the running one (another worker or reaper moved on). */
-export async function markJobRetrying(db: DbOrTx, jobId: string, attempt: number, error: string): Promise<boolean> {
+export async function markJobRetrying(
+  db: DbOrTx,
+  jobId: string,
+  attempt: number,
+  outcome: { error: string; message: string },
+): Promise<boolean> {
+  const rows = await db
+    .update(jobProgress)
+    .set({ state: 'retrying', error: outcome.error, message: outcome.message, etaSeconds: null, updatedAt: sql`now()` })
+    .where(and(eq(jobProgress.jobId, jobId), eq(jobProgress.attempt, attempt), eq(jobProgress.state, 'running')))
+    .returning({ jobId: jobProgress.jobId });
+  return rows.length === 1;
+}
+
+/**
+ * A running attempt given back unspent (its worker is shutting down): the row is
+ * queued again one attempt lower, so the next claim counts the same attempt.
+ */
+export async function markJobHandedBack(db: DbOrTx, jobId: string, attempt: number, message: string): Promise<boolean> {
   const rows = await db
     .update(jobProgress)
     .set({
-      state: 'retrying',
-      error,
-      message: 'This attempt failed; the job will be tried again.',
+      state: 'queued',
+      attempt: attempt - 1,
+      worker: null,
+      shareDone: 0,
       etaSeconds: null,
+      message,
       updatedAt: sql`now()`,
     })
     .where(and(eq(jobProgress.jobId, jobId), eq(jobProgress.attempt, attempt), eq(jobProgress.state, 'running')))

@@ -1,7 +1,7 @@
 /**
- * One database transaction shared by Drizzle and pg-boss, so that a plan or
- * study row, its progress row and its pg-boss job commit together or not at
- * all: no row without a job, no job without a row.
+ * One database transaction shared by Drizzle and pg-boss, so that an entity
+ * row, its progress row and its pg-boss job commit together or not at all:
+ * no row without a job, no job without a row.
  */
 import type pg from 'pg';
 import { drizzle } from 'drizzle-orm/node-postgres';

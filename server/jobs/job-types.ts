@@ -2,7 +2,6 @@
 import type { JobKind } from '@shared/schemas/job';
 import type { DbOrTx } from '../db/client';
 import type { JobContext } from './job-context';
-import type { WorkQueue } from './boss';
 
 /** The data of every queued job: which entity, and which version of its inputs. */
 export interface JobData {
@@ -20,9 +19,16 @@ export class JobFailure extends Error {
   override name = 'JobFailure';
 }
 
+/** What the job list says a job computes. */
+export interface JobSubject {
+  readonly siteId: string | null;
+  readonly label: string;
+}
+
 export interface JobHandler {
   readonly kind: JobKind;
-  readonly queue: WorkQueue;
+  /** The pg-boss queue of this kind (kept stable: queued jobs live in it). */
+  readonly queue: string;
   /**
    * Computes and stores the results. Must be idempotent: results are written in
    * one transaction keyed by entity id and input version, which also finishes
@@ -31,4 +37,6 @@ export interface JobHandler {
   run(ctx: JobContext, data: JobData): Promise<void>;
   /** Records the final failure on the entity (in the transaction that fails the job). */
   recordFailure(db: DbOrTx, data: JobData, message: string): Promise<void>;
+  /** What each entity is, for the job list; every id asked for gets an answer. */
+  describe(db: DbOrTx, entityIds: readonly string[]): Promise<Map<string, JobSubject>>;
 }

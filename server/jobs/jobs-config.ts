@@ -7,8 +7,6 @@ import { z } from 'zod';
 const envSchema = z.object({
   /** Jobs one process works on at once (each solve runs in its own worker thread). */
   WORKER_CONCURRENCY: z.coerce.number().int().min(1).max(32).default(1),
-  /** Threads one horizon study may use for its independent runs (1 leaves the other cores to the API). */
-  STUDY_THREADS: z.coerce.number().int().min(1).max(16).default(1),
   /** A running job whose heartbeat is older than this is handed to another worker. */
   JOB_STALE_SECONDS: z.coerce.number().min(2).max(3600).default(60),
   /** Retries after the first attempt before a job goes to the dead-letter queue. */
@@ -45,4 +43,12 @@ export function loadJobsConfig(env: NodeJS.ProcessEnv = process.env): JobsConfig
   // Four heartbeats fit in the stale window, so one slow database round trip is not fatal.
   const heartbeatMs = Math.max(500, (parsed.data.JOB_STALE_SECONDS * 1000) / 4);
   return { ...parsed.data, heartbeatMs };
+}
+
+let once: JobsConfig | null = null;
+
+/** The settings as this process read them first (for readers that run per request, such as the progress a page polls). */
+export function jobsConfig(): JobsConfig {
+  once ??= loadJobsConfig();
+  return once;
 }

@@ -7,10 +7,9 @@
 import type PgBoss from 'pg-boss';
 import { getDb } from '../db/client';
 import { logger } from '../logger';
+import { LOST_WORKER_ERROR, WORKER_LOST } from './job-messages';
 import { findStaleJobs, markJobRetrying } from './job-progress.repo';
 import type { JobsConfig } from './jobs-config';
-
-const lostWorker = 'The worker running this job stopped responding; another worker takes it over.';
 
 export async function reapStaleJobs(boss: PgBoss, config: JobsConfig): Promise<number> {
   const db = getDb();
@@ -23,11 +22,11 @@ export async function reapStaleJobs(boss: PgBoss, config: JobsConfig): Promise<n
     if (job.state === 'active' && !sameAttempt) continue; // a newer attempt is running
     if (row.state === 'retrying') {
       // The attempt gave up but its hand-back to pg-boss was lost (process stopped right then): hand it back now.
-      if (job.state === 'active') await boss.fail(row.queue, row.jobId, { message: row.error ?? lostWorker });
+      if (job.state === 'active') await boss.fail(row.queue, row.jobId, { message: row.error ?? LOST_WORKER_ERROR });
       continue;
     }
-    if (!(await markJobRetrying(db, row.jobId, row.attempt, lostWorker))) continue; // another reaper won
-    if (job.state === 'active') await boss.fail(row.queue, row.jobId, { message: lostWorker });
+    if (!(await markJobRetrying(db, row.jobId, row.attempt, { error: LOST_WORKER_ERROR, message: WORKER_LOST }))) continue; // another reaper won
+    if (job.state === 'active') await boss.fail(row.queue, row.jobId, { message: LOST_WORKER_ERROR });
     reaped += 1;
     logger.info(`Job ${row.jobId} had no heartbeat for ${config.JOB_STALE_SECONDS} s; handed back for a retry.`);
   }

@@ -1,6 +1,6 @@
 import type { Plan } from '@shared/schemas/plan';
-import { toJobProgress } from '../jobs/job-serializer';
-import type { JobProgressRow } from '../jobs/jobs.schema';
+import { runJobOf } from '../runs/create-run';
+import type { RunJobRow } from '../runs/run-columns';
 import type { PlanHeadline } from './plans.repo';
 import type { PlanRow } from './plans.schema';
 
@@ -11,7 +11,7 @@ interface JoinedRow {
   siteName: string | null;
   batteryName: string | null;
   createdByName: string | null;
-  job: JobProgressRow | null;
+  job: RunJobRow | null;
   headline?: PlanHeadline | null;
 }
 
@@ -41,7 +41,7 @@ export function toPlan(row: JoinedRow, detail: boolean): Plan {
     approvedAt: isoOrNull(p.approvedAt),
     method: p.method === 'dp' || p.method === 'lp' ? p.method : null,
     errorMessage: p.errorMessage,
-    job: row.job ? toJobProgress(row.job) : null,
+    job: runJobOf(row.job),
   };
   if (detail) {
     if (p.inputs) plan.inputs = p.inputs;

@@ -6,7 +6,7 @@ import type { DbOrTx } from '../db/client';
 import { sites } from '../sites/sites.schema';
 import { batteries } from '../batteries/batteries.schema';
 import { users } from '../users/users.schema';
-import { jobProgress } from '../jobs/jobs.schema';
+import { runJobs as jobProgress } from '../runs/run-columns';
 import { plans } from './plans.schema';
 
 export type NewPlan = typeof plans.$inferInsert;
@@ -123,4 +123,19 @@ export async function lastApprovedEndSoc(db: DbOrTx, batteryId: string, atOrBefo
     .orderBy(desc(plans.deliveryEnd), desc(plans.approvedAt))
     .limit(1);
   return row;
+}
+
+/** Battery names and delivery windows of plans, for the job list. */
+export async function findPlanSubjects(db: DbOrTx, ids: readonly string[]) {
+  return db
+    .select({
+      id: plans.id,
+      siteId: plans.siteId,
+      batteryName: batteries.name,
+      start: plans.deliveryStart,
+      end: plans.deliveryEnd,
+    })
+    .from(plans)
+    .leftJoin(batteries, eq(batteries.id, plans.batteryId))
+    .where(inArray(plans.id, [...ids]));
 }

@@ -11,28 +11,8 @@ import {
   uuid,
   type AnyPgColumn,
 } from 'drizzle-orm/pg-core';
-import { sites } from '../sites/sites.schema';
-import { batteries } from '../batteries/batteries.schema';
-import { profiles } from '../profiles/profiles.schema';
-import { jobProgress } from '../jobs/jobs.schema';
 import type { PlanInputs, PlanResults } from '@shared/schemas/plan';
-
-/** Where a plan or study comes from: site, battery and profiles, none deletable while used. */
-export function runSourceColumns() {
-  return {
-    siteId: uuid('site_id')
-      .notNull()
-      .references(() => sites.id, { onDelete: 'restrict' }),
-    batteryId: uuid('battery_id')
-      .notNull()
-      .references(() => batteries.id, { onDelete: 'restrict' }),
-    priceProfileId: uuid('price_profile_id')
-      .notNull()
-      .references(() => profiles.id, { onDelete: 'restrict' }),
-    loadProfileId: uuid('load_profile_id').references(() => profiles.id, { onDelete: 'restrict' }),
-    generationProfileId: uuid('generation_profile_id').references(() => profiles.id, { onDelete: 'restrict' }),
-  };
-}
+import { runJobColumn, runSourceColumns } from '../runs/run-columns';
 
 /**
  * Dispatch plans (DESIGN sections 2 and 4). `inputs` is the snapshot taken at
@@ -77,7 +57,7 @@ export const plans = pgTable(
     copiedFrom: uuid('copied_from').references((): AnyPgColumn => plans.id, { onDelete: 'restrict' }),
     /** SHA-256 over inputs and results, stored at approval. */
     checksum: text('checksum'),
-    jobId: uuid('job_id').references(() => jobProgress.jobId, { onDelete: 'restrict' }),
+    jobId: runJobColumn(),
     results: jsonb('results').$type<PlanResults>(),
     resultsInputVersion: integer('results_input_version'),
     resultsAt: timestamp('results_at', { withTimezone: true }),

@@ -5,17 +5,12 @@ import { getDb } from '../db/client';
 import { notFound } from '../http/app-error';
 import { findBattery } from '../batteries/batteries.repo';
 import { findSite } from '../sites/sites.repo';
-import { createWithJob } from '../jobs/create-with-job';
-import { toJobProgress } from '../jobs/job-serializer';
-import { getJobProgress } from '../jobs/job-progress.repo';
 import type { Actor } from '../http/request-context';
-import { checkWholeSteps, gridStepMinutes, resolveRunInputs, runColumns } from './run-inputs';
-import { checkTerminalTarget, resolveInitialSoc } from './initial-soc';
+import { createRunWithJob, runJob } from '../runs/create-run';
+import { checkTerminalTarget, resolveInitialSoc } from '../runs/initial-soc';
+import { checkWholeSteps, DEFAULT_BAND_PCT, gridStepMinutes, resolveRunInputs, runColumns } from '../runs/run-inputs';
 import { findPlan, insertPlan, listPlans } from './plans.repo';
 import { toPlan } from './plan-serializer';
-
-/** Tolerance band around the steady cycle, % of usable energy (DESIGN section 2). */
-export const DEFAULT_BAND_PCT = 5;
 
 export async function createPlan(body: PlanCreate, actor: Actor, databaseUrl: string): Promise<PlanCreated> {
   const db = getDb();
@@ -46,7 +41,7 @@ export async function createPlan(body: PlanCreate, actor: Actor, databaseUrl: st
     steadyDays: body.steadyDays ?? 'all',
   };
 
-  const { entityId: planId, jobId } = await createWithJob({
+  const { entityId: planId, jobId } = await createRunWithJob({
     kind: 'plan',
     actor,
     databaseUrl,
@@ -75,9 +70,7 @@ export async function createPlan(body: PlanCreate, actor: Actor, databaseUrl: st
     },
   });
   const plan = await getPlan(planId);
-  const job = await getJobProgress(db, jobId);
-  if (!job) throw new Error(`job ${jobId} vanished after commit`);
-  return { plan, job: toJobProgress(job) };
+  return { plan, job: await runJob(jobId) };
 }
 
 export async function getPlan(id: string): Promise<Plan> {

@@ -6,7 +6,7 @@ import type { DbOrTx } from '../db/client';
 import { sites } from '../sites/sites.schema';
 import { batteries } from '../batteries/batteries.schema';
 import { users } from '../users/users.schema';
-import { jobProgress } from '../jobs/jobs.schema';
+import { runJobs as jobProgress } from '../runs/run-columns';
 import { horizonStudies } from './studies.schema';
 
 export async function insertStudy(db: DbOrTx, values: typeof horizonStudies.$inferInsert) {
@@ -70,4 +70,19 @@ export async function recordStudyError(db: DbOrTx, id: string, message: string):
     .update(horizonStudies)
     .set({ errorMessage: message })
     .where(and(eq(horizonStudies.id, id), sql`${horizonStudies.results} is null`));
+}
+
+/** Battery names and periods of studies, for the job list. */
+export async function findStudySubjects(db: DbOrTx, ids: readonly string[]) {
+  return db
+    .select({
+      id: horizonStudies.id,
+      siteId: horizonStudies.siteId,
+      batteryName: batteries.name,
+      start: horizonStudies.periodStart,
+      end: horizonStudies.periodEnd,
+    })
+    .from(horizonStudies)
+    .leftJoin(batteries, eq(batteries.id, horizonStudies.batteryId))
+    .where(inArray(horizonStudies.id, [...ids]));
 }

@@ -1,8 +1,7 @@
 import { sql } from 'drizzle-orm';
 import { check, doublePrecision, index, integer, jsonb, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
-import { jobProgress } from '../jobs/jobs.schema';
-import { runSourceColumns } from '../plans/plans.schema';
 import type { StudyInputs, StudyResults } from '@shared/schemas/study';
+import { runJobColumn, runSourceColumns } from '../runs/run-columns';
 
 /**
  * Horizon studies (DESIGN section 2): closed-loop receding-horizon runs over a
@@ -26,7 +25,7 @@ export const horizonStudies = pgTable(
     inputVersion: integer('input_version').notNull().default(1),
     createdBy: text('created_by').notNull(),
     createdAt: timestamp('created_at', { withTimezone: true }).notNull().defaultNow(),
-    jobId: uuid('job_id').references(() => jobProgress.jobId, { onDelete: 'restrict' }),
+    jobId: runJobColumn(),
     results: jsonb('results').$type<StudyResults>(),
     resultsInputVersion: integer('results_input_version'),
     resultsAt: timestamp('results_at', { withTimezone: true }),

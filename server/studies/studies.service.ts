@@ -3,13 +3,10 @@ import type { Study, StudyCreate, StudyCreated, StudyInputs, StudyListQuery } fr
 import { terminalTargetPct } from '@shared/schemas/terminal-rule';
 import { getDb } from '../db/client';
 import { notFound } from '../http/app-error';
-import { createWithJob } from '../jobs/create-with-job';
-import { toJobProgress } from '../jobs/job-serializer';
-import { getJobProgress } from '../jobs/job-progress.repo';
 import type { Actor } from '../http/request-context';
-import { checkWholeSteps, gridStepMinutes, resolveRunInputs, runColumns } from '../plans/run-inputs';
-import { checkTerminalTarget, resolveInitialSoc } from '../plans/initial-soc';
-import { DEFAULT_BAND_PCT } from '../plans/plans.service';
+import { createRunWithJob, runJob } from '../runs/create-run';
+import { checkTerminalTarget, resolveInitialSoc } from '../runs/initial-soc';
+import { checkWholeSteps, DEFAULT_BAND_PCT, gridStepMinutes, resolveRunInputs, runColumns } from '../runs/run-inputs';
 import { findStudy, insertStudy, listStudies } from './studies.repo';
 import { toStudy } from './study-serializer';
 
@@ -48,7 +45,7 @@ export async function createStudy(body: StudyCreate, actor: Actor, databaseUrl: 
     steadyDays: body.steadyDays ?? 'all',
   };
 
-  const { entityId: studyId, jobId } = await createWithJob({
+  const { entityId: studyId, jobId } = await createRunWithJob({
     kind: 'study',
     actor,
     databaseUrl,
@@ -77,9 +74,7 @@ export async function createStudy(body: StudyCreate, actor: Actor, databaseUrl: 
     },
   });
   const study = await getStudy(studyId);
-  const job = await getJobProgress(db, jobId);
-  if (!job) throw new Error(`job ${jobId} vanished after commit`);
-  return { study, job: toJobProgress(job) };
+  return { study, job: await runJob(jobId) };
 }
 
 export async function getStudy(id: string): Promise<Study> {

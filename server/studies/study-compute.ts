@@ -3,22 +3,13 @@
  * closed-loop runs for every horizon and terminal rule against the reference
  * path, with progress after each run. Pure: no database.
  */
-import type { StudyInputs, StudyResults } from '@shared/schemas/study';
-import { DEFAULT_GAP_TARGET_PCT, parseTerminal, runHorizonStudy, type ProfileSeries, type TerminalChoice } from '../engine';
-import { alignSnapshot, type ComputeOutcome } from '../plans/plan-compute';
+import type { StudyResults } from '@shared/schemas/study';
+import { DEFAULT_GAP_TARGET_PCT, parseTerminal, runHorizonStudy, type TerminalChoice } from '../engine';
+import { alignSnapshot } from '../runs/align-snapshot';
+import type { ComputeOutcome, ReportProgress } from '../runs/run-task';
+import type { StudyComputeInput } from './study-task';
 
-export interface StudyComputeInput {
-  inputs: StudyInputs;
-  price: ProfileSeries;
-  load: ProfileSeries | null;
-  generation: ProfileSeries | null;
-  /** Threads the engine may use for independent runs (1 = this thread only). */
-  threads: number;
-}
-
-type Report = (shareDone: number, message: string | null) => void;
-
-export async function computeStudy(input: StudyComputeInput, report: Report): Promise<ComputeOutcome<StudyResults>> {
+export async function computeStudy(input: StudyComputeInput, report: ReportProgress): Promise<ComputeOutcome<StudyResults>> {
   const { inputs } = input;
   const aligned = alignSnapshot(inputs, input);
   if (!aligned.ok) return { ok: false, message: aligned.issue.message };

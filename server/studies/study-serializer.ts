@@ -1,6 +1,6 @@
 import type { Study, StudyRecommendation } from '@shared/schemas/study';
-import { toJobProgress } from '../jobs/job-serializer';
-import type { JobProgressRow } from '../jobs/jobs.schema';
+import { runJobOf } from '../runs/create-run';
+import type { RunJobRow } from '../runs/run-columns';
 import type { HorizonStudyRow } from './studies.schema';
 
 interface JoinedRow {
@@ -8,12 +8,13 @@ interface JoinedRow {
   siteName: string | null;
   batteryName: string | null;
   createdByName: string | null;
-  job: JobProgressRow | null;
+  job: RunJobRow | null;
   recommendation?: StudyRecommendation | null;
 }
 
 export function toStudy(row: JoinedRow, detail: boolean): Study {
   const s = row.study;
+  const job = runJobOf(row.job);
   const method = s.method === 'dp' || s.method === 'lp' || s.method === 'mixed' ? s.method : null;
   const study: Study = {
     id: s.id,
@@ -29,10 +30,10 @@ export function toStudy(row: JoinedRow, detail: boolean): Study {
     initialSocPct: s.initialSocPct,
     createdBy: { id: s.createdBy, name: row.createdByName },
     createdAt: s.createdAt.toISOString(),
-    status: row.job?.state ?? 'queued',
+    status: job?.state ?? 'queued',
     method,
     errorMessage: s.errorMessage,
-    job: row.job ? toJobProgress(row.job) : null,
+    job,
   };
   if (detail) {
     if (s.inputs) study.inputs = s.inputs;

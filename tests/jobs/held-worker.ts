@@ -5,10 +5,12 @@
  */
 import { existsSync } from 'node:fs';
 import { setTimeout as sleep } from 'node:timers/promises';
+import { registerJobKinds } from '../../server/job-kinds';
 import { runWorkerProcess } from '../../server/jobs/worker-process';
 
 const holdFile = process.env.HOLD_FILE;
 
+registerJobKinds();
 runWorkerProcess({
   beforeHandler: async (signal) => {
     while (holdFile && existsSync(holdFile) && !signal.aborted) await sleep(100);

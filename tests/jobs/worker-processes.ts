@@ -65,8 +65,8 @@ export class WorkerProcesses {
     });
   }
 
-  /** Waits until `job` runs on `worker`, then kills that process without warning. */
-  async killWhileRunning(worker: ChildProcess, jobId: string): Promise<void> {
+  /** Waits until `job` runs on `worker`. */
+  async waitUntilRunning(worker: ChildProcess, jobId: string): Promise<void> {
     await pollUntil('the worker to run the job', async () => {
       const [row] = await sqlRows<{ state: string; worker: string | null }>(
         'select state, worker from job_progress where job_id = $1',
@@ -74,8 +74,28 @@ export class WorkerProcesses {
       );
       return row?.state === 'running' && row.worker?.endsWith(`:${worker.pid}`) ? row : undefined;
     });
+  }
+
+  /** Waits until `job` runs on `worker`, then kills that process without warning. */
+  async killWhileRunning(worker: ChildProcess, jobId: string): Promise<void> {
+    await this.waitUntilRunning(worker, jobId);
+    await this.signal(worker, 'SIGKILL');
+  }
+
+  /** Waits until `job` runs on `worker`, then stops that process the way a service manager does (SIGTERM). */
+  async stopWhileRunning(worker: ChildProcess, jobId: string): Promise<void> {
+    await this.waitUntilRunning(worker, jobId);
+    await this.signal(worker, 'SIGTERM');
+  }
+
+  /** Stops a worker with SIGTERM and waits until it has exited. */
+  async stop(worker: ChildProcess): Promise<void> {
+    if (worker.exitCode === null && worker.signalCode === null) await this.signal(worker, 'SIGTERM');
+  }
+
+  private async signal(worker: ChildProcess, signal: NodeJS.Signals): Promise<void> {
     const exited = new Promise((resolve) => worker.once('exit', resolve));
-    worker.kill('SIGKILL');
+    worker.kill(signal);
     await exited;
   }
 

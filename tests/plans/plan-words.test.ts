@@ -4,7 +4,7 @@
  * last 5 h leave it: energy is sold off because nothing values it after the horizon".
  */
 import { describe, expect, it } from 'vitest';
-import { durationWords, turnpikeSentence } from '../../server/plans/plan-words';
+import { durationWords, turnpikeSentence } from '../../server/plans/insights/plan-words';
 
 const figures = {
   bandPct: 5,

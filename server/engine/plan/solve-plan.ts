@@ -49,6 +49,12 @@ export interface Plan {
   readonly warnings: readonly string[];
   /** Decision horizon and value curves (delivery start and each whole local hour) when the exact DP solved the plan, else null. */
   readonly dpInsights: DpPlanInsights | null;
+  /**
+   * Hours of lookahead of the longer plan the commit window was measured against:
+   * max(4·H, H + 168 h), cut where the data end; null when the data end at the
+   * horizon, so no longer plan was solved.
+   */
+  readonly longerLookaheadHours: number | null;
 }
 
 export type PlanResult = { ok: true; plan: Plan } | { ok: false; issue: InputIssue };
@@ -140,6 +146,7 @@ export function solvePlan(inputs: AlignedInputs, request: PlanRequest): PlanResu
       turnpike: tp,
       warnings: settingWarnings(inputs.battery),
       dpInsights,
+      longerLookaheadHours: longer ? lookedLongerHours : null,
     },
   };
 }

@@ -1,28 +1,13 @@
 /**
- * Runs independent closed-loop runs on worker threads (one per core by default).
- * Under tsx (development, tests, the CLI) a worker cannot load a .ts file by
- * itself on Node 20 (ERR_UNKNOWN_FILE_EXTENSION, STACK.md), so it is bootstrapped
- * with an eval that registers tsx first; a bundle or compiled build loads its own file directly.
+ * Runs independent closed-loop runs on worker threads (one per core by default),
+ * started by the one thread bootstrap (../threads/worker-thread.ts) on
+ * `./study-worker` next to this module.
  */
 import { availableParallelism } from 'node:os';
-import { createRequire } from 'node:module';
-import { dirname, extname, join } from 'node:path';
-import { pathToFileURL } from 'node:url';
-import { Worker } from 'node:worker_threads';
+import { siblingEntry, startWorkerThread } from '../threads/worker-thread';
 import type { StudyJob, StudyJobContext } from './study-job';
 
-function spawnWorker(): Worker {
-  // The worker sits next to this module with the same extension: .ts under tsx,
-  // .mjs in the command-line bundle (scripts/cli-bundle.mjs), .js in a compiled build.
-  const extension = extname(new URL(import.meta.url).pathname);
-  const entry = new URL(`./study-worker${extension}`, import.meta.url);
-  if (extension !== '.ts') return new Worker(entry);
-  // The ESM build of tsx's API (its package exports map "tsx/esm/api" to it for import).
-  const tsxDir = dirname(createRequire(import.meta.url).resolve('tsx/package.json'));
-  const tsxApi = pathToFileURL(join(tsxDir, 'dist/esm/api/index.mjs')).href;
-  const bootstrap = `import(${JSON.stringify(tsxApi)}).then((api) => { api.register(); return import(${JSON.stringify(entry.href)}); });`;
-  return new Worker(bootstrap, { eval: true });
-}
+const spawnWorker = () => startWorkerThread(siblingEntry(import.meta.url, 'study-worker'));
 
 export function defaultWorkerCount(): number {
   return Math.max(1, Math.min(4, availableParallelism()));

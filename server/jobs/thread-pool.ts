@@ -3,28 +3,24 @@
  * HTTP server, heartbeats, progress writes) stays responsive while it solves.
  * Threads are kept between tasks: starting one costs seconds under tsx (it
  * loads the engine and its WebAssembly solvers), a task often much less. A
- * cancelled or failed task's thread is terminated, never reused.
- *
- * Under tsx on Node 20 a worker thread cannot load TypeScript by itself
- * (ERR_UNKNOWN_FILE_EXTENSION), so the thread starts from a small eval that
- * registers tsx's ESM loader first, then imports the entry.
+ * cancelled or failed task's thread is terminated, never reused. Threads start
+ * on the entry the composition root named (useThreadEntry), through the one
+ * thread bootstrap (server/engine/threads/worker-thread.ts).
  */
-import { Worker } from 'node:worker_threads';
-import { createRequire } from 'node:module';
-import { pathToFileURL } from 'node:url';
-import type { ThreadMessage, ThreadRequest } from './thread-protocol';
+import type { Worker } from 'node:worker_threads';
+import { startWorkerThread } from '../engine/threads/worker-thread';
+import type { ThreadMessage, ThreadRequest, ThreadTask } from './thread-task';
 
-const entryUrl = new URL(`./solve-thread${import.meta.url.endsWith('.ts') ? '.ts' : '.js'}`, import.meta.url);
+let entry: URL | null = null;
 
-function tsxLoaderUrl(): string {
-  const resolved = createRequire(import.meta.url).resolve('tsx/esm/api');
-  return pathToFileURL(resolved.replace(/\.cjs$/, '.mjs')).href;
+/** Names the module every job thread starts on (it serves the tasks of every registered job kind). */
+export function useThreadEntry(url: URL): void {
+  entry = url;
 }
 
 function startWorker(): Worker {
-  if (!entryUrl.pathname.endsWith('.ts')) return new Worker(entryUrl);
-  const bootstrap = `import(${JSON.stringify(tsxLoaderUrl())}).then((api) => { api.register(); return import(${JSON.stringify(entryUrl.href)}); });`;
-  return new Worker(bootstrap, { eval: true });
+  if (!entry) throw new Error('No job thread entry is registered: register the job kinds at start-up (server/job-kinds.ts).');
+  return startWorkerThread(entry);
 }
 
 const idle: Worker[] = [];
@@ -68,7 +64,9 @@ export class ThreadTaskError extends Error {
   override name = 'ThreadTaskError';
 }
 
-export function runInThread<O>(request: ThreadRequest, options: ThreadOptions = {}): Promise<O> {
+/** Runs `task` on `input` in a thread; the output has the task's declared type. */
+export function runInThread<I, O>(task: ThreadTask<I, O>, input: I, options: ThreadOptions = {}): Promise<O> {
+  const request: ThreadRequest = { task: task.name, input };
   return new Promise<O>((resolve, reject) => {
     if (options.signal?.aborted) {
       reject(new ThreadTaskError('The task was cancelled before it started.'));

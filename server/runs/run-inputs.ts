@@ -34,6 +34,9 @@ export interface RunInputs {
   warnings: string[];
 }
 
+/** Tolerance band around the steady cycle, % of usable energy (docs/model.md, the turnpike figures). */
+export const DEFAULT_BAND_PCT = 5;
+
 const MINUTE_MS = 60_000;
 const iso = (d: Date) => d.toISOString().replace('.000Z', 'Z');
 

@@ -6,7 +6,7 @@
 import type { BatterySnapshot, InitialSocSource } from '@shared/schemas/plan';
 import type { DbOrTx } from '../db/client';
 import { unprocessable } from '../http/app-error';
-import { lastApprovedEndSoc } from './plans.repo';
+import { lastApprovedEndSoc } from '../plans/plans.repo';
 
 export interface InitialSoc {
   pct: number;

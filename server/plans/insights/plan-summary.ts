@@ -4,7 +4,7 @@
  * equivalent full cycles, peak import.
  */
 import type { PlanSummary } from '@shared/schemas/plan';
-import { scheduleCost, type AlignedInputs, type DispatchSolution } from '../engine';
+import { scheduleCost, type AlignedInputs, type DispatchSolution } from '../../engine';
 
 export function summarisePlan(a: AlignedInputs, from: number, steps: number, sol: DispatchSolution): PlanSummary {
   const slice = (xs: readonly number[], offset = 0) => xs.slice(offset, offset + steps);
