@@ -7,7 +7,6 @@
  * job worker started here for the purpose, signed off by the demo approver.
  * Idempotent: nothing is added once the demo battery has any plan.
  */
-import { eq } from 'drizzle-orm';
 import { planCreateSchema, type PlanCreateInput } from '@shared/schemas/plan';
 import { studyCreateSchema } from '@shared/schemas/study';
 import { getDb } from '../db/client';
@@ -16,11 +15,11 @@ import { listBatteries } from '../batteries/batteries.repo';
 import { startJobWorker } from '../jobs/job-worker';
 import { stopBoss } from '../jobs/boss';
 import { configureMail, stopFakeSmtp } from '../mail/mail.service';
-import { profiles } from '../profiles/profiles.schema';
+import { listProfiles } from '../profiles/profiles.repo';
 import { findSiteByName } from '../sites/sites.repo';
 import { approvePlan, submitPlan } from '../sign-off/sign-off.service';
 import { createStudy, getStudy } from '../studies/studies.service';
-import { plans } from '../plans/plans.schema';
+import { batteryHasPlans } from '../plans/plans.repo';
 import { createPlan, getPlan } from '../plans/plans.service';
 import { demoActor } from './demo-accounts';
 import { DEMO_BATTERY_NAME, DEMO_SITE_NAME } from './demo-site';
@@ -51,14 +50,11 @@ export async function seedDemoPlans(log: (m: string) => void, databaseUrl: strin
   const site = await findSiteByName(db, DEMO_SITE_NAME);
   const battery = site && (await listBatteries(db, site.id)).find((b) => b.name === DEMO_BATTERY_NAME);
   if (!site || !battery) throw new Error('the demo plans need the demo site and battery');
-  if ((await db.select({ id: plans.id }).from(plans).where(eq(plans.batteryId, battery.id)).limit(1)).length > 0) {
+  if (await batteryHasPlans(db, battery.id)) {
     log('Demo plans present.');
     return;
   }
-  const siteProfiles = await db
-    .select({ id: profiles.id, name: profiles.name })
-    .from(profiles)
-    .where(eq(profiles.siteId, site.id));
+  const siteProfiles = await listProfiles(db, site.id);
   const profileId = (name: string) => {
     const found = siteProfiles.find((p) => p.name === name);
     if (!found) throw new Error(`the demo profile "${name}" is missing`);

@@ -8,14 +8,13 @@
 import { createHash } from 'node:crypto';
 import { existsSync, readFileSync } from 'node:fs';
 import path from 'node:path';
-import { and, eq } from 'drizzle-orm';
 import { batteryCreateSchema } from '@shared/schemas/battery';
 import { siteCreateSchema } from '@shared/schemas/site';
 import type { ProfileKind } from '@shared/profile-csv';
 import { getDb } from '../db/client';
 import { listBatteries } from '../batteries/batteries.repo';
 import { createBattery } from '../batteries/batteries.service';
-import { profiles } from '../profiles/profiles.schema';
+import { findSiteProfileBySha256 } from '../profiles/profiles.repo';
 import { uploadProfile } from '../profiles/profile-upload.service';
 import { findSiteByName } from '../sites/sites.repo';
 import { createSite } from '../sites/sites.service';
@@ -89,11 +88,7 @@ export async function seedDemoSite(log: (m: string) => void, databaseUrl: string
   for (const p of DEMO_PROFILES) {
     const bytes = readFileSync(path.join(sampleDir, p.file));
     const sha256 = createHash('sha256').update(bytes).digest('hex');
-    const [present] = await db
-      .select({ id: profiles.id })
-      .from(profiles)
-      .where(and(eq(profiles.siteId, site.id), eq(profiles.kind, p.kind), eq(profiles.originalSha256, sha256)));
-    if (present) continue;
+    if (await findSiteProfileBySha256(db, site.id, p.kind, sha256)) continue;
     await uploadProfile(
       site.id,
       { originalname: p.file, buffer: bytes },

@@ -15,7 +15,8 @@ import type { Actor } from '../http/request-context';
 import type { PlanRow } from '../plans/plans.schema';
 import { checksumMatches } from '../sign-off/plan-checksum';
 import { exportFileName } from './export-file-name';
-import { findPlanForExport, namesOf } from './export.repo';
+import { findPlanRow } from '../plans/plans.repo';
+import { findPeople } from '../users/users.repo';
 import { ExportDataError, planCsv, type ExportSchedule } from './plan-csv';
 
 export interface PlanExport {
@@ -70,7 +71,7 @@ function notice(status: PlanRow['status']): string {
 
 export async function exportPlan(actor: Actor, id: string): Promise<PlanExport> {
   const db = getDb();
-  const plan = await findPlanForExport(db, id);
+  const plan = await findPlanRow(db, id);
   if (!plan) throw notFound('The plan');
   if (actor.role === 'viewer' && plan.status !== 'approved') {
     throw forbidden(`Viewers may export approved plans only; this plan is ${plan.status}.`);
@@ -99,14 +100,14 @@ export async function exportPlan(actor: Actor, id: string): Promise<PlanExport> 
       500,
     );
   }
-  const names = await namesOf(db, plan.approvedBy ? [plan.approvedBy] : []);
+  const people = await findPeople(db, plan.approvedBy ? [plan.approvedBy] : []);
   let csv: string;
   try {
     csv = planCsv(scheduleOf(plan, plan.results), {
       siteName: plan.inputs.site.name,
       planId: plan.id,
       status: plan.status,
-      approvedBy: plan.approvedBy ? (names.get(plan.approvedBy) ?? plan.approvedBy) : null,
+      approvedBy: plan.approvedBy ? (people.get(plan.approvedBy)?.name ?? plan.approvedBy) : null,
       approvedAt: plan.approvedAt?.toISOString() ?? null,
       approvalComment: plan.approvalComment,
       checksum: signedOff ? plan.checksum : null,

@@ -1,15 +1,10 @@
 import { Router } from 'express';
-import { sql } from 'drizzle-orm';
-import { getDb } from '../db/client';
+import { databaseIsUp } from './health.service';
 
 export const healthRouter = Router();
 
 /** `{ok:true, db:"up"}` only when a query against PostgreSQL succeeds; 503 otherwise. */
 healthRouter.get('/health', async (_req, res) => {
-  try {
-    await getDb().execute(sql`select 1`);
-    res.json({ ok: true, db: 'up' });
-  } catch {
-    res.status(503).json({ ok: false, db: 'down' });
-  }
+  if (await databaseIsUp()) res.json({ ok: true, db: 'up' });
+  else res.status(503).json({ ok: false, db: 'down' });
 });

@@ -14,7 +14,7 @@ import {
 import { getDb } from '../db/client';
 import { notFound, unprocessable } from '../http/app-error';
 import { checkWholeSteps } from '../runs/run-inputs';
-import { findPlanForPreview } from './horizon-preview.repo';
+import { findPlanForPreview } from '../plans/plans.repo';
 import { loadPreviewSeries } from './preview-inputs';
 import { hours } from './preview-solve';
 import { previewThread } from './preview-thread-client';

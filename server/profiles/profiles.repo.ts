@@ -1,4 +1,5 @@
 import { and, desc, eq, sql } from 'drizzle-orm';
+import type { ProfileKind } from '@shared/profile-csv';
 import type { DbOrTx } from '../db/client';
 import { users } from '../users/users.schema';
 import { profiles } from './profiles.schema';
@@ -66,6 +67,15 @@ export async function findProfileValues(db: DbOrTx, id: string, first: number, e
     })
     .from(profiles)
     .where(eq(profiles.id, id));
+  return row;
+}
+
+/** The site's profile of `kind` uploaded from the file with this SHA-256, if any. */
+export async function findSiteProfileBySha256(db: DbOrTx, siteId: string, kind: ProfileKind, sha256: string) {
+  const [row] = await db
+    .select({ id: profiles.id })
+    .from(profiles)
+    .where(and(eq(profiles.siteId, siteId), eq(profiles.kind, kind), eq(profiles.originalSha256, sha256)));
   return row;
 }
 

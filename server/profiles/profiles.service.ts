@@ -7,7 +7,7 @@ import { AppError, conflict, notFound, unprocessable } from '../http/app-error';
 import { FOREIGN_KEY_VIOLATION, pgErrorCode } from '../db/pg-errors';
 import type { Actor } from '../http/request-context';
 import { requireSite } from '../sites/sites.service';
-import { findProtectingPlans } from './profile-usage';
+import { findPlansProtectingProfile } from '../plans/plans.repo';
 import * as repo from './profiles.repo';
 
 const MINUTE_MS = 60_000;
@@ -109,7 +109,8 @@ export async function deleteProfile(id: string, actor: Actor): Promise<void> {
     await getDb().transaction(async (tx) => {
       // The row lock keeps two deletes (or a delete and a check) from interleaving.
       const row = await requireSummary(id, true, tx);
-      const plans = await findProtectingPlans(tx, id);
+      // Submitted and approved plans must stay checkable against the data they were solved on.
+      const plans = await findPlansProtectingProfile(tx, id);
       if (plans.length > 0) {
         const list = plans.map((p) => `${p.id} (${p.status})`).join(', ');
         throw new AppError(

@@ -11,7 +11,7 @@ import { recordAudit } from '../audit/audit.service';
 import { sendMail } from '../mail/mail.service';
 import { planFacts } from './plan-facts';
 import { decisionMail, planLink, submittedMail, type MailText, type PlanMailFacts } from './sign-off-mail';
-import { findPeople, listSignOffRecipients } from './sign-off.repo';
+import { findPeople, listSignOffRecipients } from '../users/users.repo';
 import type { Actor } from '../http/request-context';
 
 function mailFacts(actor: Actor, plan: PlanRow): PlanMailFacts {

@@ -10,7 +10,9 @@ import { getDb } from '../db/client';
 import { notFound } from '../http/app-error';
 import type { PlanRow } from '../plans/plans.schema';
 import { checksumMatches } from './plan-checksum';
-import { findPeople, findPlan, listAwaitingSignOff, listPlanEvents, type Person } from './sign-off.repo';
+import { findPlanForSignOff, listAwaitingSignOff } from '../plans/plans.repo';
+import { findPeople, type Person } from '../users/users.repo';
+import { listPlanEvents } from './sign-off.repo';
 
 function personAt(people: Map<string, Person>, id: string | null, at: Date | null): PersonAt | null {
   if (!id || !at) return null;
@@ -39,7 +41,7 @@ export function allowedActions(plan: PlanRow, user: AuthUser): SignOffRecord['ca
 
 export async function signOffRecord(id: string, user: AuthUser): Promise<SignOffRecord> {
   const db = getDb();
-  const plan = await findPlan(db, id);
+  const plan = await findPlanForSignOff(db, id);
   if (!plan) throw notFound('The plan');
   const events = await listPlanEvents(db, id);
   const people = await findPeople(

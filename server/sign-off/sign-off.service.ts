@@ -11,22 +11,21 @@ import { recordAudit } from '../audit/audit.service';
 import type { PlanRow } from '../plans/plans.schema';
 import { planChecksum } from './plan-checksum';
 import {
-  findPlan,
+  findPlanForSignOff,
   insertDraftCopy,
-  insertPlanEvent,
   lockBatteryApprovals,
   markApproved,
   markRejected,
   markSubmitted,
   supersedeOverlapping,
-  type NewPlanEvent,
-} from './sign-off.repo';
+} from '../plans/plans.repo';
+import { insertPlanEvent, type NewPlanEvent } from './sign-off.repo';
 import { notifyDecision, notifySubmitted } from './sign-off-notify';
 import type { Actor } from '../http/request-context';
 import { refusal, VERB, type Step } from './sign-off-rules';
 
 async function load(tx: DbOrTx, id: string) {
-  const plan = await findPlan(tx, id);
+  const plan = await findPlanForSignOff(tx, id);
   if (!plan) throw notFound('The plan');
   return plan;
 }

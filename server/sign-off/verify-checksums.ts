@@ -6,7 +6,7 @@
  */
 import type { DbOrTx } from '../db/client';
 import { checksumMatches } from './plan-checksum';
-import { pageSignedOffPlans } from './sign-off.repo';
+import { pageSignedOffPlans } from '../plans/plans.repo';
 
 export interface ChecksumReport {
   checked: number;

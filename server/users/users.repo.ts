@@ -1,5 +1,5 @@
 /** Queries on the users table. */
-import { and, asc, eq } from 'drizzle-orm';
+import { and, asc, eq, inArray, ne, sql } from 'drizzle-orm';
 import type { DbOrTx } from '../db/client';
 import { users, type UserRow } from './users.schema';
 
@@ -49,4 +49,39 @@ export async function lockActiveAdmins(tx: DbOrTx): Promise<string[]> {
     .orderBy(asc(users.id))
     .for('update');
   return rows.map((r) => r.id);
+}
+
+export interface Person {
+  id: string;
+  name: string;
+  email: string;
+  role: string;
+  disabled: boolean;
+}
+
+/** Names and addresses of the given users (for sign-off history, e-mails and exports). */
+export async function findPeople(db: DbOrTx, ids: readonly string[]): Promise<Map<string, Person>> {
+  const unique = [...new Set(ids)];
+  if (unique.length === 0) return new Map();
+  const rows = await db
+    .select({ id: users.id, name: users.name, email: users.email, role: users.role, disabled: users.disabled })
+    .from(users)
+    .where(inArray(users.id, unique));
+  return new Map(rows.map((r) => [r.id, r]));
+}
+
+/** Who may sign off a plan: active approvers and admins with a password set, never the submitter. */
+export function listSignOffRecipients(db: DbOrTx, submitterId: string) {
+  return db
+    .select({ id: users.id, name: users.name, email: users.email })
+    .from(users)
+    .where(
+      and(
+        inArray(users.role, ['approver', 'admin']),
+        eq(users.disabled, false),
+        sql`${users.passwordHash} is not null`,
+        ne(users.id, submitterId),
+      ),
+    )
+    .orderBy(asc(users.email));
 }

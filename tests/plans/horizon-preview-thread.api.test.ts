@@ -10,7 +10,7 @@ import type { HorizonPreview } from '@shared/schemas/horizon-preview';
 import type { Plan, PlanCreated } from '@shared/schemas/plan';
 import { getDb } from '../../server/db/client';
 import type { JobWorker } from '../../server/jobs/job-worker';
-import { findPlanForPreview } from '../../server/horizon-preview/horizon-preview.repo';
+import { findPlanForPreview } from '../../server/plans/plans.repo';
 import { previewThread } from '../../server/horizon-preview/preview-thread-client';
 import { createTestApp } from '../support/test-app';
 import { signInAs, type SignedInAgent } from '../support/auth';

@@ -8,7 +8,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { createTestApp } from '../support/test-app';
 import { signInAs, type SignedInAgent } from '../support/auth';
 import { getDb } from '../../server/db/client';
-import { findPlan, markApproved } from '../../server/sign-off/sign-off.repo';
+import { findPlanForSignOff as findPlan, markApproved } from '../../server/plans/plans.repo';
 import { planChecksum } from '../../server/sign-off/plan-checksum';
 import { createPlace, insertDraftPlan, sqlQuery, type Place } from './support';
 
