@@ -1,4 +1,4 @@
-/** Sign-in, sign-out, the current user, and password links (DESIGN section 6). HTTP only. */
+/** Sign-in, sign-out, the current user, and password links. HTTP only: rules live in the services. */
 import { Router, type Response } from 'express';
 import {
   passwordChangeSchema,

@@ -1,4 +1,4 @@
-/** `GET|POST /api/sites/:id/batteries`, `GET|PATCH /api/batteries/:id` (DESIGN section 6). */
+/** `GET|POST /api/sites/:id/batteries`, `GET|PATCH /api/batteries/:id`. HTTP only: rules live in the service. */
 import { Router } from 'express';
 import { batteryCreateSchema, batteryPatchSchema } from '@shared/schemas/battery';
 import { actorOf, pathId } from '../http/request-context';

@@ -2,8 +2,8 @@
  * `GET /api/plans/:id/export.csv`: the schedule of the delivery window as CSV.
  * Viewers get approved plans only. A signed-off plan's checksum is recomputed
  * from the stored inputs and results before a single byte is sent: a plan
- * that no longer matches what was approved is never served (SECURITY.md,
- * "Data integrity").
+ * that no longer matches what was approved is never served (README, "Sign-off
+ * and exports").
  */
 import type { PlanResults, PlanStep } from '@shared/schemas/plan';
 import { SIGN_OFF_CAUTIONS } from '@shared/schemas/sign-off';

@@ -1,5 +1,5 @@
 /**
- * The quick horizon preview (issue 9): a plan's stored inputs re-solved with
+ * The quick horizon preview: a plan's stored inputs re-solved with
  * another horizon, on the exact fast path, answered at once. Read-only: the
  * plan, its job and the audit trail stay as they are; a planner who likes the
  * horizon makes a full plan with it.

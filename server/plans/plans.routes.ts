@@ -1,6 +1,6 @@
 /**
  * `POST /api/plans` → 202 {plan, job}, `GET /api/plans?siteId=&status=…`,
- * `GET /api/plans/:id` (DESIGN section 6), and the plan form's defaults for a
+ * `GET /api/plans/:id`, and the plan form's defaults for a
  * battery. HTTP only: rules live in the service.
  */
 import { Router } from 'express';

@@ -15,7 +15,7 @@ import type { PlanInputs, PlanResults } from '@shared/schemas/plan';
 import { runJobColumn, runSourceColumns } from '../runs/run-columns';
 
 /**
- * Dispatch plans (DESIGN sections 2 and 4). `inputs` is the snapshot taken at
+ * Dispatch plans (docs/model.md). `inputs` is the snapshot taken at
  * creation (battery and site parameters copied, profiles named by id and
  * SHA-256), so a later edit of the battery never changes the plan. `results`
  * is written once, by the job, together with `results_input_version`.

@@ -1,5 +1,5 @@
 /**
- * `POST|GET /api/sites/:id/profiles`, `GET /api/profiles/:id` (DESIGN section 6),
+ * `POST|GET /api/sites/:id/profiles`, `GET /api/profiles/:id`,
  * plus `GET /api/profiles/:id/original` (the file as uploaded) and
  * `DELETE /api/profiles/:id`.
  */

@@ -34,7 +34,7 @@ export function allowedActions(plan: PlanRow, user: AuthUser): SignOffRecord['ca
     approve: mayApprove,
     reject: mayApprove,
     copy: can(user.role, 'data.edit') && plan.status === 'rejected',
-    // Viewers export approved plans only (DESIGN section 5).
+    // Viewers export approved plans only (README, "Sign-off and exports").
     export: hasResults && (user.role !== 'viewer' || plan.status === 'approved'),
   };
 }

@@ -1,6 +1,6 @@
 /**
  * The sign-off workflow: draft → submitted → approved | rejected, superseding
- * and copying (DESIGN sections 2 and 5, SECURITY.md "Data integrity").
+ * and copying (README, "Sign-off and exports").
  * Each action is one transaction holding the state change, its history event
  * and its audit event; e-mails go out only after the commit.
  */
@@ -63,7 +63,7 @@ function event(
 
 /**
  * Runs an action's transaction; a refusal on segregation of duties is a refused
- * authorisation and goes to the audit trail (SECURITY.md "Logging and audit"),
+ * authorisation and goes to the audit trail (ASVS 5.0 16.3.2),
  * written after the rollback so it is kept.
  */
 async function auditingRefusals<T>(actor: Actor, id: string, step: Step, run: () => Promise<T>): Promise<T> {

@@ -2,7 +2,7 @@
  * Recomputes the checksum of every signed-off plan (approved or superseded)
  * and compares it with the stored one: after a restore, and for an
  * administrator who wants to know that nothing was changed behind the
- * application's back (SECURITY.md, "Backup and restore").
+ * application's back (README, "Backup and restore").
  */
 import type { DbOrTx } from '../db/client';
 import { checksumMatches } from './plan-checksum';

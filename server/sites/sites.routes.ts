@@ -1,4 +1,4 @@
-/** `GET|POST /api/sites`, `GET|PATCH /api/sites/:id` (DESIGN section 6). HTTP only: rules live in the service. */
+/** `GET|POST /api/sites`, `GET|PATCH /api/sites/:id`. HTTP only: rules live in the service. */
 import { Router } from 'express';
 import { siteCreateSchema, sitePatchSchema } from '@shared/schemas/site';
 import { actorOf, pathId } from '../http/request-context';

@@ -4,7 +4,7 @@ import type { StudyInputs, StudyResults } from '@shared/schemas/study';
 import { runJobColumn, runSourceColumns } from '../runs/run-columns';
 
 /**
- * Horizon studies (DESIGN section 2): closed-loop receding-horizon runs over a
+ * Horizon studies (docs/model.md): closed-loop receding-horizon runs over a
  * period for several horizons and terminal rules, compared with the reference
  * path. Inputs are a snapshot like a plan's; results are written once by the
  * job, keyed by study id and input version. The job's state and progress live

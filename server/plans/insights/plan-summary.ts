@@ -1,5 +1,5 @@
 /**
- * Headline figures of a plan's delivery window (DESIGN section 3 cost rule):
+ * Headline figures of a plan's delivery window (the cost rule of docs/model.md):
  * money paid, what the battery earns against the same site without it,
  * equivalent full cycles, peak import.
  */
