@@ -9,7 +9,7 @@ export function pgErrorCode(error: unknown): string | undefined {
   return undefined;
 }
 
-export const UNIQUE_VIOLATION = '23505';
+const UNIQUE_VIOLATION = '23505';
 export const FOREIGN_KEY_VIOLATION = '23503';
 
 /** Runs `work`; a unique-constraint violation becomes `conflictError` (a clear 409 instead of a 500). */

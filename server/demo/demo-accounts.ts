@@ -12,7 +12,7 @@ import { findUserByEmail, insertUser } from '../users/users.repo';
 
 export const demoPassword = 'slackwater-demo';
 
-export const demoAccounts: readonly { email: string; name: string; role: Role }[] = [
+const demoAccounts: readonly { email: string; name: string; role: Role }[] = [
   { email: 'admin@slackwater.example', name: 'Morgan Reyes', role: 'admin' },
   { email: 'planner@slackwater.example', name: 'Priya Nair', role: 'planner' },
   { email: 'approver@slackwater.example', name: 'Tomas Lind', role: 'approver' },
@@ -20,8 +20,7 @@ export const demoAccounts: readonly { email: string; name: string; role: Role }[
 ];
 
 /** Deterministic ids, so other seeders can refer to the demo planner and approver. */
-export const demoUserId = (role: Role) =>
-  `00000000-0000-4000-a000-00000000000${demoAccounts.findIndex((a) => a.role === role) + 1}`;
+const demoUserId = (role: Role) => `00000000-0000-4000-a000-00000000000${demoAccounts.findIndex((a) => a.role === role) + 1}`;
 
 /** A demo account acting for a seeder: audit rows name it, from the address "seed". */
 export function demoActor(role: Role, databaseUrl: string): Actor {

@@ -11,7 +11,6 @@ import { loadJobsConfig, type JobsConfig } from './jobs-config';
 export const DEAD_LETTER_QUEUE = 'job-dead-letter';
 
 let starting: Promise<PgBoss> | null = null;
-let current: PgBoss | null = null;
 
 async function ensureQueues(boss: PgBoss, config: JobsConfig): Promise<void> {
   const dead: PgBoss.Queue = { name: DEAD_LETTER_QUEUE, policy: 'standard', retryLimit: 0, retentionMinutes: 7 * 24 * 60 };
@@ -48,7 +47,6 @@ export function ensureBoss(databaseUrl: string, config: JobsConfig = loadJobsCon
       .start()
       .then(async () => {
         await ensureQueues(boss, config);
-        current = boss;
         return boss;
       })
       .catch((error: unknown) => {
@@ -59,15 +57,10 @@ export function ensureBoss(databaseUrl: string, config: JobsConfig = loadJobsCon
   return starting;
 }
 
-export function startedBoss(): PgBoss | null {
-  return current;
-}
-
 /** Stops pg-boss: waits up to `timeoutMs` for running jobs, then fails them so another worker retries. */
 export async function stopBoss(timeoutMs = 10_000): Promise<void> {
   const pending = starting;
   starting = null;
-  current = null;
   if (!pending) return;
   const boss = await pending.catch(() => null);
   await boss?.stop({ graceful: true, timeout: timeoutMs, wait: true });

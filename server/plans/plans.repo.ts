@@ -160,7 +160,7 @@ export async function findPlanForPreview(db: DbOrTx, id: string) {
 }
 
 /** Statuses whose plans keep their input profiles from deletion (a signed plan stays checkable against its data). */
-export const PROFILE_PROTECTING_STATUSES = ['submitted', 'approved'] as const;
+const PROFILE_PROTECTING_STATUSES = ['submitted', 'approved'] as const;
 
 /** Submitted and approved plans resting on a profile, a few at most. */
 export async function findPlansProtectingProfile(db: DbOrTx, profileId: string, limit = 10) {

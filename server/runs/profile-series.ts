@@ -20,7 +20,7 @@ export interface SnapshotSeries {
   readonly generation: ProfileSeries | null;
 }
 
-export async function loadProfileSeries(db: DbOrTx, ref: ProfileRef): Promise<ProfileSeries> {
+async function loadProfileSeries(db: DbOrTx, ref: ProfileRef): Promise<ProfileSeries> {
   const summary = await findProfileSummary(db, ref.id);
   if (!summary)
     throw new SnapshotProfileError(
