@@ -1,5 +1,6 @@
 import { sql } from 'drizzle-orm';
 import { check, doublePrecision, index, integer, pgTable, text, timestamp, uuid } from 'drizzle-orm/pg-core';
+import type { JobKind } from '@shared/schemas/job';
 
 /**
  * Progress of background jobs, one row per pg-boss job (same id). pg-boss keeps
@@ -12,7 +13,8 @@ export const jobProgress = pgTable(
   {
     jobId: uuid('job_id').primaryKey(),
     queue: text('queue').notNull(),
-    kind: text('kind', { enum: ['plan', 'study'] }).notNull(),
+    /** The registered job kind (server/jobs/job-registry.ts). */
+    kind: text('kind').$type<JobKind>().notNull(),
     entityId: uuid('entity_id').notNull(),
     state: text('state', { enum: ['queued', 'running', 'retrying', 'completed', 'failed'] })
       .notNull()
