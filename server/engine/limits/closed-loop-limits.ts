@@ -4,7 +4,7 @@
  * cost hold across re-plans, not only inside each window) and the reserve
  * revenue of the applied steps (cash, like the energy bill).
  */
-import type { DispatchProblem, DispatchSolution } from '../types';
+import type { BatteryParams, DispatchProblem, DispatchSolution } from '../types';
 import { hasMoves, limitFeatures } from './limit-features';
 import { reserveRevenue } from './read-limits';
 
@@ -40,4 +40,23 @@ export function carriedLimits(whole: DispatchProblem): CarriedLimits {
       return revenue;
     },
   };
+}
+
+/**
+ * Whether a run's state between re-plans is the SoC alone and its cash the
+ * schedule's alone: no ramp rate or switching cost (the last power is state too)
+ * and no reserves (their revenue is not part of a stitched schedule's cost).
+ */
+export function stateIsSoc(inputs: {
+  readonly battery: BatteryParams;
+  readonly reserveUpPrice?: readonly number[];
+  readonly reserveDownPrice?: readonly number[];
+}): boolean {
+  const { rampKwPerMin, switchingCostPerMw } = inputs.battery;
+  return (
+    rampKwPerMin == null &&
+    (switchingCostPerMw == null || switchingCostPerMw === 0) &&
+    inputs.reserveUpPrice === undefined &&
+    inputs.reserveDownPrice === undefined
+  );
 }
