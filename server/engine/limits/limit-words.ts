@@ -3,9 +3,10 @@
  * bound it, what reserve earned, and the warning on a delivery duration longer
  * than the usable energy can sustain at full power.
  */
-import type { BatteryParams, LimitBinding } from '../types';
+import type { BatteryParams, DispatchProblem, LimitBinding } from '../types';
 import { usableEnergyKwh } from '../inputs/problem-for';
 import type { ReserveEffect } from './reserve-effect';
+import { limitFeatures } from './limit-features';
 
 const money = (v: number) => v.toFixed(2);
 const kw = (v: number) => `${Math.round(v)} kW`;
@@ -67,4 +68,16 @@ export function limitNotes(input: LimitWordsInput): string[] {
     );
   }
   return notes;
+}
+
+/** Extra words for an infeasible model with a ramp rate or availability (empty without them). */
+export function limitInfeasibleHint(problem: DispatchProblem): string {
+  const f = limitFeatures(problem);
+  const parts = [
+    ...(f.rampKwPerMin !== null
+      ? [`the ramp rate (${f.rampKwPerMin} kW/min) may be too slow to reach the terminal rule in time`]
+      : []),
+    ...(f.availability ? ['the availability profile may leave too little power'] : []),
+  ];
+  return parts.length > 0 ? ` With the operating limits: ${parts.join('; ')}.` : '';
 }
