@@ -28,6 +28,7 @@ import { runHorizonStudy } from '../server/engine/study/run-horizon-study';
 import type { BatteryParams } from '../server/engine/types';
 import { benchDp } from '../server/engine/dp/bench';
 import { benchCliCommand } from './lib/bench-cli';
+import { closedLoopWithLimits } from './bench-limits';
 
 const glpk = await GLPK();
 const log = (message: string) => process.stderr.write(`bench: ${message}\n`);
@@ -361,6 +362,10 @@ const SECTIONS: Section[] = [
   { name: 'closedLoop24h', run: closedLoop24h },
   { name: 'sixHorizonStudy', run: sixHorizonStudy },
   { name: 'dynamicProgram', run: dynamicProgram },
+  {
+    name: 'closedLoopWithLimits',
+    run: () => closedLoopWithLimits({ glpk, battery: BATTERY, prices, startMs: Date.UTC(2025, 11, 31, 23), timed }),
+  },
 ];
 
 const only = process.argv.slice(2);

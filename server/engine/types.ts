@@ -21,6 +21,17 @@ export interface BatteryParams {
   readonly degradationCostPerMwh: number;
   /** Daily cap on equivalent full cycles (discharged energy / usable energy); null = none. */
   readonly maxCyclesPerDay: number | null;
+  /**
+   * Ramp rate R, kW per minute: |Δ net power| between adjacent intervals ≤ R·60·Δt
+   * (net power = discharge − charge). Null or absent = no limit. Solved on the LP path.
+   */
+  readonly rampKwPerMin?: number | null;
+  /**
+   * Switching cost s, currency per MW of change in net power between adjacent
+   * intervals: a penalty against chatter, reported as `switchingPenalty`, not cash.
+   * Null or absent = none. Solved on the LP path.
+   */
+  readonly switchingCostPerMw?: number | null;
 }
 
 /** Site parameters, the same keys as the command line's site JSON. */
@@ -71,6 +82,20 @@ export interface DispatchProblem {
   readonly peakFloorKw?: number;
   /** Energy already discharged earlier in the local day of step 0, kWh (receding horizon with a throughput cap); default 0. */
   readonly dischargedFirstDayKwh?: number;
+  /** Share (0–1) of both power ratings usable per step (length N); absent = 1 throughout. */
+  readonly availability?: readonly number[];
+  /** Availability price of upward reserve per step, currency/MW/h (length N); absent = no upward reserve. */
+  readonly reserveUpPrice?: readonly number[];
+  /** Availability price of downward reserve per step, currency/MW/h (length N); absent = no downward reserve. */
+  readonly reserveDownPrice?: readonly number[];
+  /** Delivery duration D the energy headroom of held reserve must cover, hours (needed with reserve prices). */
+  readonly reserveHours?: number;
+  /**
+   * Net battery power (discharge − charge, kW) in the interval before step 0. When
+   * given, the ramp rate and the switching cost apply at step 0 too; absent, they
+   * start at step 1 (nothing is known before t = 0).
+   */
+  readonly initialNetPowerKw?: number;
 }
 
 export type SolveStatus = 'optimal' | 'infeasible' | 'unbounded' | 'error';
@@ -82,9 +107,9 @@ export interface DispatchSolution {
   readonly method: 'dp' | 'lp';
   /** Human-readable reason when status is not optimal. */
   readonly message?: string;
-  /** Objective value: money paid incl. degradation and demand charge, minus terminal value. */
+  /** Objective value: cost + switching penalty − terminal value. */
   readonly objective: number;
-  /** Money paid incl. degradation and demand charge, excluding any terminal value (negative = earnings). */
+  /** Money paid incl. degradation and demand charge, minus reserve revenue, excluding any terminal value (negative = earnings). */
   readonly cost: number;
   readonly chargeKw: readonly number[];
   readonly dischargeKw: readonly number[];
@@ -102,4 +127,31 @@ export interface DispatchSolution {
   readonly tieBroken?: boolean;
   /** Wall-clock seconds of the solve. */
   readonly seconds?: number;
+  /** Why this method solved it, when the exact dynamic program could not (e.g. reserves or a ramp rate). */
+  readonly methodReason?: string;
+  /** Upward and downward reserve held per step, kW (models with reserve prices only). */
+  readonly reserveUpKw?: readonly number[];
+  readonly reserveDownKw?: readonly number[];
+  /** Reserve availability payments earned, currency (already subtracted from `cost`). */
+  readonly reserveRevenue?: number;
+  /** Switching penalty s·Σ|Δ net power|/1000, currency; not cash and not in `cost` (objective = cost + switchingPenalty − terminal value). */
+  readonly switchingPenalty?: number;
+  /** How often the operating limits of DESIGN section 3.3 bind (models that have them). */
+  readonly limitBinding?: LimitBinding;
+}
+
+/** Number of intervals in which each operating limit binds (is met with equality). */
+export interface LimitBinding {
+  /** Intervals whose change of net power from the previous interval is at the ramp limit. */
+  readonly rampIntervals: number;
+  /** Intervals with availability below 1 where the derated power limit (with reserve) binds. */
+  readonly availabilityIntervals: number;
+  /** Intervals where charge/discharge plus reserve fill a power limit. */
+  readonly reservePowerIntervals: number;
+  /** Intervals where held reserve fills the energy headroom at the start or end of the interval. */
+  readonly reserveEnergyIntervals: number;
+  /** Intervals where held reserve fills the grid headroom. */
+  readonly reserveGridIntervals: number;
+  /** Adjacent intervals whose net power changes sign (charge to discharge or back). */
+  readonly signChanges: number;
 }

@@ -11,7 +11,7 @@ export interface ProfileIssue {
 }
 
 export type IssueCategory =
-  'options' | 'file' | 'structure' | 'time' | 'local-time' | 'offset' | 'number' | 'order' | 'gap' | 'step';
+  'options' | 'file' | 'structure' | 'time' | 'local-time' | 'offset' | 'number' | 'range' | 'order' | 'gap' | 'step';
 
 export const DEFAULT_MAX_ISSUES = 50;
 
@@ -29,6 +29,7 @@ const CATEGORY_HINTS: Readonly<Record<IssueCategory, string>> = {
     "Use the same UTC offset throughout, or the offsets of the site's time zone (they change only on its daylight-saving days).",
   number:
     'Values must be plain numbers such as -12.5 (or -12,5 in a semicolon-separated file): no units, thousands separators, NaN or Infinity.',
+  range: 'Availability is a fraction of the power ratings from 0 (unavailable) to 1 (fully available), or 0–100 with the unit %.',
   order: 'Sort the rows by time, earliest first, with each interval once.',
   gap: 'To fill missing intervals by linear interpolation between their neighbours, upload again with gap filling turned on.',
   step: 'Every row must be one interval after the previous one: 5, 15, 30 or 60 minutes throughout.',

@@ -11,14 +11,15 @@ import { parseTimestamp } from './parse-timestamp';
 import { pickColumns } from './pick-columns';
 import { describeProfile } from './profile-notes';
 import {
-  ACCEPTED_UNITS,
-  CANONICAL_UNIT,
-  PROFILE_KINDS,
+  ALL_PROFILE_KINDS,
   canonicalFactor,
+  canonicalUnitOf,
+  unitsFor,
   isAcceptedUnit,
-  type ProfileKind,
+  type AnyProfileKind,
   type ProfileUnit,
 } from './profile-units';
+import { checkValueRange } from './check-range';
 import { readCsvRows } from './read-csv-rows';
 import { readTimedRows } from './read-timed-rows';
 import { createZoneClock, type ZoneClock } from './zone-clock';
@@ -26,8 +27,8 @@ import { createZoneClock, type ZoneClock } from './zone-clock';
 export type { ProfileIssue } from './issue-list';
 
 export interface ParseProfileOptions {
-  kind: ProfileKind;
-  /** One of ACCEPTED_UNITS[kind]. */
+  kind: AnyProfileKind;
+  /** One of unitsFor(kind). */
   unit: string;
   /** IANA name of the site's time zone; local times without offsets are read in it. */
   timezone: string;
@@ -56,13 +57,13 @@ export interface ParsedProfile {
 export type ParseProfileResult = { ok: true; profile: ParsedProfile } | { ok: false; issues: ProfileIssue[]; hint: string };
 
 function checkOptions(options: ParseProfileOptions, issues: IssueList): ZoneClock | null {
-  if (!(PROFILE_KINDS as readonly string[]).includes(options.kind)) {
-    issues.add('options', 0, `The kind "${String(options.kind)}" is not known; choose price, load or generation.`);
+  if (!(ALL_PROFILE_KINDS as readonly string[]).includes(options.kind)) {
+    issues.add('options', 0, `The kind "${String(options.kind)}" is not known; choose ${ALL_PROFILE_KINDS.join(', ')}.`);
   } else if (!isAcceptedUnit(options.kind, options.unit)) {
     issues.add(
       'options',
       0,
-      `The unit "${options.unit}" does not fit a ${options.kind} profile; choose one of ${ACCEPTED_UNITS[options.kind].join(', ')}.`,
+      `The unit "${options.unit}" does not fit a ${options.kind} profile; choose one of ${unitsFor(options.kind).join(', ')}.`,
     );
   }
   const clock = createZoneClock(options.timezone);
@@ -138,6 +139,7 @@ export function parseProfileCsv(text: string, options: ParseProfileOptions): Par
     issues,
   );
   const series = checkSequence(timed.rows, fillGaps, issues);
+  checkValueRange(timed.rows, options.kind, options.unit as ProfileUnit, issues);
   if (series === null || issues.count > 0) return failure(issues);
 
   const { values, stepMinutes } = series;
@@ -175,7 +177,7 @@ export function parseProfileCsv(text: string, options: ParseProfileOptions): Par
       startMs,
       stepMinutes,
       values: factor === 1 ? values : values.map((v) => v * factor),
-      unit: CANONICAL_UNIT[options.kind],
+      unit: canonicalUnitOf(options.kind),
       filledIndexes,
       notes,
     },

@@ -4,7 +4,7 @@
  * column whose first cell reads as a time and the next column after it.
  * The choice is explained in a note so the user can check it.
  */
-import type { ProfileKind } from './profile-units';
+import type { AnyProfileKind } from './profile-units';
 import { parseTimestamp } from './parse-timestamp';
 
 export interface ColumnChoice {
@@ -27,10 +27,13 @@ const TIME_WORDS: Readonly<Record<string, number>> = {
 const START_WORDS = ['start', 'begin', 'beginning', 'from'];
 const END_WORDS = ['end', 'ending', 'to'];
 
-const KIND_WORDS: Readonly<Record<ProfileKind, readonly string[]>> = {
+const KIND_WORDS: Readonly<Record<AnyProfileKind, readonly string[]>> = {
   price: ['price', 'prices', 'tariff', 'cost', 'rate'],
   load: ['load', 'demand', 'consumption'],
   generation: ['generation', 'gen', 'pv', 'solar', 'production', 'output', 'wind'],
+  availability: ['availability', 'available', 'derating', 'fraction', 'share'],
+  'reserve-up-price': ['price', 'prices', 'reserve', 'up', 'upward', 'capacity'],
+  'reserve-down-price': ['price', 'prices', 'reserve', 'down', 'downward', 'capacity'],
 };
 const VALUE_WORDS = ['value', 'values', 'power', 'energy', 'kw', 'mw', 'kwh', 'mwh', 'currency', 'eur', 'usd', 'gbp'];
 
@@ -51,7 +54,7 @@ function timeScore(header: string, intervalEnding: boolean): number {
   return score;
 }
 
-function valueScore(header: string, kind: ProfileKind): number {
+function valueScore(header: string, kind: AnyProfileKind): number {
   let score = 0;
   for (const word of words(header)) {
     if (KIND_WORDS[kind].includes(word)) score += 3;
@@ -76,7 +79,7 @@ function describe(header: readonly string[], column: number): string {
 export function pickColumns(
   header: readonly string[],
   firstRow: readonly string[] | undefined,
-  kind: ProfileKind,
+  kind: AnyProfileKind,
   intervalEnding: boolean,
 ): ColumnChoice | { reason: string } {
   let timeColumn = best(header.map((h) => timeScore(h, intervalEnding)));

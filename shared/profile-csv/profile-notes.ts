@@ -6,7 +6,7 @@
 import { describeDuration } from './check-sequence';
 import { describeIndexRuns } from './fill-gaps';
 import type { ColumnChoice } from './pick-columns';
-import { CANONICAL_UNIT, canonicalFactor, isEnergyPerInterval, type ProfileKind, type ProfileUnit } from './profile-units';
+import { canonicalFactor, canonicalUnitOf, isEnergyPerInterval, type AnyProfileKind, type ProfileUnit } from './profile-units';
 import type { CsvTable } from './read-csv-rows';
 import type { TimedRows } from './read-timed-rows';
 import { formatInstant, formatOffset, type ZoneClock } from './zone-clock';
@@ -16,7 +16,7 @@ export interface ProfileFacts {
   readonly columns: ColumnChoice;
   readonly timed: TimedRows;
   readonly clock: ZoneClock;
-  readonly kind: ProfileKind;
+  readonly kind: AnyProfileKind;
   readonly unit: ProfileUnit;
   readonly intervalEnding: boolean;
   readonly startMs: number;
@@ -68,7 +68,7 @@ export function describeProfile(f: ProfileFacts): string[] {
   }
 
   const factor = canonicalFactor(f.unit, f.stepMinutes);
-  const canonical = CANONICAL_UNIT[f.kind];
+  const canonical = canonicalUnitOf(f.kind);
   if (isEnergyPerInterval(f.unit)) {
     notes.push(`Converted ${f.unit} per ${f.stepMinutes}-minute interval to average ${canonical} (×${factor}).`);
   } else if (factor !== 1) notes.push(`Converted ${f.unit} to ${canonical} (×${factor}).`);

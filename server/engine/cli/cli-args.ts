@@ -25,12 +25,27 @@ const COMMON = [
   'method',
 ];
 const COMMON_FLAGS = ['interval-ending', 'fill-gaps'];
+/** Operating limits (DESIGN section 3.3): reserves, availability and the power before the start. */
+const LIMITS = ['reserve-up-prices', 'reserve-down-prices', 'reserve-hours', 'availability', 'initial-power'];
 
 export const COMMAND_OPTIONS: Readonly<Record<string, readonly string[]>> = {
   steady: [...COMMON, 'days'],
-  reference: [...COMMON, 'start', 'end', 'terminal', 'initial-soc'],
-  plan: [...COMMON, 'start', 'end', 'horizon', 'terminal', 'initial-soc', 'band', 'days'],
-  study: [...COMMON, 'start', 'end', 'horizons', 'replan', 'terminal', 'initial-soc', 'gap-target', 'band', 'workers', 'days'],
+  reference: [...COMMON, ...LIMITS, 'start', 'end', 'terminal', 'initial-soc'],
+  plan: [...COMMON, ...LIMITS, 'start', 'end', 'horizon', 'terminal', 'initial-soc', 'band', 'days'],
+  study: [
+    ...COMMON,
+    ...LIMITS.filter((name) => name !== 'initial-power'),
+    'start',
+    'end',
+    'horizons',
+    'replan',
+    'terminal',
+    'initial-soc',
+    'gap-target',
+    'band',
+    'workers',
+    'days',
+  ],
 };
 
 export const USAGE = `usage: npm run --silent cli -- <command> [options]
@@ -40,7 +55,11 @@ commands:
   plan      --prices F --battery F [--load F] [--site F] --start ISO --end ISO --horizon HOURS --terminal RULE [--initial-soc PCT] [--days all|weekday|weekend]
   study     --prices F --battery F [--load F] [--site F] [--start ISO] [--end ISO] --horizons 6,12,24,48 --replan HOURS --terminal free,steady-value [--days all|weekday|weekend]
 common: [--generation F] [--export-prices F] [--price-unit currency/MWh|currency/kWh] [--load-unit kW|MW|kWh|MWh]
-        [--generation-unit ...] [--interval-ending] [--fill-gaps] [--method auto|lp|dp]`;
+        [--generation-unit ...] [--interval-ending] [--fill-gaps] [--method auto|lp|dp]
+limits (reference, plan, study): [--reserve-up-prices F] [--reserve-down-prices F] [--reserve-hours HOURS]
+        [--availability F] [--initial-power KW (reference, plan: net power before the start, discharge positive)]
+        reserve prices: columns timestamp,price in currency/MW/h; availability: timestamp,availability as 0–1;
+        battery file keys rampKwPerMin (kW/min) and switchingCostPerMw (per MW), null = none`;
 
 export function parseArgs(argv: readonly string[]): ParsedArgs {
   const [command, ...rest] = argv;

@@ -4,12 +4,13 @@
  * becomes a CliInputError that names the file and line.
  */
 import { readFileSync } from 'node:fs';
-import { decodeProfileBytes, parseProfileCsv, createZoneClock } from '@shared/profile-csv';
+import { decodeProfileBytes, parseProfileCsv, createZoneClock, type AnyProfileKind } from '@shared/profile-csv';
 import { alignInputs, type AlignedInputs, type ProfileSeries } from '../inputs/align-inputs';
 import { CliInputError, type ParsedArgs } from './cli-args';
 import { readBattery, readSite } from './read-params';
+import { readLimitInputs } from './read-limit-inputs';
 
-type Kind = 'price' | 'load' | 'generation';
+type Kind = AnyProfileKind;
 
 function readProfile(path: string, kind: Kind, unit: string, timezone: string, args: ParsedArgs): ProfileSeries {
   let bytes: Uint8Array;
@@ -58,6 +59,7 @@ export function readInputs(args: ParsedArgs, warn: (message: string) => void): A
     ...(exportPrices ? { exportPrices } : {}),
     ...(load ? { load } : {}),
     ...(generation ? { generation } : {}),
+    ...readLimitInputs(args, read),
   });
   if (!aligned.ok) throw new CliInputError(`${aligned.issue.field}: ${aligned.issue.message}`);
   for (const note of aligned.inputs.notes) warn(note);

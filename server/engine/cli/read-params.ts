@@ -20,6 +20,8 @@ const BATTERY_KEYS = [
   'maxCyclesPerDay',
 ] as const;
 const NULLABLE_BATTERY = new Set<string>(['maxCyclesPerDay']);
+/** Operating limits (DESIGN section 3.3): optional keys, null or absent = none. */
+const OPTIONAL_BATTERY = ['rampKwPerMin', 'switchingCostPerMw'] as const;
 const SITE_LIMITS = ['importLimitKw', 'exportLimitKw', 'demandChargePerKw'] as const;
 
 export function readJsonFile(path: string, what: string): Record<string, unknown> {
@@ -57,10 +59,12 @@ export function unknownKeys(obj: Record<string, unknown>, known: readonly string
 
 export function readBattery(path: string, warn: (message: string) => void): BatteryParams {
   const obj = readJsonFile(path, 'battery');
-  const extra = unknownKeys(obj, BATTERY_KEYS);
+  const extra = unknownKeys(obj, [...BATTERY_KEYS, ...OPTIONAL_BATTERY]);
   if (extra.length > 0) warn(`ignoring unknown key(s) in ${path}: ${extra.join(', ')}`);
   const entries = BATTERY_KEYS.map((key) => [key, numberKey(obj, key, NULLABLE_BATTERY.has(key), path)]);
-  return Object.fromEntries(entries);
+  // Absent optional keys stay absent, so a battery file without them reads exactly as before.
+  const optional = OPTIONAL_BATTERY.filter((key) => key in obj).map((key) => [key, numberKey(obj, key, true, path)]);
+  return Object.fromEntries([...entries, ...optional]);
 }
 
 export const DEFAULT_SITE: SiteParams = { timezone: 'UTC', importLimitKw: null, exportLimitKw: null, demandChargePerKw: null };

@@ -14,6 +14,8 @@ import { runHorizonStudy } from '../study/run-horizon-study';
 import { parseTerminal, terminalLabel, type TerminalChoice } from '../terminal/terminal-choice';
 import { CliInputError, listOption, numberOption, required, type ParsedArgs } from './cli-args';
 import { parseInstant } from './read-inputs';
+import { initialPower } from './read-limit-inputs';
+import { limitOutput, limitWarnings } from './limit-output';
 
 export const CAUTION =
   "Decision support only: check the schedule against the interconnection agreement, the applicable grid code and the system operator's instructions, the battery maker's operating limits and the site's fire and safety requirements; qualified personnel decide dispatch.";
@@ -84,22 +86,33 @@ export function referenceCommand(inputs: AlignedInputs, args: ParsedArgs) {
   const to = index(inputs, args, 'end');
   const soc = initialSoc(args);
   const choice = terminal(args.options.get('terminal') ?? 'free');
+  const power = initialPower(args);
   const result = solveReferencePath(inputs, {
     ...(from !== undefined ? { from } : {}),
     ...(to !== undefined ? { to } : {}),
     ...(soc !== undefined ? { initialSocPct: soc } : {}),
+    ...(power !== undefined ? { initialNetPowerKw: power } : {}),
     terminal: choice,
     method: method(args),
   });
   if (!result.ok) throw new CliInputError(`${result.issue.field}: ${result.issue.message}`);
-  const { solution, from: start } = result.path;
+  const { solution, from: start, to: end, terminalRule } = result.path;
   if (solution.status !== 'optimal') throw new CliInputError(solution.message ?? `the reference path is ${solution.status}`);
   return {
     method: solution.method,
     terminal: terminalLabel(choice),
     ...summarizePath(inputs, solution, start),
     simultaneousSteps: solution.simultaneousSteps ?? [],
-    warnings: settingWarnings(inputs.battery),
+    warnings: [...settingWarnings(inputs.battery), ...limitWarnings(inputs)],
+    ...limitOutput(inputs, {
+      from: start,
+      to: end,
+      windowEnd: end,
+      terminalRule,
+      solution,
+      method: method(args),
+      ...(power !== undefined ? { initialNetPowerKw: power } : {}),
+    }),
   };
 }
 
@@ -110,7 +123,9 @@ export function planCommand(inputs: AlignedInputs, args: ParsedArgs) {
   const band = numberOption(args, 'band', (v) => v > 0 && v < 100, 'a band in % of usable energy, e.g. 5');
   const soc = initialSoc(args);
   const days = steadyDays(args);
+  const power = initialPower(args);
   const result = solvePlan(inputs, {
+    ...(power !== undefined ? { initialNetPowerKw: power } : {}),
     startMs: parseInstant(required(args, 'start'), tz, '--start'),
     endMs: parseInstant(required(args, 'end'), tz, '--end'),
     horizonHours: horizon!,
@@ -134,8 +149,17 @@ export function planCommand(inputs: AlignedInputs, args: ParsedArgs) {
     turnpike: { ...figures, value: valueFigures },
     decisionHorizonHours: plan.dpInsights?.decisionHorizonHours ?? null,
     valueCurves: plan.dpInsights?.valueCurves ?? [],
-    warnings: plan.warnings,
+    warnings: [...plan.warnings, ...limitWarnings(inputs)],
     caution: CAUTION,
+    ...limitOutput(inputs, {
+      from: plan.from,
+      to: plan.to,
+      windowEnd: plan.windowEnd,
+      terminalRule: plan.terminalRule,
+      solution: plan.solution,
+      method: method(args),
+      ...(power !== undefined ? { initialNetPowerKw: power } : {}),
+    }),
   };
 }
 

@@ -11,6 +11,7 @@ import type { DispatchProblem, DispatchSolution } from '../types';
 import type { LpResult } from '../lp/lp-model';
 import type { DispatchModel } from '../model/build-dispatch-model';
 import { scheduleCost } from './schedule-cost';
+import { readLimits } from '../limits/read-limits';
 
 const clip = (v: number, lo: number, hi: number) => (v < lo ? lo : v > hi ? hi : v);
 
@@ -98,12 +99,14 @@ export function toDispatchSolution(
     degradationCostPerMwh: problem.battery.degradationCostPerMwh,
     demandChargePerKw: problem.site.demandChargePerKw,
   };
+  const limits = readLimits(problem, model, finalX, series);
   return {
     status: 'optimal',
     method: 'lp',
     objective: stage1.objective,
-    cost: scheduleCost(costInputs, series),
+    cost: scheduleCost(costInputs, series) - (limits.reserveRevenue ?? 0),
     ...series,
+    ...limits,
     storedEnergyValue: storedEnergyValues(model, stage1.rowDual),
     peakImportKw: peak,
     simultaneousSteps: simultaneousSteps(problem, series),

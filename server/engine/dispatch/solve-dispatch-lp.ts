@@ -11,6 +11,7 @@ import { rotateBasis } from '../model/rotate-basis';
 import { buildTieBreakModel, mayHaveTies, tieBreakWarmBasis } from '../model/tie-break';
 import { stepLabel, validateProblem } from '../model/validate-problem';
 import { toDispatchSolution } from './read-solution';
+import { limitInfeasibleHint } from '../limits/limit-words';
 
 export interface LpDispatchOptions extends SolveOptions {
   /** Break ties between optimal schedules by the documented rule (default true). */
@@ -76,7 +77,10 @@ export function solveDispatchLp(problem: DispatchProblem, options: LpDispatchOpt
   // The basis (HiGHS) also makes the tie test exact, so it is always asked for.
   const stage1 = solve(model.lp, { ...options, keepBasis: true, ...(warmBasis ? { warmBasis } : {}) });
   if (stage1.status !== 'optimal') {
-    const message = stage1.status === 'infeasible' ? infeasibleMessage(problem) : (stage1.message ?? stage1.status);
+    const message =
+      stage1.status === 'infeasible'
+        ? infeasibleMessage(problem) + limitInfeasibleHint(problem)
+        : (stage1.message ?? stage1.status);
     return { solution: failedSolution(stage1.status, message) };
   }
   let finalX = stage1.x;

@@ -22,6 +22,7 @@ export function solveDispatch(problem: DispatchProblem, options: DispatchOptions
   // One validation for both paths, so a bad input reads the same whichever would have solved it.
   const issue = options.validated ? null : validateProblem(problem);
   if (issue) return failedSolution('error', issue.message, method === 'dp' ? 'dp' : 'lp');
+  let reason: string | undefined;
   if (method !== 'lp') {
     const check = checkDp(problem);
     if (check.ok) {
@@ -30,7 +31,10 @@ export function solveDispatch(problem: DispatchProblem, options: DispatchOptions
       // The DP declined (bad input): the LP path's validation words the message.
     } else if (method === 'dp') {
       return failedSolution('error', `the dynamic-programming path cannot solve this problem: ${check.reason}`, 'dp');
+    } else {
+      reason = check.reason;
     }
   }
-  return solveDispatchLp(problem, { ...options, validated: true }).solution;
+  const solution = solveDispatchLp(problem, { ...options, validated: true }).solution;
+  return reason !== undefined && solution.status === 'optimal' ? { ...solution, methodReason: reason } : solution;
 }

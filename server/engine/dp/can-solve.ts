@@ -1,4 +1,5 @@
 import type { DispatchProblem } from '../types';
+import { lpOnlyReason } from '../limits/limit-features';
 
 export type DpEligibility = { ok: true } | { ok: false; reason: string };
 
@@ -13,6 +14,9 @@ export type DpEligibility = { ok: true } | { ok: false; reason: string };
  * negative prices, every terminal rule) is exact.
  */
 export function canSolveWithDp(problem: DispatchProblem): DpEligibility {
+  // Reserves, a ramp rate and a switching cost (DESIGN section 3.3) are not modelled here; availability is.
+  const limits = lpOnlyReason(problem);
+  if (limits !== null) return { ok: false, reason: limits };
   if (problem.freeInitialEnergy === true) {
     return { ok: false, reason: 'a free initial SoC (the steady cycle) makes the start a decision; the LP path solves it' };
   }

@@ -44,8 +44,11 @@ export function buildStageTable(problem: DispatchProblem): StageTable {
   const importLimit = problem.site.importLimitKw ?? Infinity;
   const exportLimit = problem.site.exportLimitKw ?? Infinity;
   const { off, netLoadKw } = x;
+  const available = problem.availability;
   for (let t = 0; t < n; t++) {
     off[t] = x.at;
+    // Availability derates both power ratings for the step (DESIGN section 3.3); tolerances keep the ratings.
+    if (available) x.setPowers(b.powerChargeKw * available[t]!, b.powerDischargeKw * available[t]!);
     const net = (problem.loadKw[t] ?? 0) - (problem.generationKw[t] ?? 0);
     netLoadKw[t] = net;
     x.net = net;
@@ -101,8 +104,8 @@ class StageBuilder {
 
   constructor(
     n: number,
-    private readonly pc: number,
-    private readonly pd: number,
+    private pc: number,
+    private pd: number,
     private readonly etaC: number,
     private readonly etaD: number,
     private readonly dt: number,
@@ -120,6 +123,12 @@ class StageBuilder {
     this.kappa = 1 / (etaC * etaD) - 1;
     this.uScale = dt * (pc * etaC + pd / etaD) + 1e-300;
     this.tolP = 1e-12 * (pc + pd + 1);
+  }
+
+  /** Power limits of the next step (kW), e.g. derated by availability. */
+  setPowers(pc: number, pd: number): void {
+    this.pc = pc;
+    this.pd = pd;
   }
 
   /** Money paid in the step (currency) for charge c and discharge d (kW). */

@@ -9,6 +9,7 @@ import type { BatteryParams, DispatchProblem, SiteParams } from '../types';
 import type { InputIssue } from '../model/validate-battery';
 import { validateBattery, validateSite } from '../model/validate-battery';
 import { localClock, type LocalClock } from '../time/zone-offsets';
+import { limitProfiles, sampleLimits } from './limit-inputs';
 
 export interface ProfileSeries {
   /** UTC epoch ms of the start of the first interval. */
@@ -27,12 +28,30 @@ export interface DispatchInputs {
   readonly load?: ProfileSeries;
   /** On-site generation, kW average per interval. */
   readonly generation?: ProfileSeries;
+  /** Share (0–1) of the battery's power ratings usable per interval (DESIGN section 3.3). */
+  readonly availability?: ProfileSeries;
+  /** Availability prices of upward and downward reserve, currency/MW/h. */
+  readonly reserveUpPrices?: ProfileSeries;
+  readonly reserveDownPrices?: ProfileSeries;
+  /** Delivery duration the energy headroom of held reserve must cover, hours. */
+  readonly reserveHours?: number;
 }
 
 /** The profiles on one grid: the series of a DispatchProblem for the whole period, plus its local clock. */
 export interface AlignedInputs extends Pick<
   DispatchProblem,
-  'battery' | 'site' | 'stepHours' | 'timesMs' | 'priceImport' | 'priceExport' | 'loadKw' | 'generationKw'
+  | 'battery'
+  | 'site'
+  | 'stepHours'
+  | 'timesMs'
+  | 'priceImport'
+  | 'priceExport'
+  | 'loadKw'
+  | 'generationKw'
+  | 'availability'
+  | 'reserveUpPrice'
+  | 'reserveDownPrice'
+  | 'reserveHours'
 > {
   readonly stepMinutes: number;
   readonly clock: LocalClock;
@@ -62,14 +81,16 @@ export function alignInputs(inputs: DispatchInputs): Aligned {
     ['generation', inputs.generation],
   ];
   const present = named.filter((entry): entry is [string, ProfileSeries] => entry[1] !== undefined);
-  for (const [name, p] of present) {
+  // Limit profiles share the grid's step but do not shorten the period (see limit-inputs.ts).
+  const gridded = [...present, ...limitProfiles(inputs)];
+  for (const [name, p] of gridded) {
     if (!(p.stepMinutes > 0) || !Number.isInteger(p.stepMinutes) || p.values.length === 0) {
       return { ok: false, issue: { field: name, message: `the ${name} profile is empty or has no whole-minute step` } };
     }
   }
-  const stepMinutes = Math.min(...present.map(([, p]) => p.stepMinutes));
+  const stepMinutes = Math.min(...gridded.map(([, p]) => p.stepMinutes));
   const stepMs = stepMinutes * MINUTE_MS;
-  for (const [name, p] of present) {
+  for (const [name, p] of gridded) {
     if (p.stepMinutes % stepMinutes !== 0 || (p.startMs - inputs.prices.startMs) % stepMs !== 0) {
       return {
         ok: false,
@@ -109,6 +130,7 @@ export function alignInputs(inputs: DispatchInputs): Aligned {
       generationKw: inputs.generation ? sample(inputs.generation, timesMs) : zeros(),
       clock: localClock(inputs.site.timezone, timesMs),
       notes,
+      ...sampleLimits(inputs, timesMs),
     },
   };
 }

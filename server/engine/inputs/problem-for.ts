@@ -4,11 +4,13 @@
  */
 import type { DispatchProblem, TerminalRule } from '../types';
 import type { AlignedInputs } from './align-inputs';
+import { sliceLimits } from './limit-inputs';
 
 export interface ProblemExtras {
   readonly freeInitialEnergy?: boolean;
   readonly peakFloorKw?: number;
   readonly dischargedFirstDayKwh?: number;
+  readonly initialNetPowerKw?: number;
 }
 
 /** The dispatch problem over steps [from, to) of the aligned inputs. */
@@ -32,6 +34,7 @@ export function problemFor(
     initialEnergyKwh,
     terminal,
     dayIndex: Array.from(inputs.clock.localDay.subarray(from, to)),
+    ...sliceLimits(inputs, from, to),
     ...extras,
   };
 }

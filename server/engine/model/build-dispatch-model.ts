@@ -14,6 +14,7 @@ import type { BatteryParams, DispatchProblem } from '../types';
 import { CsrWriter } from '../lp/csr-writer';
 import type { LpModel } from '../lp/lp-model';
 import { dispatchLayout, sameMatrix, type DispatchLayout } from './dispatch-layout';
+import { LimitModelWriter, limitStepNames } from '../limits/limit-model';
 
 export interface DispatchModel {
   readonly lp: LpModel;
@@ -46,8 +47,9 @@ function stepNames(layout: DispatchLayout): { cols: string[]; rows: string[] } {
   const cols: string[] = [];
   const rows: string[] = [];
   for (let t = 0; t < layout.steps; t++) {
-    cols.push(`c${t}`, `d${t}`, ...(layout.hasGrid ? [`m${t}`, `x${t}`] : []), `e${t + 1}`);
-    rows.push(`soc${t}`, ...(layout.hasGrid ? [`bal${t}`] : []), ...(layout.peakRow >= 0 ? [`pk${t}`] : []));
+    const limits = limitStepNames(layout.limits, t);
+    cols.push(`c${t}`, `d${t}`, ...(layout.hasGrid ? [`m${t}`, `x${t}`] : []), ...limits.cols, `e${t + 1}`);
+    rows.push(`soc${t}`, ...(layout.hasGrid ? [`bal${t}`] : []), ...(layout.peakRow >= 0 ? [`pk${t}`] : []), ...limits.rows);
   }
   if (layout.initialEnergyCol >= 0) cols.push('e0');
   if (layout.peakCol >= 0) cols.push('peak');
@@ -66,7 +68,14 @@ export function buildDispatchModel(problem: DispatchProblem, options: BuildOptio
   const chargeGain = battery.efficiencyCharge * dt;
   const dischargeLoss = dt / battery.efficiencyDischarge;
   const degradation = (battery.degradationCostPerMwh * dt) / 1000;
-  const nz = n * 4 + (layout.hasGrid ? n * 4 : 0) + (layout.peakCol >= 0 ? n * 2 : 0) + (layout.capDays.length ? n : 0) + 3;
+  const limits = LimitModelWriter.for(problem, layout, eMin, eMax);
+  const nz =
+    n * 4 +
+    (layout.hasGrid ? n * 4 : 0) +
+    (layout.peakCol >= 0 ? n * 2 : 0) +
+    (layout.capDays.length ? n : 0) +
+    (limits ? LimitModelWriter.nonZeros(layout) : 0) +
+    3;
   const previous = options.previous;
   const shared = previous && sameMatrix(previous.problem, previous.layout, problem, layout) ? previous.lp : undefined;
   const w = new CsrWriter(layout.numCols, layout.numRows, nz, shared);
@@ -79,17 +88,22 @@ export function buildDispatchModel(problem: DispatchProblem, options: BuildOptio
     const base = t * k;
     const price = (problem.priceImport[t]! * dt) / 1000;
     const last = t === n - 1;
+    // Availability scales both power ratings (DESIGN section 3.3).
+    const available = problem.availability?.[t] ?? 1;
+    const chargeMax = battery.powerChargeKw * available;
+    const dischargeMax = battery.powerDischargeKw * available;
     if (layout.hasGrid) {
-      w.setColumn(base, 0, 0, battery.powerChargeKw);
-      w.setColumn(base + 1, degradation, 0, battery.powerDischargeKw);
+      w.setColumn(base, 0, 0, chargeMax);
+      w.setColumn(base + 1, degradation, 0, dischargeMax);
       w.setColumn(base + 2, price, 0, site.importLimitKw ?? Infinity);
       w.setColumn(base + 3, (-problem.priceExport[t]! * dt) / 1000, 0, site.exportLimitKw ?? Infinity);
     } else {
-      w.setColumn(base, price, 0, battery.powerChargeKw);
-      w.setColumn(base + 1, degradation - price, 0, battery.powerDischargeKw);
+      w.setColumn(base, price, 0, chargeMax);
+      w.setColumn(base + 1, degradation - price, 0, dischargeMax);
       offset += price * (problem.loadKw[t]! - problem.generationKw[t]!);
     }
     w.setColumn(base + layout.energy, last ? -terminalValue : 0, last ? lastMin : eMin, last ? lastMax : eMax);
+    limits?.setColumns(w, t);
 
     // soc_t, entries in column order
     const rhs = t === 0 && !problem.freeInitialEnergy ? a * e0 : 0;
@@ -112,6 +126,7 @@ export function buildDispatchModel(problem: DispatchProblem, options: BuildOptio
       w.add(base + 2, -1);
       w.add(layout.peakCol, 1);
     }
+    limits?.writeRows(w, t, e0);
   }
   if (layout.initialEnergyCol >= 0) w.setColumn(layout.initialEnergyCol, 0, eMin, eMax);
   if (layout.peakCol >= 0) w.setColumn(layout.peakCol, site.demandChargePerKw!, problem.peakFloorKw ?? 0, Infinity);

@@ -4,6 +4,7 @@
  * can be read back without names and a basis can be shifted by whole steps.
  */
 import type { DispatchProblem } from '../types';
+import { limitLayout, sameLimitLayout, type LimitLayout } from '../limits/limit-layout';
 
 export interface DispatchLayout {
   readonly steps: number;
@@ -22,6 +23,8 @@ export interface DispatchLayout {
   readonly socRow: number;
   readonly balanceRow: number;
   readonly peakRow: number;
+  /** Columns and rows of the operating limits (reserves, ramp, switching cost); -1 offsets when absent. */
+  readonly limits: LimitLayout;
   /** Model-wide columns (-1 when absent). */
   readonly initialEnergyCol: number;
   readonly peakCol: number;
@@ -52,8 +55,10 @@ export function dispatchLayout(problem: DispatchProblem): DispatchLayout {
   const steps = problem.priceImport.length;
   const hasGrid = !gridFoldable(problem);
   const hasPeak = problem.site.demandChargePerKw !== null;
-  const colsPerStep = hasGrid ? 5 : 3;
-  const rowsPerStep = 1 + (hasGrid ? 1 : 0) + (hasPeak ? 1 : 0);
+  const baseRows = 1 + (hasGrid ? 1 : 0) + (hasPeak ? 1 : 0);
+  const limits = limitLayout(problem, hasGrid ? 4 : 2, baseRows, hasGrid);
+  const colsPerStep = (hasGrid ? 5 : 3) + limits.cols;
+  const rowsPerStep = baseRows + limits.rows;
   let numCols = steps * colsPerStep;
   const initialEnergyCol = problem.freeInitialEnergy ? numCols++ : -1;
   const peakCol = hasPeak ? numCols++ : -1;
@@ -74,6 +79,7 @@ export function dispatchLayout(problem: DispatchProblem): DispatchLayout {
     socRow: 0,
     balanceRow: hasGrid ? 1 : -1,
     peakRow: hasPeak ? (hasGrid ? 2 : 1) : -1,
+    limits,
     initialEnergyCol,
     peakCol,
     capRowStart,
@@ -105,6 +111,8 @@ export function sameMatrix(a: DispatchProblem, la: DispatchLayout, b: DispatchPr
   for (const field of SHAPE_FIELDS) if (la[field] !== lb[field]) return false;
   const [ba, bb] = [a.battery, b.battery];
   if (a.stepHours !== b.stepHours) return false;
+  if (!sameLimitLayout(la.limits, lb.limits)) return false;
+  if (la.limits.reserveUp >= 0 && a.reserveHours !== b.reserveHours) return false;
   if (
     ba !== bb &&
     (ba.efficiencyCharge !== bb.efficiencyCharge ||

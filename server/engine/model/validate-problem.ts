@@ -7,6 +7,7 @@ import type { DispatchProblem } from '../types';
 import { clockLabel, localTimeLabel } from '../time/zone-offsets';
 import { energyBounds } from './build-dispatch-model';
 import { validateBattery, validateSite, type InputIssue } from './validate-battery';
+import { validateLimits } from '../limits/validate-limits';
 
 export type { InputIssue };
 
@@ -117,6 +118,11 @@ function validateEnergy(p: DispatchProblem): InputIssue | null {
 
 export function validateProblem(p: DispatchProblem): InputIssue | null {
   return (
-    validateBattery(p.battery) ?? validateSite(p.site) ?? validateSeries(p) ?? validateEnergy(p) ?? validateStepFeasibility(p)
+    validateBattery(p.battery) ??
+    validateSite(p.site) ??
+    validateSeries(p) ??
+    validateEnergy(p) ??
+    validateStepFeasibility(p) ??
+    validateLimits(p, (t) => stepLabel(p, t))
   );
 }

@@ -27,6 +27,8 @@ export interface PlanRequest {
   readonly terminal: TerminalChoice;
   /** Initial SoC in % of nameplate energy; default the battery's socInitialPct. */
   readonly initialSocPct?: number;
+  /** Net power (discharge − charge, kW) before the delivery start, from which a ramp rate and switching cost apply. */
+  readonly initialNetPowerKw?: number;
   /** SoC band as a fraction of usable energy (default 0.05). */
   readonly bandFraction?: number;
   readonly method?: DispatchOptions['method'];
@@ -101,7 +103,8 @@ export function solvePlan(inputs: AlignedInputs, request: PlanRequest): PlanResu
   const options = { method: request.method ?? 'auto' } as const;
   const solveTo = (to: number) => {
     const rule = terminalRuleFor(request.terminal, inputs, to, steady);
-    return { rule, solution: solveDispatch(problemFor(inputs, from, to, e0, rule), options) };
+    const extras = request.initialNetPowerKw !== undefined ? { initialNetPowerKw: request.initialNetPowerKw } : {};
+    return { rule, solution: solveDispatch(problemFor(inputs, from, to, e0, rule, extras), options) };
   };
   const main = solveTo(windowEnd);
   if (main.solution.status !== 'optimal')

@@ -6,6 +6,7 @@ import type { DispatchSolution } from '../types';
 import type { AlignedInputs } from '../inputs/align-inputs';
 import { usableEnergyKwh } from '../inputs/problem-for';
 import { scheduleCost } from '../dispatch/schedule-cost';
+import { limitSummary, reserveAt } from '../limits/limit-summary';
 
 export interface SeriesPoint {
   /** Start of the interval, ISO 8601 UTC. */
@@ -19,16 +20,23 @@ export interface SeriesPoint {
   readonly gridExportKw: number;
   /** Value of stored energy at the end of the interval, currency/MWh. */
   readonly storedEnergyValue: number;
+  /** Upward and downward reserve held in the interval, kW (paths with reserve prices only). */
+  readonly reserveUpKw?: number;
+  readonly reserveDownKw?: number;
 }
 
 export interface PathSummary {
-  /** Money paid incl. degradation and demand charge, excl. terminal value (negative = earnings). */
+  /** Money paid incl. degradation and demand charge, minus reserve revenue, excl. terminal value (negative = earnings). */
   readonly cost: number;
   readonly chargedKwh: number;
   readonly dischargedKwh: number;
   readonly equivalentCycles: number;
   readonly steps: number;
   readonly series: readonly SeriesPoint[];
+  /** Reserve availability payments earned, currency (paths with reserve prices only; already in `cost`). */
+  readonly reserveRevenue?: number;
+  /** Switching penalty, currency, not cash (paths with a switching cost only). */
+  readonly switchingPenalty?: number;
 }
 
 /** Summary of solution steps [from, to) (relative to the solution), whose step 0 is grid step `offset`. */
@@ -55,6 +63,7 @@ export function summarizePath(
       gridImportKw: solution.gridImportKw[t]!,
       gridExportKw: solution.gridExportKw[t]!,
       storedEnergyValue: solution.storedEnergyValue[t]!,
+      ...reserveAt(solution, t),
     });
   }
   const cost = scheduleCost(
@@ -69,12 +78,14 @@ export function summarizePath(
     from,
     to,
   );
+  const limits = limitSummary(inputs, solution, offset, from, to);
   return {
-    cost,
+    cost: cost - (limits.reserveRevenue ?? 0),
     chargedKwh: charged,
     dischargedKwh: discharged,
     equivalentCycles: discharged / usableEnergyKwh(inputs.battery),
     steps: to - from,
     series,
+    ...limits,
   };
 }

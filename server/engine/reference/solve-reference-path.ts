@@ -17,6 +17,8 @@ export interface PathRequest {
   readonly to?: number;
   /** Initial SoC in % of nameplate energy; default the battery's socInitialPct. */
   readonly initialSocPct?: number;
+  /** Net power (discharge − charge, kW) before the start, from which a ramp rate and switching cost apply. */
+  readonly initialNetPowerKw?: number;
   readonly terminal?: TerminalChoice;
   /** Steady cycle for steady-value (solved from all the data when absent). */
   readonly steady?: SteadyCycle;
@@ -65,6 +67,7 @@ export function solveReferencePath(inputs: AlignedInputs, request: PathRequest =
   if (!steady.ok) return steady;
   const terminalRule = terminalRuleFor(choice, inputs, to, steady.steady);
   const e0 = socPctToKwh(inputs, request.initialSocPct ?? inputs.battery.socInitialPct);
-  const solution = solveDispatch(problemFor(inputs, from, to, e0, terminalRule), { method: request.method ?? 'auto' });
+  const extras = request.initialNetPowerKw !== undefined ? { initialNetPowerKw: request.initialNetPowerKw } : {};
+  const solution = solveDispatch(problemFor(inputs, from, to, e0, terminalRule, extras), { method: request.method ?? 'auto' });
   return { ok: true, path: { from, to, terminalRule, solution, ...(steady.steady ? { steady: steady.steady } : {}) } };
 }

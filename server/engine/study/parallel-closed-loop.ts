@@ -9,7 +9,8 @@
  * on the state (and ties are broken by the documented rule). If they never meet
  * inside the overlap, the stretch is recomputed from the exact state, so the
  * result never rests on the guess. Only runs whose whole state is the SoC qualify
- * (no demand charge, no throughput cap).
+ * (no demand charge, no throughput cap, no ramp rate or switching cost) and that
+ * earn nothing beside the schedule (no reserves).
  */
 import type { AlignedInputs } from '../inputs/align-inputs';
 import { usableEnergyKwh } from '../inputs/problem-for';
@@ -17,12 +18,18 @@ import { scheduleCost } from '../dispatch/schedule-cost';
 import type { ClosedLoopRun, PlanLog } from './run-closed-loop';
 import { runJob, type StudyJob, type StudyJobContext } from './study-job';
 import { runJobsOnWorkers } from './worker-pool';
+import { stateIsSoc } from '../limits/closed-loop-limits';
 
 /** States closer than this (kWh per kWh of nameplate energy) count as met. */
 const MEET_TOLERANCE = 1e-9;
 
 export function canRunInParallel(inputs: AlignedInputs, steps: number, overlap: number): boolean {
-  return inputs.site.demandChargePerKw === null && inputs.battery.maxCyclesPerDay === null && steps >= 4 * overlap;
+  return (
+    inputs.site.demandChargePerKw === null &&
+    inputs.battery.maxCyclesPerDay === null &&
+    stateIsSoc(inputs) &&
+    steps >= 4 * overlap
+  );
 }
 
 interface Stitched {

@@ -21,6 +21,7 @@ import type { SteadyCycle } from '../steady/solve-steady-cycle';
 import { terminalRuleFor, type TerminalChoice } from '../terminal/terminal-choice';
 import { arcFigures, DEFAULT_BAND_FRACTION } from '../turnpike/turnpike-figures';
 import { SlidingArcFigures } from '../turnpike/sliding-arc-figures';
+import { carriedLimits } from '../limits/closed-loop-limits';
 
 export interface ClosedLoopRequest {
   readonly from: number;
@@ -124,6 +125,8 @@ export function runClosedLoop(inputs: AlignedInputs, req: ClosedLoopRequest): Cl
     dpSolves = 0;
   const plans: PlanLog = { start: [], share: [], leaving: [], intoCommitted: [] };
   const stopAt = req.stopAt ?? req.to;
+  // Ramp and switching cost continue from the power applied last; reserve revenue is cash of the applied steps.
+  const carried = carriedLimits(whole);
   try {
     for (let s = req.from; s < stopAt; s += req.replanSteps) {
       const end = Math.min(req.to, s + req.horizonSteps);
@@ -140,6 +143,7 @@ export function runClosedLoop(inputs: AlignedInputs, req: ClosedLoopRequest): Cl
         {
           peakFloorKw: peak,
           dischargedFirstDayKwh: dischargedToday,
+          ...carried.extras(applied),
         },
       );
       let plan: DispatchSolution | null = req.method !== 'lp' && checkDp(problem).ok ? solveWithDp(problem) : null;
@@ -165,6 +169,7 @@ export function runClosedLoop(inputs: AlignedInputs, req: ClosedLoopRequest): Cl
         );
       }
       const steps = Math.min(req.replanSteps, end - s, stopAt - s);
+      carried.apply(problem, plan, steps);
       for (let k = 0; k < steps; k++) {
         applied.chargeKw.push(plan.chargeKw[k]!);
         applied.dischargeKw.push(plan.dischargeKw[k]!);
@@ -189,10 +194,11 @@ export function runClosedLoop(inputs: AlignedInputs, req: ClosedLoopRequest): Cl
   } finally {
     session.dispose();
   }
-  const cost = scheduleCost(
-    { ...whole, degradationCostPerMwh: inputs.battery.degradationCostPerMwh, demandChargePerKw: inputs.site.demandChargePerKw },
-    applied,
-  );
+  const cost =
+    scheduleCost(
+      { ...whole, degradationCostPerMwh: inputs.battery.degradationCostPerMwh, demandChargePerKw: inputs.site.demandChargePerKw },
+      applied,
+    ) - carried.reserveRevenue;
   const discharged = applied.dischargeKw.reduce((sum, d) => sum + d * inputs.stepHours, 0);
   return {
     status: 'optimal',
