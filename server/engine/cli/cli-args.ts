@@ -28,7 +28,7 @@ const COMMON_FLAGS = ['interval-ending', 'fill-gaps'];
 
 export const COMMAND_OPTIONS: Readonly<Record<string, readonly string[]>> = {
   steady: [...COMMON, 'days'],
-  reference: [...COMMON, 'start', 'end', 'terminal', 'initial-soc'],
+  reference: [...COMMON, 'start', 'end', 'terminal', 'initial-soc', 'days'],
   plan: [...COMMON, 'start', 'end', 'horizon', 'terminal', 'initial-soc', 'band', 'days'],
   study: [...COMMON, 'start', 'end', 'horizons', 'replan', 'terminal', 'initial-soc', 'gap-target', 'band', 'workers', 'days'],
 };
@@ -36,7 +36,7 @@ export const COMMAND_OPTIONS: Readonly<Record<string, readonly string[]>> = {
 export const USAGE = `usage: npm run --silent cli -- <command> [options]
 commands:
   steady    --prices F --battery F [--load F] [--site F] [--days all|weekday|weekend]
-  reference --prices F --battery F [--load F] [--site F] [--start ISO] [--end ISO] [--terminal free|cyclic|steady-value|target:PCT] [--initial-soc PCT]
+  reference --prices F --battery F [--load F] [--site F] [--start ISO] [--end ISO] [--terminal free|cyclic|steady-value|target:PCT] [--initial-soc PCT] [--days all|weekday|weekend]
   plan      --prices F --battery F [--load F] [--site F] --start ISO --end ISO --horizon HOURS --terminal RULE [--initial-soc PCT] [--days all|weekday|weekend]
   study     --prices F --battery F [--load F] [--site F] [--start ISO] [--end ISO] --horizons 6,12,24,48 --replan HOURS --terminal free,steady-value [--days all|weekday|weekend]
 common: [--generation F] [--export-prices F] [--price-unit currency/MWh|currency/kWh] [--load-unit kW|MW|kWh|MWh]

@@ -20,6 +20,8 @@ const BATTERY_KEYS = [
   'maxCyclesPerDay',
 ] as const;
 const NULLABLE_BATTERY = new Set<string>(['maxCyclesPerDay']);
+/** Keys a battery file may leave out (null or absent = not known). */
+const OPTIONAL_BATTERY = ['maxRatedCyclesPerDay'] as const;
 const SITE_LIMITS = ['importLimitKw', 'exportLimitKw', 'demandChargePerKw'] as const;
 
 export function readJsonFile(path: string, what: string): Record<string, unknown> {
@@ -57,10 +59,11 @@ export function unknownKeys(obj: Record<string, unknown>, known: readonly string
 
 export function readBattery(path: string, warn: (message: string) => void): BatteryParams {
   const obj = readJsonFile(path, 'battery');
-  const extra = unknownKeys(obj, BATTERY_KEYS);
+  const extra = unknownKeys(obj, [...BATTERY_KEYS, ...OPTIONAL_BATTERY]);
   if (extra.length > 0) warn(`ignoring unknown key(s) in ${path}: ${extra.join(', ')}`);
   const entries = BATTERY_KEYS.map((key) => [key, numberKey(obj, key, NULLABLE_BATTERY.has(key), path)]);
-  return Object.fromEntries(entries);
+  const optional = OPTIONAL_BATTERY.filter((key) => key in obj).map((key) => [key, numberKey(obj, key, true, path)]);
+  return Object.fromEntries([...entries, ...optional]);
 }
 
 export const DEFAULT_SITE: SiteParams = { timezone: 'UTC', importLimitKw: null, exportLimitKw: null, demandChargePerKw: null };
@@ -71,13 +74,19 @@ export function readSite(path: string | undefined, warn: (message: string) => vo
     return DEFAULT_SITE;
   }
   const obj = readJsonFile(path, 'site');
-  const extra = unknownKeys(obj, ['timezone', ...SITE_LIMITS]);
+  const extra = unknownKeys(obj, ['timezone', 'currency', ...SITE_LIMITS]);
   if (extra.length > 0) warn(`ignoring unknown key(s) in ${path}: ${extra.join(', ')}`);
   if (typeof obj.timezone !== 'string') throw new CliInputError(`${path} needs "timezone", an IANA name such as "Europe/Berlin"`);
+  const currency = obj.currency;
+  if (currency !== undefined && (typeof currency !== 'string' || !/^[A-Z]{3}$/.test(currency)))
+    throw new CliInputError(
+      `"currency" in ${path} must be a three-letter ISO 4217 code such as "EUR" (got ${JSON.stringify(currency)}); leave it out if not known`,
+    );
   return {
     timezone: obj.timezone,
     importLimitKw: numberKey(obj, 'importLimitKw', true, path),
     exportLimitKw: numberKey(obj, 'exportLimitKw', true, path),
     demandChargePerKw: numberKey(obj, 'demandChargePerKw', true, path),
+    ...(currency !== undefined ? { currency } : {}),
   };
 }

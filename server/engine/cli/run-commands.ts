@@ -12,6 +12,8 @@ import { solvePlan } from '../plan/solve-plan';
 import { settingWarnings } from '../plan/plan-flags';
 import { runHorizonStudy } from '../study/run-horizon-study';
 import { parseTerminal, terminalLabel, type TerminalChoice } from '../terminal/terminal-choice';
+import { steadyCyclingCheck } from '../plan/cycling-check';
+import type { NetFigures } from '../value/net-figures';
 import { CliInputError, listOption, numberOption, required, type ParsedArgs } from './cli-args';
 import { parseInstant } from './read-inputs';
 
@@ -52,12 +54,24 @@ function steadyDays(args: ParsedArgs): DaySelection {
   return days;
 }
 
+/** The net-figure keys of a plan or path (DESIGN section 3.1), beside its cash `cost`. */
+function netKeys(net: NetFigures) {
+  return {
+    storedEnergyChange: net.storedEnergyChange,
+    netCost: net.netCost,
+    noBatteryCost: net.noBatteryCost,
+    batteryValue: net.batteryValue,
+    storedEnergyValuation: net.storedEnergyValuation,
+  };
+}
+
 export function steadyCommand(inputs: AlignedInputs, args: ParsedArgs) {
   const days = steadyDays(args);
   const result = solveSteadyCycle(inputs, { days });
   if (!result.ok) throw new CliInputError(`${result.issue.field}: ${result.issue.message}`);
   const c = result.cycle;
   if (c.status !== 'optimal') throw new CliInputError(`the steady cycle could not be solved: ${c.message}`);
+  const cycling = steadyCyclingCheck(inputs.battery, c.equivalentCyclesPerDay);
   return {
     method: 'lp',
     cost: c.costPerDay,
@@ -67,14 +81,16 @@ export function steadyCommand(inputs: AlignedInputs, args: ParsedArgs) {
     days: c.days,
     dstDays: c.dstDays,
     notes: c.notes,
-    warnings: settingWarnings(inputs.battery),
-    slots: c.slots.map(({ time, chargeKw, dischargeKw, socKwh, storedEnergyValue, priceImport }) => ({
+    warnings: [...settingWarnings(inputs.battery), ...(cycling.message ? [cycling.message] : [])],
+    cycling,
+    slots: c.slots.map(({ time, chargeKw, dischargeKw, socKwh, storedEnergyValue, storedEnergyValueRange, priceImport }) => ({
       time,
       priceImport,
       chargeKw,
       dischargeKw,
       socKwh,
       storedEnergyValue,
+      storedEnergyValueRange,
     })),
   };
 }
@@ -89,15 +105,18 @@ export function referenceCommand(inputs: AlignedInputs, args: ParsedArgs) {
     ...(to !== undefined ? { to } : {}),
     ...(soc !== undefined ? { initialSocPct: soc } : {}),
     terminal: choice,
+    steadyDays: steadyDays(args),
     method: method(args),
   });
   if (!result.ok) throw new CliInputError(`${result.issue.field}: ${result.issue.message}`);
-  const { solution, from: start } = result.path;
-  if (solution.status !== 'optimal') throw new CliInputError(solution.message ?? `the reference path is ${solution.status}`);
+  const { solution, from: start, netFigures } = result.path;
+  if (solution.status !== 'optimal' || !netFigures)
+    throw new CliInputError(solution.message ?? `the reference path is ${solution.status}`);
   return {
     method: solution.method,
     terminal: terminalLabel(choice),
     ...summarizePath(inputs, solution, start),
+    ...netKeys(netFigures),
     simultaneousSteps: solution.simultaneousSteps ?? [],
     warnings: settingWarnings(inputs.battery),
   };
@@ -128,6 +147,8 @@ export function planCommand(inputs: AlignedInputs, args: ParsedArgs) {
   return {
     method: plan.solution.method,
     ...summarizePath(inputs, plan.solution, plan.from, 0, delivery),
+    ...netKeys(plan.netFigures),
+    cycling: plan.cycling,
     lookahead: { hours: plan.lookaheadHours, ...summarizePath(inputs, plan.solution, plan.from, delivery) },
     terminal: plan.terminalRule,
     steadyCycle: { days, daysAveraged: plan.steady.days, cost: plan.steady.costPerDay, notes: plan.steady.notes },
@@ -176,12 +197,24 @@ export async function studyCommand(inputs: AlignedInputs, args: ParsedArgs, prog
     );
   return {
     referenceCost: study.referenceCost,
+    referenceNetCost: study.referenceNetCost,
+    referenceBatteryValue: study.referenceBatteryValue,
+    noBatteryCost: study.noBatteryCost,
+    storedEnergyValuation: study.storedEnergyValuation,
     runs: study.runs.map((r) => ({
       horizonHours: r.horizonHours,
       terminal: r.terminal,
       method: r.method,
       cost: r.cost,
       gapPct: r.gapPct,
+      storedEnergyChange: r.storedEnergyChange,
+      netCost: r.netCost,
+      noBatteryCost: r.noBatteryCost,
+      batteryValue: r.batteryValue,
+      gapValue: r.gapValue,
+      valueGapPct: r.valueGapPct,
+      endSocKwh: r.endEnergyKwh,
+      cycling: r.cycling,
       equivalentCycles: r.equivalentCycles,
       solves: r.solves,
       seconds: r.seconds,
