@@ -1,16 +1,13 @@
 // Net figures of horizon studies (DESIGN section 3.1) at long horizons, and the
 // demo Sunday's plans ranked by net cost.
-import { readFileSync } from 'node:fs';
-import path from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { decodeProfileBytes, parseProfileCsv } from '../../shared/profile-csv';
 import { alignInputs, type AlignedInputs } from '../../server/engine/inputs/align-inputs';
 import { problemFor, usableEnergyKwh } from '../../server/engine/inputs/problem-for';
 import { solvePlan } from '../../server/engine/plan/solve-plan';
 import { runHorizonStudy } from '../../server/engine/study/run-horizon-study';
 import { steadyValueAt, solveSteadyCycle } from '../../server/engine/steady/solve-steady-cycle';
 import { minuteOfDayAt } from '../../server/engine/terminal/terminal-choice';
-import type { BatteryParams, SiteParams } from '../../server/engine/types';
+import { demoInputs } from './support/demo-inputs';
 import { dailyPrice, TURNPIKE_BATTERY } from './support/periodic-inputs';
 import { seeded } from './support/random-dispatch';
 import { referenceLp, solveWithGlpkDirect } from './support/reference-lp';
@@ -81,31 +78,6 @@ describe('horizon study net figures', () => {
     expect(bounds[2]!).toBeLessThan(bounds[1]!);
   });
 });
-
-const DIR = path.resolve(import.meta.dirname, '../../sample-data');
-
-function demoInputs(): AlignedInputs {
-  const json = <T>(file: string) => JSON.parse(readFileSync(path.join(DIR, file), 'utf8')) as T;
-  const site = json<SiteParams>('demo-site.json');
-  const read = (file: string, kind: 'price' | 'load' | 'generation', unit: string) => {
-    const parsed = parseProfileCsv(decodeProfileBytes(readFileSync(path.join(DIR, file))), {
-      kind,
-      unit,
-      timezone: site.timezone,
-    });
-    if (!parsed.ok) throw new Error(`${file}: ${parsed.hint}`);
-    return parsed.profile;
-  };
-  const aligned = alignInputs({
-    battery: json<BatteryParams>('demo-battery.json'),
-    site,
-    prices: read('prices-2026-hourly.csv', 'price', 'currency/MWh'),
-    load: read('site-load-2026-hourly.csv', 'load', 'kW'),
-    generation: read('pv-generation-2026-hourly.csv', 'generation', 'kW'),
-  });
-  if (!aligned.ok) throw new Error(aligned.issue.message);
-  return aligned.inputs;
-}
 
 describe('the demo Sunday, 6 December 2026', () => {
   it('ranks the 48 h and 168 h plans by net cost at least as well as the 24 h ones', () => {

@@ -14,6 +14,7 @@ import { runHorizonStudy } from '../study/run-horizon-study';
 import { parseTerminal, terminalLabel, type TerminalChoice } from '../terminal/terminal-choice';
 import { steadyCyclingCheck } from '../plan/cycling-check';
 import type { NetFigures } from '../value/net-figures';
+import { planWordsFigures, turnpikeWords } from '../turnpike/turnpike-words';
 import { CliInputError, listOption, numberOption, required, type ParsedArgs } from './cli-args';
 import { parseInstant } from './read-inputs';
 
@@ -129,11 +130,12 @@ export function planCommand(inputs: AlignedInputs, args: ParsedArgs) {
   const band = numberOption(args, 'band', (v) => v > 0 && v < 100, 'a band in % of usable energy, e.g. 5');
   const soc = initialSoc(args);
   const days = steadyDays(args);
+  const rule = terminal(required(args, 'terminal'));
   const result = solvePlan(inputs, {
     startMs: parseInstant(required(args, 'start'), tz, '--start'),
     endMs: parseInstant(required(args, 'end'), tz, '--end'),
     horizonHours: horizon!,
-    terminal: terminal(required(args, 'terminal')),
+    terminal: rule,
     ...(soc !== undefined ? { initialSocPct: soc } : {}),
     ...(band !== undefined ? { bandFraction: band / 100 } : {}),
     steadyDays: days,
@@ -152,7 +154,12 @@ export function planCommand(inputs: AlignedInputs, args: ParsedArgs) {
     lookahead: { hours: plan.lookaheadHours, ...summarizePath(inputs, plan.solution, plan.from, delivery) },
     terminal: plan.terminalRule,
     steadyCycle: { days, daysAveraged: plan.steady.days, cost: plan.steady.costPerDay, notes: plan.steady.notes },
-    turnpike: { ...figures, value: valueFigures },
+    turnpike: {
+      ...figures,
+      value: valueFigures,
+      longerLookaheadHours: plan.longerLookaheadHours,
+      summary: turnpikeWords(planWordsFigures(plan), inputs.stepMinutes, terminalLabel(rule)),
+    },
     decisionHorizonHours: plan.dpInsights?.decisionHorizonHours ?? null,
     valueCurves: plan.dpInsights?.valueCurves ?? [],
     warnings: plan.warnings,

@@ -55,6 +55,8 @@ export interface Plan {
   readonly netFigures: NetFigures;
   /** Equivalent full cycles per local day of the delivery window against the battery's rating. */
   readonly cycling: CyclingCheck;
+  /** Lookahead of the longer plan the commit window was measured against, hours; null when there was none. */
+  readonly longerLookaheadHours: number | null;
 }
 
 export type PlanResult = { ok: true; plan: Plan } | { ok: false; issue: InputIssue };
@@ -165,6 +167,7 @@ export function solvePlan(inputs: AlignedInputs, request: PlanRequest): PlanResu
       dpInsights,
       netFigures: net,
       cycling,
+      longerLookaheadHours: tp.commitWindowSteps === null ? null : lookedLongerHours,
     },
   };
 }
