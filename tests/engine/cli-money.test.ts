@@ -50,6 +50,8 @@ beforeAll(async () => {
     study: cli('study', ...common, '--battery', unrated, '--horizons', '2,6', '--replan', '1', '--terminal', 'free,steady-value'),
     badRating: cli('reference', ...common, '--battery', badRating),
     badCurrency: cli('reference', '--prices', prices, '--site', badCurrency, '--battery', unrated),
+    euroUnit: cli('reference', ...common, '--battery', unrated, '--price-unit', 'EUR/MWh'),
+    poundUnit: cli('reference', ...common, '--battery', unrated, '--price-unit', 'GBP/MWh'),
   };
   await Promise.all(Object.entries(jobs).map(async ([name, job]) => (results[name] = await job)));
 }, 120_000);
@@ -98,6 +100,12 @@ describe('command line money figures', () => {
     }
     expect(study.recommendation).toEqual(expect.objectContaining({ metTarget: expect.any(Boolean) }));
     expect(study.recommendation.reason).toMatch(/EUR/);
+  });
+
+  it("takes prices in the site's currency and refuses another one", () => {
+    expect(output('euroUnit').cost).toBeCloseTo(output('reference').cost, 9);
+    expect(results.poundUnit!.code).toBe(2);
+    expect(results.poundUnit!.stderr).toContain("The prices are in GBP/MWh, but this site's money is in EUR");
   });
 
   it('exits 2 for a rating that is not positive and for a currency that is not an ISO 4217 code', () => {

@@ -39,7 +39,7 @@ commands:
   reference --prices F --battery F [--load F] [--site F] [--start ISO] [--end ISO] [--terminal free|cyclic|steady-value|target:PCT] [--initial-soc PCT] [--days all|weekday|weekend]
   plan      --prices F --battery F [--load F] [--site F] --start ISO --end ISO --horizon HOURS --terminal RULE [--initial-soc PCT] [--days all|weekday|weekend]
   study     --prices F --battery F [--load F] [--site F] [--start ISO] [--end ISO] --horizons 6,12,24,48 --replan HOURS --terminal free,steady-value [--days all|weekday|weekend]
-common: [--generation F] [--export-prices F] [--price-unit currency/MWh|currency/kWh] [--load-unit kW|MW|kWh|MWh]
+common: [--generation F] [--export-prices F] [--price-unit currency/MWh|currency/kWh|<site currency>/MWh|…/kWh] [--load-unit kW|MW|kWh|MWh]
         [--generation-unit ...] [--interval-ending] [--fill-gaps] [--method auto|lp|dp]`;
 
 export function parseArgs(argv: readonly string[]): ParsedArgs {
