@@ -87,25 +87,32 @@ describe('the demo Sunday, 6 December 2026', () => {
     const inputs = demoInputs();
     const steady = solveSteadyCycle(inputs);
     if (!steady.ok || steady.cycle.status !== 'optimal') throw new Error('steady cycle failed');
-    const plan = (horizonHours: number, kind: 'free' | 'steady-value') => {
-      const result = solvePlan(inputs, {
-        startMs: Date.parse('2026-12-06T00:00:00+01:00'),
-        endMs: Date.parse('2026-12-07T00:00:00+01:00'),
-        horizonHours,
-        terminal: { kind },
-        steady: steady.cycle,
-      });
-      if (!result.ok) throw new Error(result.issue.message);
-      return result.plan.netFigures;
-    };
-    const short = [plan(24, 'free'), plan(24, 'steady-value')];
-    const long = [plan(48, 'steady-value'), plan(168, 'steady-value')];
-    // Cash alone ranks the free 24 h plan first: it sells at night what the longer plans keep.
-    expect(short[0]!.cost).toBeLessThan(long[0]!.cost - 100);
-    for (const longer of long) {
-      for (const shorter of short) expect(longer.netCost).toBeLessThanOrEqual(shorter.netCost + 1e-6 * Math.abs(shorter.netCost));
-      expect(longer.storedEnergyValuation.endClock).toBe('00:00');
-      expect(longer.storedEnergyValuation.endEnergyKwh).toBeGreaterThan(short[0]!.storedEnergyValuation.endEnergyKwh);
+    // The start SoC is shared by all plans of the window; the ranking must hold from any of them.
+    for (const initialSocPct of [10, 50, 90]) {
+      const plan = (horizonHours: number, kind: 'free' | 'steady-value') => {
+        const result = solvePlan(inputs, {
+          startMs: Date.parse('2026-12-06T00:00:00+01:00'),
+          endMs: Date.parse('2026-12-07T00:00:00+01:00'),
+          horizonHours,
+          terminal: { kind },
+          initialSocPct,
+          steady: steady.cycle,
+        });
+        if (!result.ok) throw new Error(result.issue.message);
+        return result.plan.netFigures;
+      };
+      const short = [plan(24, 'free'), plan(24, 'steady-value')];
+      const long = [plan(48, 'steady-value'), plan(168, 'steady-value')];
+      // Cash alone ranks the free 24 h plan first: it sells at night what the longer plans keep.
+      expect(short[0]!.cost).toBeLessThan(long[0]!.cost - 100);
+      for (const longer of long) {
+        for (const shorter of short)
+          expect(longer.netCost, `from ${initialSocPct} %`).toBeLessThanOrEqual(
+            shorter.netCost + 1e-6 * Math.abs(shorter.netCost),
+          );
+        expect(longer.storedEnergyValuation.endClock).toBe('00:00');
+        expect(longer.storedEnergyValuation.endEnergyKwh).toBeGreaterThan(short[0]!.storedEnergyValuation.endEnergyKwh);
+      }
     }
   });
 });
