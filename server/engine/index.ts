@@ -23,8 +23,36 @@ export { solvePlan, type Plan, type PlanRequest } from './plan/solve-plan';
 export { canSolveWithDp, type DpEligibility } from './dp';
 export type { PlanTurnpike } from './plan/plan-turnpike';
 export { settingWarnings } from './plan/plan-flags';
-export { arcFigures, commitWindowSteps, DEFAULT_BAND_FRACTION, type ArcFigures } from './turnpike/turnpike-figures';
+export {
+  arcFigures,
+  commitWindowSteps,
+  excursionFigures,
+  DEFAULT_BAND_FRACTION,
+  type ArcFigures,
+  type Excursions,
+  type ExcursionStretch,
+} from './turnpike/turnpike-figures';
+export {
+  durationWords,
+  excursionWords,
+  leavingWords,
+  planWordsFigures,
+  turnpikeWords,
+  type TurnpikeWordsFigures,
+} from './turnpike/turnpike-words';
+export {
+  money,
+  netFigures,
+  netFiguresOfCost,
+  noBatteryCost,
+  perMwh,
+  type NetFigures,
+  type StoredEnergyValuation,
+  type WindowSchedule,
+} from './value/net-figures';
+export { COMMON_PRACTICE_CYCLES_PER_DAY, cyclingCheck, steadyCyclingCheck, type CyclingCheck } from './plan/cycling-check';
 export { runClosedLoop, type ClosedLoopRequest, type ClosedLoopRun } from './study/run-closed-loop';
 export { runClosedLoopParallel } from './study/parallel-closed-loop';
 export { runHorizonStudy, type HorizonStudy, type StudyRequest, type StudyRun } from './study/run-horizon-study';
+export { valueGapPct } from './study/valued-run';
 export { recommendHorizon, DEFAULT_GAP_TARGET_PCT, type Recommendation } from './study/recommend-horizon';

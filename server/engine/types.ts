@@ -32,6 +32,11 @@ export interface BatteryParams {
    * Null or absent = none. Solved on the LP path.
    */
   readonly switchingCostPerMw?: number | null;
+  /**
+   * Equivalent full cycles per day the battery is rated for (its warranty or datasheet), used only to flag
+   * heavy cycling, never as a limit; absent or null = not known (then plans are flagged above 2 per day).
+   */
+  readonly maxRatedCyclesPerDay?: number | null;
 }
 
 /** Site parameters, the same keys as the command line's site JSON. */
@@ -42,6 +47,8 @@ export interface SiteParams {
   readonly exportLimitKw: number | null;
   /** Demand charge in currency per kW of peak import over the model; null = none. */
   readonly demandChargePerKw: number | null;
+  /** ISO 4217 code of the site's money figures (e.g. EUR), for words only; absent = not known. */
+  readonly currency?: string;
 }
 
 export type TerminalRule =

@@ -32,4 +32,5 @@ export {
   type ProfileKind,
   type ProfileUnit,
 } from './profile-units';
+export { acceptedUnitsFor, resolveProfileUnit, type UnitResolution } from './price-units';
 export { createZoneClock, formatInstant, formatOffset, type ZoneClock } from './zone-clock';

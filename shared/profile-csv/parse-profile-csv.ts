@@ -10,16 +10,9 @@ import { DEFAULT_MAX_ISSUES, IssueList, type ProfileIssue } from './issue-list';
 import { parseTimestamp } from './parse-timestamp';
 import { pickColumns } from './pick-columns';
 import { describeProfile } from './profile-notes';
-import {
-  ALL_PROFILE_KINDS,
-  canonicalFactor,
-  canonicalUnitOf,
-  unitsFor,
-  isAcceptedUnit,
-  type AnyProfileKind,
-  type ProfileUnit,
-} from './profile-units';
+import { ALL_PROFILE_KINDS, canonicalFactor, canonicalUnitOf, type AnyProfileKind, type ProfileUnit } from './profile-units';
 import { checkValueRange } from './check-range';
+import { resolveProfileUnit } from './price-units';
 import { readCsvRows } from './read-csv-rows';
 import { readTimedRows } from './read-timed-rows';
 import { createZoneClock, type ZoneClock } from './zone-clock';
@@ -28,8 +21,10 @@ export type { ProfileIssue } from './issue-list';
 
 export interface ParseProfileOptions {
   kind: AnyProfileKind;
-  /** One of unitsFor(kind). */
+  /** One of unitsFor(kind), or for prices the site's currency per MWh or kWh (e.g. EUR/MWh, see price-units.ts). */
   unit: string;
+  /** The site's currency (ISO 4217, e.g. EUR): lets a price upload name it; any other currency is refused. */
+  currency?: string;
   /** IANA name of the site's time zone; local times without offsets are read in it. */
   timezone: string;
   /** Labels mark the end of each interval (shifted back one step). Default false: interval-beginning. */
@@ -56,15 +51,22 @@ export interface ParsedProfile {
 
 export type ParseProfileResult = { ok: true; profile: ParsedProfile } | { ok: false; issues: ProfileIssue[]; hint: string };
 
-function checkOptions(options: ParseProfileOptions, issues: IssueList): ZoneClock | null {
+interface CheckedOptions {
+  clock: ZoneClock;
+  unit: ProfileUnit;
+  /** The currency a price unit named (the site's), else null. */
+  currency: string | null;
+}
+
+function checkOptions(options: ParseProfileOptions, issues: IssueList): CheckedOptions | null {
+  let unit: ProfileUnit | null = null;
+  let currency: string | null = null;
   if (!(ALL_PROFILE_KINDS as readonly string[]).includes(options.kind)) {
     issues.add('options', 0, `The kind "${String(options.kind)}" is not known; choose ${ALL_PROFILE_KINDS.join(', ')}.`);
-  } else if (!isAcceptedUnit(options.kind, options.unit)) {
-    issues.add(
-      'options',
-      0,
-      `The unit "${options.unit}" does not fit a ${options.kind} profile; choose one of ${unitsFor(options.kind).join(', ')}.`,
-    );
+  } else {
+    const resolved = resolveProfileUnit(options.kind, options.unit, options.currency);
+    if (resolved.ok) [unit, currency] = [resolved.unit, resolved.currency];
+    else issues.add('options', 0, resolved.message);
   }
   const clock = createZoneClock(options.timezone);
   if (clock === null)
@@ -73,7 +75,7 @@ function checkOptions(options: ParseProfileOptions, issues: IssueList): ZoneCloc
       0,
       `The site's time zone "${options.timezone}" is not a known IANA time zone name (such as Europe/Berlin); correct the site first.`,
     );
-  return issues.count === 0 ? clock : null;
+  return issues.count === 0 && clock !== null && unit !== null ? { clock, unit, currency } : null;
 }
 
 function failure(issues: IssueList): ParseProfileResult {
@@ -87,8 +89,9 @@ export function parseProfileCsv(text: string, options: ParseProfileOptions): Par
   const intervalEnding = options.intervalEnding ?? false;
   const fillGaps = options.fillGaps ?? false;
 
-  const clock = checkOptions(options, issues);
-  if (clock === null) return failure(issues);
+  const checked = checkOptions(options, issues);
+  if (checked === null) return failure(issues);
+  const { clock, unit, currency } = checked;
   const table = readCsvRows(text, issues);
   if (table === null) return failure(issues);
 
@@ -139,7 +142,7 @@ export function parseProfileCsv(text: string, options: ParseProfileOptions): Par
     issues,
   );
   const series = checkSequence(timed.rows, fillGaps, issues);
-  checkValueRange(timed.rows, options.kind, options.unit as ProfileUnit, issues);
+  checkValueRange(timed.rows, options.kind, unit, issues);
   if (series === null || issues.count > 0) return failure(issues);
 
   const { values, stepMinutes } = series;
@@ -157,14 +160,14 @@ export function parseProfileCsv(text: string, options: ParseProfileOptions): Par
 
   const filledIndexes = fillGapsLinearly(values);
   const startMs = series.firstMs - (intervalEnding ? stepMinutes * 60_000 : 0);
-  const factor = canonicalFactor(options.unit as ProfileUnit, stepMinutes);
+  const factor = canonicalFactor(unit, stepMinutes);
   const notes = describeProfile({
     table,
     columns,
     timed,
     clock,
     kind: options.kind,
-    unit: options.unit as ProfileUnit,
+    unit,
     intervalEnding,
     startMs,
     stepMinutes,
@@ -179,7 +182,7 @@ export function parseProfileCsv(text: string, options: ParseProfileOptions): Par
       values: factor === 1 ? values : values.map((v) => v * factor),
       unit: canonicalUnitOf(options.kind),
       filledIndexes,
-      notes,
+      notes: currency ? [`Prices read as ${currency}, the site's currency, per ${unit.slice(9)}.`, ...notes] : notes,
     },
   };
 }

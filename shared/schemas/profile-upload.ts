@@ -6,6 +6,7 @@
  */
 import { z } from 'zod';
 import { ACCEPTED_UNITS, PROFILE_KINDS, isAcceptedUnit } from '../profile-csv/profile-units';
+import { resolveProfileUnit } from '../profile-csv/price-units';
 
 const flag = z.union([z.boolean(), z.stringbool()]).default(false);
 
@@ -31,3 +32,22 @@ export const profileUploadOptionsSchema = z
   });
 
 export type ProfileUploadOptions = z.infer<typeof profileUploadOptionsSchema>;
+
+/**
+ * The same options for an upload to a site with this currency (ISO 4217): a
+ * price profile may then also be in the site's currency per MWh or kWh (e.g.
+ * EUR/MWh); another currency is refused on the unit field with the reason.
+ */
+export function profileUploadOptionsSchemaFor(currency: string) {
+  return z
+    .object({
+      kind: profileKindSchema,
+      unit: z.string().trim().min(1, 'Choose a unit.'),
+      intervalEnding: flag,
+      fillGaps: flag,
+    })
+    .superRefine((value, ctx) => {
+      const resolved = resolveProfileUnit(value.kind, value.unit, currency);
+      if (!resolved.ok) ctx.addIssue({ code: 'custom', path: ['unit'], message: resolved.message });
+    });
+}

@@ -30,7 +30,7 @@ const LIMITS = ['reserve-up-prices', 'reserve-down-prices', 'reserve-hours', 'av
 
 export const COMMAND_OPTIONS: Readonly<Record<string, readonly string[]>> = {
   steady: [...COMMON, 'days'],
-  reference: [...COMMON, ...LIMITS, 'start', 'end', 'terminal', 'initial-soc'],
+  reference: [...COMMON, ...LIMITS, 'start', 'end', 'terminal', 'initial-soc', 'days'],
   plan: [...COMMON, ...LIMITS, 'start', 'end', 'horizon', 'terminal', 'initial-soc', 'band', 'days'],
   study: [
     ...COMMON,
@@ -51,10 +51,10 @@ export const COMMAND_OPTIONS: Readonly<Record<string, readonly string[]>> = {
 export const USAGE = `usage: npm run --silent cli -- <command> [options]
 commands:
   steady    --prices F --battery F [--load F] [--site F] [--days all|weekday|weekend]
-  reference --prices F --battery F [--load F] [--site F] [--start ISO] [--end ISO] [--terminal free|cyclic|steady-value|target:PCT] [--initial-soc PCT]
+  reference --prices F --battery F [--load F] [--site F] [--start ISO] [--end ISO] [--terminal free|cyclic|steady-value|target:PCT] [--initial-soc PCT] [--days all|weekday|weekend]
   plan      --prices F --battery F [--load F] [--site F] --start ISO --end ISO --horizon HOURS --terminal RULE [--initial-soc PCT] [--days all|weekday|weekend]
   study     --prices F --battery F [--load F] [--site F] [--start ISO] [--end ISO] --horizons 6,12,24,48 --replan HOURS --terminal free,steady-value [--days all|weekday|weekend]
-common: [--generation F] [--export-prices F] [--price-unit currency/MWh|currency/kWh] [--load-unit kW|MW|kWh|MWh]
+common: [--generation F] [--export-prices F] [--price-unit currency/MWh|currency/kWh|<site currency>/MWh|…/kWh] [--load-unit kW|MW|kWh|MWh]
         [--generation-unit ...] [--interval-ending] [--fill-gaps] [--method auto|lp|dp]
 limits (reference, plan, study): [--reserve-up-prices F] [--reserve-down-prices F] [--reserve-hours HOURS]
         [--availability F] [--initial-power KW (reference, plan: net power before the start, discharge positive)]

@@ -12,7 +12,12 @@ import { readLimitInputs } from './read-limit-inputs';
 
 type Kind = AnyProfileKind;
 
-function readProfile(path: string, kind: Kind, unit: string, timezone: string, args: ParsedArgs): ProfileSeries {
+interface ProfileSite {
+  readonly timezone: string;
+  readonly currency?: string;
+}
+
+function readProfile(path: string, kind: Kind, unit: string, site: ProfileSite, args: ParsedArgs): ProfileSeries {
   let bytes: Uint8Array;
   try {
     bytes = readFileSync(path);
@@ -22,7 +27,8 @@ function readProfile(path: string, kind: Kind, unit: string, timezone: string, a
   const parsed = parseProfileCsv(decodeProfileBytes(bytes), {
     kind,
     unit,
-    timezone,
+    timezone: site.timezone,
+    ...(site.currency ? { currency: site.currency } : {}),
     intervalEnding: args.flags.has('interval-ending'),
     fillGaps: args.flags.has('fill-gaps'),
   });
@@ -42,13 +48,12 @@ export function readInputs(args: ParsedArgs, warn: (message: string) => void): A
   if (!pricesPath || !batteryPath) throw new CliInputError(`the ${args.command} command needs --prices and --battery`);
   const battery = readBattery(batteryPath, warn);
   const site = readSite(args.options.get('site'), warn);
-  const tz = site.timezone;
   const priceUnit = args.options.get('price-unit') ?? 'currency/MWh';
   const read = (name: string, kind: Kind, unit: string) => {
     const path = args.options.get(name);
-    return path === undefined ? undefined : readProfile(path, kind, unit, tz, args);
+    return path === undefined ? undefined : readProfile(path, kind, unit, site, args);
   };
-  const prices = readProfile(pricesPath, 'price', priceUnit, tz, args);
+  const prices = readProfile(pricesPath, 'price', priceUnit, site, args);
   const exportPrices = read('export-prices', 'price', priceUnit);
   const load = read('load', 'load', args.options.get('load-unit') ?? 'kW');
   const generation = read('generation', 'generation', args.options.get('generation-unit') ?? 'kW');

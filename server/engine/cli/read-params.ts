@@ -20,8 +20,8 @@ const BATTERY_KEYS = [
   'maxCyclesPerDay',
 ] as const;
 const NULLABLE_BATTERY = new Set<string>(['maxCyclesPerDay']);
-/** Operating limits (DESIGN section 3.3): optional keys, null or absent = none. */
-const OPTIONAL_BATTERY = ['rampKwPerMin', 'switchingCostPerMw'] as const;
+/** Optional battery keys, null or absent = none: operating limits (docs/model.md) and the rated cycles per day. */
+const OPTIONAL_BATTERY = ['rampKwPerMin', 'switchingCostPerMw', 'maxRatedCyclesPerDay'] as const;
 const SITE_LIMITS = ['importLimitKw', 'exportLimitKw', 'demandChargePerKw'] as const;
 
 export function readJsonFile(path: string, what: string): Record<string, unknown> {
@@ -75,13 +75,19 @@ export function readSite(path: string | undefined, warn: (message: string) => vo
     return DEFAULT_SITE;
   }
   const obj = readJsonFile(path, 'site');
-  const extra = unknownKeys(obj, ['timezone', ...SITE_LIMITS]);
+  const extra = unknownKeys(obj, ['timezone', 'currency', ...SITE_LIMITS]);
   if (extra.length > 0) warn(`ignoring unknown key(s) in ${path}: ${extra.join(', ')}`);
   if (typeof obj.timezone !== 'string') throw new CliInputError(`${path} needs "timezone", an IANA name such as "Europe/Berlin"`);
+  const currency = obj.currency;
+  if (currency !== undefined && (typeof currency !== 'string' || !/^[A-Z]{3}$/.test(currency)))
+    throw new CliInputError(
+      `"currency" in ${path} must be a three-letter ISO 4217 code such as "EUR" (got ${JSON.stringify(currency)}); leave it out if not known`,
+    );
   return {
     timezone: obj.timezone,
     importLimitKw: numberKey(obj, 'importLimitKw', true, path),
     exportLimitKw: numberKey(obj, 'exportLimitKw', true, path),
     demandChargePerKw: numberKey(obj, 'demandChargePerKw', true, path),
+    ...(currency !== undefined ? { currency } : {}),
   };
 }

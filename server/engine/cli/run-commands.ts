@@ -12,6 +12,9 @@ import { solvePlan } from '../plan/solve-plan';
 import { settingWarnings } from '../plan/plan-flags';
 import { runHorizonStudy } from '../study/run-horizon-study';
 import { parseTerminal, terminalLabel, type TerminalChoice } from '../terminal/terminal-choice';
+import { steadyCyclingCheck } from '../plan/cycling-check';
+import type { NetFigures } from '../value/net-figures';
+import { planWordsFigures, turnpikeWords } from '../turnpike/turnpike-words';
 import { CliInputError, listOption, numberOption, required, type ParsedArgs } from './cli-args';
 import { parseInstant } from './read-inputs';
 import { initialPower } from './read-limit-inputs';
@@ -54,12 +57,24 @@ function steadyDays(args: ParsedArgs): DaySelection {
   return days;
 }
 
+/** The net-figure keys of a plan or path (DESIGN section 3.1), beside its cash `cost`. */
+function netKeys(net: NetFigures) {
+  return {
+    storedEnergyChange: net.storedEnergyChange,
+    netCost: net.netCost,
+    noBatteryCost: net.noBatteryCost,
+    batteryValue: net.batteryValue,
+    storedEnergyValuation: net.storedEnergyValuation,
+  };
+}
+
 export function steadyCommand(inputs: AlignedInputs, args: ParsedArgs) {
   const days = steadyDays(args);
   const result = solveSteadyCycle(inputs, { days });
   if (!result.ok) throw new CliInputError(`${result.issue.field}: ${result.issue.message}`);
   const c = result.cycle;
   if (c.status !== 'optimal') throw new CliInputError(`the steady cycle could not be solved: ${c.message}`);
+  const cycling = steadyCyclingCheck(inputs.battery, c.equivalentCyclesPerDay);
   return {
     method: 'lp',
     cost: c.costPerDay,
@@ -69,14 +84,16 @@ export function steadyCommand(inputs: AlignedInputs, args: ParsedArgs) {
     days: c.days,
     dstDays: c.dstDays,
     notes: c.notes,
-    warnings: settingWarnings(inputs.battery),
-    slots: c.slots.map(({ time, chargeKw, dischargeKw, socKwh, storedEnergyValue, priceImport }) => ({
+    warnings: [...settingWarnings(inputs.battery), ...(cycling.message ? [cycling.message] : [])],
+    cycling,
+    slots: c.slots.map(({ time, chargeKw, dischargeKw, socKwh, storedEnergyValue, storedEnergyValueRange, priceImport }) => ({
       time,
       priceImport,
       chargeKw,
       dischargeKw,
       socKwh,
       storedEnergyValue,
+      storedEnergyValueRange,
     })),
   };
 }
@@ -93,15 +110,18 @@ export function referenceCommand(inputs: AlignedInputs, args: ParsedArgs) {
     ...(soc !== undefined ? { initialSocPct: soc } : {}),
     ...(power !== undefined ? { initialNetPowerKw: power } : {}),
     terminal: choice,
+    steadyDays: steadyDays(args),
     method: method(args),
   });
   if (!result.ok) throw new CliInputError(`${result.issue.field}: ${result.issue.message}`);
-  const { solution, from: start, to: end, terminalRule } = result.path;
-  if (solution.status !== 'optimal') throw new CliInputError(solution.message ?? `the reference path is ${solution.status}`);
+  const { solution, from: start, to: end, terminalRule, netFigures } = result.path;
+  if (solution.status !== 'optimal' || !netFigures)
+    throw new CliInputError(solution.message ?? `the reference path is ${solution.status}`);
   return {
     method: solution.method,
     terminal: terminalLabel(choice),
     ...summarizePath(inputs, solution, start),
+    ...netKeys(netFigures),
     simultaneousSteps: solution.simultaneousSteps ?? [],
     warnings: [...settingWarnings(inputs.battery), ...limitWarnings(inputs)],
     ...limitOutput(inputs, {
@@ -124,12 +144,13 @@ export function planCommand(inputs: AlignedInputs, args: ParsedArgs) {
   const soc = initialSoc(args);
   const days = steadyDays(args);
   const power = initialPower(args);
+  const rule = terminal(required(args, 'terminal'));
   const result = solvePlan(inputs, {
     ...(power !== undefined ? { initialNetPowerKw: power } : {}),
     startMs: parseInstant(required(args, 'start'), tz, '--start'),
     endMs: parseInstant(required(args, 'end'), tz, '--end'),
     horizonHours: horizon!,
-    terminal: terminal(required(args, 'terminal')),
+    terminal: rule,
     ...(soc !== undefined ? { initialSocPct: soc } : {}),
     ...(band !== undefined ? { bandFraction: band / 100 } : {}),
     steadyDays: days,
@@ -143,10 +164,17 @@ export function planCommand(inputs: AlignedInputs, args: ParsedArgs) {
   return {
     method: plan.solution.method,
     ...summarizePath(inputs, plan.solution, plan.from, 0, delivery),
+    ...netKeys(plan.netFigures),
+    cycling: plan.cycling,
     lookahead: { hours: plan.lookaheadHours, ...summarizePath(inputs, plan.solution, plan.from, delivery) },
     terminal: plan.terminalRule,
     steadyCycle: { days, daysAveraged: plan.steady.days, cost: plan.steady.costPerDay, notes: plan.steady.notes },
-    turnpike: { ...figures, value: valueFigures },
+    turnpike: {
+      ...figures,
+      value: valueFigures,
+      longerLookaheadHours: plan.longerLookaheadHours,
+      summary: turnpikeWords(planWordsFigures(plan), inputs.stepMinutes, terminalLabel(rule)),
+    },
     decisionHorizonHours: plan.dpInsights?.decisionHorizonHours ?? null,
     valueCurves: plan.dpInsights?.valueCurves ?? [],
     warnings: [...plan.warnings, ...limitWarnings(inputs)],
@@ -200,12 +228,24 @@ export async function studyCommand(inputs: AlignedInputs, args: ParsedArgs, prog
     );
   return {
     referenceCost: study.referenceCost,
+    referenceNetCost: study.referenceNetCost,
+    referenceBatteryValue: study.referenceBatteryValue,
+    noBatteryCost: study.noBatteryCost,
+    storedEnergyValuation: study.storedEnergyValuation,
     runs: study.runs.map((r) => ({
       horizonHours: r.horizonHours,
       terminal: r.terminal,
       method: r.method,
       cost: r.cost,
       gapPct: r.gapPct,
+      storedEnergyChange: r.storedEnergyChange,
+      netCost: r.netCost,
+      noBatteryCost: r.noBatteryCost,
+      batteryValue: r.batteryValue,
+      gapValue: r.gapValue,
+      valueGapPct: r.valueGapPct,
+      endSocKwh: r.endEnergyKwh,
+      cycling: r.cycling,
       equivalentCycles: r.equivalentCycles,
       solves: r.solves,
       seconds: r.seconds,

@@ -30,6 +30,8 @@ export interface LpDispatchOutcome {
   readonly basis?: LpBasis;
   /** The model solved, for the next window's previousModel. */
   readonly model?: DispatchModel;
+  /** The schedule's values of every LP column (an optimal primal of `model`), when optimal. */
+  readonly primal?: Float64Array;
 }
 
 export function failedSolution(
@@ -104,5 +106,6 @@ export function solveDispatchLp(problem: DispatchProblem, options: LpDispatchOpt
     solution: toDispatchSolution(problem, model, stage1, finalX, { tieBroken, seconds }),
     ...(stage1.basis ? { basis: stage1.basis } : {}),
     model,
+    primal: finalX,
   };
 }

@@ -56,6 +56,13 @@ export function validateBattery(b: BatteryParams): InputIssue | null {
       ),
     () => checkNumber('battery.degradationCostPerMwh', b.degradationCostPerMwh, (v) => v >= 0, 'zero or more per MWh'),
     () => checkOptional('battery.maxCyclesPerDay', b.maxCyclesPerDay, (v) => v > 0, 'more than 0, or null for no cap'),
+    () =>
+      checkOptional(
+        'battery.maxRatedCyclesPerDay',
+        b.maxRatedCyclesPerDay ?? null,
+        (v) => v > 0,
+        'more than 0 equivalent full cycles per day, or null when the rating is not known',
+      ),
   ];
   for (const check of checks) {
     const issue = check();

@@ -11,7 +11,7 @@ import { usableEnergyKwh } from '../inputs/problem-for';
 import { energyBounds } from '../model/build-dispatch-model';
 import { steadySocAt, steadyValueAt, type SteadyCycle } from '../steady/solve-steady-cycle';
 import { minuteOfDayAt } from '../terminal/terminal-choice';
-import { arcFigures, commitWindowSteps, type ArcFigures } from '../turnpike/turnpike-figures';
+import { arcFigures, commitWindowSteps, excursionFigures, type ArcFigures, type Excursions } from '../turnpike/turnpike-figures';
 
 export interface PlanTurnpike {
   /** SoC band as a fraction of usable energy. */
@@ -20,6 +20,8 @@ export interface PlanTurnpike {
   readonly nearSteadyShare: number;
   readonly entryArcSteps: number;
   readonly leavingArcSteps: number;
+  /** Stretches outside the band between the entry and the leaving arc; distances as fractions of usable energy. */
+  readonly excursions: Excursions;
   /** Leading steps within the band of the longer plan; null when no longer plan could be solved. */
   readonly commitWindowSteps: number | null;
   /** |SoC − steady SoC| / usable energy per step. */
@@ -30,11 +32,22 @@ export interface PlanTurnpike {
     readonly nearSteadyShare: number;
     readonly entryArcSteps: number;
     readonly leavingArcSteps: number;
+    /** As `excursions`, distances in currency/MWh. */
+    readonly excursions: Excursions;
     readonly commitWindowSteps: number | null;
     /** |value − steady value| in currency/MWh per step (0 where not comparable). */
     readonly distance: readonly number[];
   };
   readonly flags: string[];
+}
+
+/** Excursions with their distances multiplied by `scale` (fractions of the price spread → currency/MWh). */
+function scaled(ex: Excursions, scale: number): Excursions {
+  return {
+    ...ex,
+    largestDistance: ex.largestDistance * scale,
+    stretches: ex.stretches.map((s) => ({ ...s, largestDistance: s.largestDistance * scale })),
+  };
 }
 
 export function strictlyInside(soc: number, min: number, max: number): boolean {
@@ -76,6 +89,7 @@ export function planTurnpike(
     nearSteadyShare: soc.nearSteadyShare,
     entryArcSteps: soc.entryArcSteps,
     leavingArcSteps: soc.leavingArcSteps,
+    excursions: excursionFigures(soc),
     commitWindowSteps: longer ? commitWindowSteps(planSoc, longer.socKwh.slice(1), usable, bandFraction) : null,
     distance: soc.distance,
     value: {
@@ -83,6 +97,7 @@ export function planTurnpike(
       nearSteadyShare: value.nearSteadyShare,
       entryArcSteps: value.entryArcSteps,
       leavingArcSteps: value.leavingArcSteps,
+      excursions: scaled(excursionFigures(value), spread),
       commitWindowSteps: longerValue ? commitWindowSteps(plan.storedEnergyValue, longerValue, spread, bandFraction) : null,
       distance: value.distance.map((d) => d * spread),
     },

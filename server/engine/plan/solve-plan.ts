@@ -19,6 +19,8 @@ import { planFlags, settingWarnings } from './plan-flags';
 import { planTurnpike, type PlanTurnpike } from './plan-turnpike';
 import { planInsights, type DpPlanInsights } from '../dp';
 import { localTimeLabel } from '../time/zone-offsets';
+import { netFigures, type NetFigures } from '../value/net-figures';
+import { cyclingCheck, type CyclingCheck } from './cycling-check';
 
 export interface PlanRequest {
   readonly startMs: number;
@@ -51,6 +53,10 @@ export interface Plan {
   readonly warnings: readonly string[];
   /** Decision horizon and value curves (delivery start and each whole local hour) when the exact DP solved the plan, else null. */
   readonly dpInsights: DpPlanInsights | null;
+  /** What the delivery window is worth: cash, stored energy valued at the steady cycle, net (docs/model.md). */
+  readonly netFigures: NetFigures;
+  /** Equivalent full cycles per local day of the delivery window against the battery's rating. */
+  readonly cycling: CyclingCheck;
   /**
    * Hours of lookahead of the longer plan the commit window was measured against:
    * max(4·H, H + 168 h), cut where the data end; null when the data end at the
@@ -136,6 +142,23 @@ export function solvePlan(inputs: AlignedInputs, request: PlanRequest): PlanResu
       ...(longer ? {} : { longerMissing: 'the price data end at the horizon, so there is no longer plan to compare with' }),
     }),
   );
+  const delivery = end.index - from;
+  const sol = main.solution;
+  const net = netFigures(
+    inputs,
+    from,
+    end.index,
+    {
+      dischargeKw: sol.dischargeKw.slice(0, delivery),
+      gridImportKw: sol.gridImportKw.slice(0, delivery),
+      gridExportKw: sol.gridExportKw.slice(0, delivery),
+      startEnergyKwh: sol.socKwh[0]!,
+      endEnergyKwh: sol.socKwh[delivery]!,
+    },
+    steady,
+  );
+  const cycling = cyclingCheck(inputs, from, sol.dischargeKw.slice(0, delivery));
+  if (cycling.message) tp.flags.push(cycling.message);
   return {
     ok: true,
     plan: {
@@ -149,6 +172,8 @@ export function solvePlan(inputs: AlignedInputs, request: PlanRequest): PlanResu
       turnpike: tp,
       warnings: settingWarnings(inputs.battery),
       dpInsights,
+      netFigures: net,
+      cycling,
       longerLookaheadHours: longer ? lookedLongerHours : null,
     },
   };

@@ -11,6 +11,7 @@ import { solveDispatch, type DispatchOptions } from '../dispatch/solve-dispatch'
 import { solveSteadyCycle, type SteadyCycle } from '../steady/solve-steady-cycle';
 import type { DaySelection } from '../steady/representative-day';
 import { terminalRuleFor, type TerminalChoice } from '../terminal/terminal-choice';
+import { netFigures, type NetFigures } from '../value/net-figures';
 
 export interface PathRequest {
   readonly from?: number;
@@ -20,8 +21,10 @@ export interface PathRequest {
   /** Net power (discharge − charge, kW) before the start, from which a ramp rate and switching cost apply. */
   readonly initialNetPowerKw?: number;
   readonly terminal?: TerminalChoice;
-  /** Steady cycle for steady-value (solved from all the data when absent). */
+  /** Steady cycle for steady-value and for valuing stored energy (solved when absent). */
   readonly steady?: SteadyCycle;
+  /** Which local days the steady cycle averages when it is solved here (default all). */
+  readonly steadyDays?: DaySelection;
   readonly method?: DispatchOptions['method'];
 }
 
@@ -31,31 +34,46 @@ export interface ReferencePath {
   readonly terminalRule: TerminalRule;
   readonly solution: DispatchSolution;
   readonly steady?: SteadyCycle;
+  /** Cash, stored energy valued at the steady cycle, net (DESIGN section 3.1); null unless the solution is optimal. */
+  readonly netFigures: NetFigures | null;
 }
 
 export type PathResult = { ok: true; path: ReferencePath } | { ok: false; issue: InputIssue };
 
-/** The steady cycle (over the chosen local days) when a terminal choice needs it; an issue when it cannot be had. */
+export type SteadyForResult =
+  | {
+      ok: true;
+      steady?: SteadyCycle;
+      /** Why stored energy cannot be valued, when there is no steady cycle. */ unvalued?: string;
+    }
+  | { ok: false; issue: InputIssue };
+
+/**
+ * The steady cycle (over the chosen local days): needed by the steady-value rule
+ * and to value stored energy. An issue when a terminal choice needs it and it
+ * cannot be had; otherwise, without one, the reason stored energy goes unvalued.
+ */
 export function steadyFor(
   inputs: AlignedInputs,
   choices: readonly TerminalChoice[],
   given?: SteadyCycle,
   days: DaySelection = 'all',
-): { ok: true; steady?: SteadyCycle } | { ok: false; issue: InputIssue } {
-  if (!choices.some((c) => c.kind === 'steady-value')) return { ok: true, ...(given ? { steady: given } : {}) };
+): SteadyForResult {
   if (given) return { ok: true, steady: given };
+  const needed = choices.some((c) => c.kind === 'steady-value');
   const result = solveSteadyCycle(inputs, { days });
+  const why = !result.ok
+    ? result.issue.message
+    : result.cycle.status !== 'optimal'
+      ? `the steady cycle could not be solved: ${result.cycle.message ?? result.cycle.status}`
+      : null;
+  if (why === null && result.ok) return { ok: true, steady: result.cycle };
+  if (!needed) return { ok: true, unvalued: why ?? 'there is no steady cycle' };
   if (!result.ok) return result;
-  if (result.cycle.status !== 'optimal') {
-    return {
-      ok: false,
-      issue: {
-        field: 'terminal',
-        message: `the steady-value rule needs the steady cycle, which could not be solved: ${result.cycle.message ?? result.cycle.status}`,
-      },
-    };
-  }
-  return { ok: true, steady: result.cycle };
+  return {
+    ok: false,
+    issue: { field: 'terminal', message: `the steady-value rule needs the steady cycle, which could not be solved: ${why}` },
+  };
 }
 
 export function solveReferencePath(inputs: AlignedInputs, request: PathRequest = {}): PathResult {
@@ -63,11 +81,25 @@ export function solveReferencePath(inputs: AlignedInputs, request: PathRequest =
   const to = request.to ?? inputs.timesMs.length;
   if (!(to > from)) return { ok: false, issue: { field: 'end', message: 'the end must be after the start' } };
   const choice = request.terminal ?? { kind: 'free' };
-  const steady = steadyFor(inputs, [choice], request.steady);
+  const steady = steadyFor(inputs, [choice], request.steady, request.steadyDays);
   if (!steady.ok) return steady;
   const terminalRule = terminalRuleFor(choice, inputs, to, steady.steady);
   const e0 = socPctToKwh(inputs, request.initialSocPct ?? inputs.battery.socInitialPct);
   const extras = request.initialNetPowerKw !== undefined ? { initialNetPowerKw: request.initialNetPowerKw } : {};
   const solution = solveDispatch(problemFor(inputs, from, to, e0, terminalRule, extras), { method: request.method ?? 'auto' });
-  return { ok: true, path: { from, to, terminalRule, solution, ...(steady.steady ? { steady: steady.steady } : {}) } };
+  const net =
+    solution.status === 'optimal'
+      ? netFigures(
+          inputs,
+          from,
+          to,
+          { ...solution, startEnergyKwh: solution.socKwh[0]!, endEnergyKwh: solution.socKwh[to - from]! },
+          steady.steady,
+          steady.unvalued,
+        )
+      : null;
+  return {
+    ok: true,
+    path: { from, to, terminalRule, solution, ...(steady.steady ? { steady: steady.steady } : {}), netFigures: net },
+  };
 }

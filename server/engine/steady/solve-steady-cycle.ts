@@ -10,8 +10,7 @@ import type { AlignedInputs } from '../inputs/align-inputs';
 import type { InputIssue } from '../model/validate-battery';
 import { usableEnergyKwh } from '../inputs/problem-for';
 import { solveDispatchLp } from '../dispatch/solve-dispatch-lp';
-import { buildDispatchModel, energyBounds } from '../model/build-dispatch-model';
-import { oneSidedValues } from './one-sided-values';
+import { steadyValueIntervals, type ValueIntervals } from './value-intervals';
 import { clockLabel } from '../time/zone-offsets';
 import { representativeDay, type DaySelection, type DstDay } from './representative-day';
 
@@ -25,10 +24,13 @@ export interface SteadySlot {
   /** Energy at the end of the slot, kWh. */
   readonly socKwh: number;
   /**
-   * Value of stored energy at the end of the slot, currency/MWh. Where the SoC sits
-   * at a bound, the one-sided value on the side it can move to (see one-sided-values.ts).
+   * Value of stored energy at the end of the slot, currency/MWh: the derivative of
+   * the steady cost with respect to energy added then, where it is unique; else the
+   * middle of `storedEnergyValueRange` (see value-intervals.ts).
    */
   readonly storedEnergyValue: number;
+  /** All optimal values at the end of the slot: one kWh more is worth `low`, one kWh less costs `high`. */
+  readonly storedEnergyValueRange: { readonly low: number; readonly high: number };
 }
 
 export interface SteadyCycle {
@@ -74,17 +76,11 @@ export function solveSteadyCycle(inputs: AlignedInputs, options: SteadyOptions =
     terminal: { kind: 'cyclic' },
     dayIndex: day.slotStartMinutes.map(() => 0),
   };
-  const { solution } = solveDispatchLp(problem);
-  const values =
-    solution.status === 'optimal'
-      ? oneSidedValues(
-          buildDispatchModel(problem),
-          solution.objective,
-          solution.socKwh,
-          solution.storedEnergyValue,
-          energyBounds(inputs),
-        )
-      : [];
+  const { solution, model, primal } = solveDispatchLp(problem);
+  const values: ValueIntervals =
+    solution.status === 'optimal' && model && primal
+      ? steadyValueIntervals(model, primal, solution.storedEnergyValue)
+      : { value: [], low: [], high: [] };
   const base = { slotMinutes: day.slotMinutes, days: day.days, dstDays: day.dstDays, notes: day.notes };
   if (solution.status !== 'optimal') {
     return {
@@ -114,7 +110,8 @@ export function solveSteadyCycle(inputs: AlignedInputs, options: SteadyOptions =
         chargeKw: solution.chargeKw[k]!,
         dischargeKw: solution.dischargeKw[k]!,
         socKwh: solution.socKwh[k + 1]!,
-        storedEnergyValue: values[k]!,
+        storedEnergyValue: values.value[k]!,
+        storedEnergyValueRange: { low: values.low[k]!, high: values.high[k]! },
       })),
       socStartKwh: solution.socKwh[0]!,
       costPerDay: solution.cost,

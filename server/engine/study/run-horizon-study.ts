@@ -16,6 +16,8 @@ import { DEFAULT_GAP_TARGET_PCT, recommendHorizon, type Recommendation } from '.
 import { runClosedLoopParallel } from './parallel-closed-loop';
 import { runStudyJob, withoutSeries, type StudyJob, type StudyJobContext, type StudyJobResult } from './study-job';
 import { defaultWorkerCount, runJobsOnWorkers } from './worker-pool';
+import type { StoredEnergyValuation } from '../value/net-figures';
+import { valuedRun } from './valued-run';
 
 export interface StudyRequest {
   /** Defaults: the whole period of the inputs. */
@@ -40,10 +42,29 @@ export interface StudyRun extends StudyJobResult {
   readonly terminal: string;
   /** (cost − reference cost) / |reference cost| in %. */
   readonly gapPct: number;
+  /** Change in the value of stored energy over the period (currency; steady cycle's λ̄, DESIGN section 3.1). */
+  readonly storedEnergyChange: number;
+  /** cost − storedEnergyChange: what every ranking of runs uses. */
+  readonly netCost: number;
+  /** The site over the period with no battery (0 for pure arbitrage). */
+  readonly noBatteryCost: number;
+  /** noBatteryCost − netCost. */
+  readonly batteryValue: number;
+  /** netCost − the reference path's netCost, currency. */
+  readonly gapValue: number;
+  /** 100·gapValue / |the reference path's batteryValue|, in %. */
+  readonly valueGapPct: number;
 }
 
 export interface HorizonStudy {
   readonly referenceCost: number;
+  /** The reference path's net cost (stored energy valued as in every run). */
+  readonly referenceNetCost: number;
+  /** The reference path's battery value: the scale of valueGapPct. */
+  readonly referenceBatteryValue: number;
+  readonly noBatteryCost: number;
+  /** How stored energy was valued, with the reference path's energies. */
+  readonly storedEnergyValuation: StoredEnergyValuation;
   readonly referenceEquivalentCycles: number;
   readonly runs: readonly StudyRun[];
   readonly recommendation: Recommendation;
@@ -97,12 +118,16 @@ export async function runHorizonStudy(inputs: AlignedInputs, request: StudyReque
     from: start.index,
     to: end.index,
     terminal: { kind: 'free' },
+    ...(steady.steady ? { steady: steady.steady } : {}),
+    ...(request.steadyDays ? { steadyDays: request.steadyDays } : {}),
     ...(request.initialSocPct !== undefined ? { initialSocPct: request.initialSocPct } : {}),
     ...(request.method ? { method: request.method } : {}),
   });
   if (!reference.ok) return reference;
   const ref = reference.path.solution;
-  if (ref.status !== 'optimal') return fail('reference', `the reference path could not be solved: ${ref.message ?? ref.status}`);
+  const refNet = reference.path.netFigures;
+  if (ref.status !== 'optimal' || !refNet)
+    return fail('reference', `the reference path could not be solved: ${ref.message ?? ref.status}`);
   const context: StudyJobContext = {
     inputs,
     from: start.index,
@@ -123,7 +148,12 @@ export async function runHorizonStudy(inputs: AlignedInputs, request: StudyReque
       ? await runJobsOnWorkers<StudyJobResult>(context, jobs, workers, (_, done) => request.onProgress?.(done, jobs.length))
       : workers > 1 && !onDp
         ? // A single run: split it over the cores instead (speculative stretches, same result).
-          [withoutSeries(await runClosedLoopParallel(context, jobs[0]!, workers).finally(() => request.onProgress?.(1, 1)))]
+          [
+            withoutSeries(
+              context,
+              await runClosedLoopParallel(context, jobs[0]!, workers).finally(() => request.onProgress?.(1, 1)),
+            ),
+          ]
         : jobs.map((job, i) => {
             const result = runStudyJob(context, job);
             request.onProgress?.(i + 1, jobs.length);
@@ -134,14 +164,19 @@ export async function runHorizonStudy(inputs: AlignedInputs, request: StudyReque
     horizonHours: jobs[i]!.horizonHours,
     terminal: terminalLabel(jobs[i]!.terminal),
     gapPct: result.status === 'optimal' ? gapPct(result.cost, ref.cost) : NaN,
+    ...valuedRun(inputs, context, result, refNet, steady),
   }));
   return {
     ok: true,
     study: {
       referenceCost: ref.cost,
+      referenceNetCost: refNet.netCost,
+      referenceBatteryValue: refNet.batteryValue,
+      noBatteryCost: refNet.noBatteryCost,
+      storedEnergyValuation: refNet.storedEnergyValuation,
       referenceEquivalentCycles: ref.dischargeKw.reduce((s, d) => s + d * inputs.stepHours, 0) / usableEnergyKwh(inputs.battery),
       runs,
-      recommendation: recommendHorizon(runs, request.gapTargetPct ?? DEFAULT_GAP_TARGET_PCT),
+      recommendation: recommendHorizon(runs, request.gapTargetPct ?? DEFAULT_GAP_TARGET_PCT, inputs.site.currency),
       seconds: (performance.now() - started) / 1000,
       workers: workers <= 1 ? 1 : jobs.length > 1 ? Math.min(workers, jobs.length) : onDp ? 1 : workers,
     },

@@ -5,6 +5,7 @@
 import type { AlignedInputs } from '../inputs/align-inputs';
 import type { SteadyCycle } from '../steady/solve-steady-cycle';
 import type { TerminalChoice } from '../terminal/terminal-choice';
+import { cyclingCheck, type CyclingCheck } from '../plan/cycling-check';
 import { runClosedLoop, type ClosedLoopRun } from './run-closed-loop';
 
 export interface StudyJobContext {
@@ -28,11 +29,16 @@ export interface StudyJob {
   readonly chunk?: { readonly from: number; readonly stopAt: number; readonly initialEnergyKwh: number };
 }
 
-/** A run without its series (they stay in the thread that computed them). */
+/** A run without its series (they stay in the thread that computed them), with what the study needs of them. */
 export type StudyJobResult = Omit<
   ClosedLoopRun,
   'chargeKw' | 'dischargeKw' | 'gridImportKw' | 'gridExportKw' | 'socKwh' | 'plans'
->;
+> & {
+  /** Energy at the end of the period, kWh (NaN when the run failed). */
+  readonly endEnergyKwh: number;
+  /** Equivalent full cycles per local day against the battery's rating (null when the run failed). */
+  readonly cycling: CyclingCheck | null;
+};
 
 /** The closed-loop run of a job, series included. */
 export function runJob(context: StudyJobContext, job: StudyJob): ClosedLoopRun {
@@ -54,11 +60,17 @@ export function runJob(context: StudyJobContext, job: StudyJob): ClosedLoopRun {
   });
 }
 
-export function withoutSeries(run: ClosedLoopRun): StudyJobResult {
-  const { chargeKw: _c, dischargeKw: _d, gridImportKw: _m, gridExportKw: _x, socKwh: _e, plans: _p, ...figures } = run;
-  return figures;
+/** The figures of a run over the whole period of `context`, without its series. */
+export function withoutSeries(context: StudyJobContext, run: ClosedLoopRun): StudyJobResult {
+  const { chargeKw: _c, dischargeKw, gridImportKw: _m, gridExportKw: _x, socKwh, plans: _p, ...figures } = run;
+  const optimal = run.status === 'optimal';
+  return {
+    ...figures,
+    endEnergyKwh: optimal ? socKwh[socKwh.length - 1]! : NaN,
+    cycling: optimal ? cyclingCheck(context.inputs, context.from, dischargeKw) : null,
+  };
 }
 
 export function runStudyJob(context: StudyJobContext, job: StudyJob): StudyJobResult {
-  return withoutSeries(runJob(context, job));
+  return withoutSeries(context, runJob(context, job));
 }

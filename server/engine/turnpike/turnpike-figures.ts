@@ -73,3 +73,53 @@ export function commitWindowSteps(
   }
   return n;
 }
+
+/** One stretch of steps outside the band between the entry arc and the leaving arc. */
+export interface ExcursionStretch {
+  /** First step of the stretch (index into the plan's steps). */
+  readonly start: number;
+  readonly steps: number;
+  /** Largest distance in the stretch, in the units of `distance`. */
+  readonly largestDistance: number;
+}
+
+/** Excursions (DESIGN section 2): stretches outside the band between the entry arc and the leaving arc. */
+export interface Excursions {
+  readonly count: number;
+  /** Steps outside the band in all of them. */
+  readonly steps: number;
+  /** The largest distance in any of them (0 when there is none), in the units of `distance`. */
+  readonly largestDistance: number;
+  readonly stretches: readonly ExcursionStretch[];
+}
+
+/**
+ * Excursions of arc figures: between the first and the last step inside the
+ * band, every maximal run of steps outside it. Together with the entry and
+ * leaving arcs they account for every step outside the band.
+ */
+export function excursionFigures(fig: ArcFigures): Excursions {
+  const n = fig.distance.length;
+  const stretches: ExcursionStretch[] = [];
+  const last = n - 1 - fig.leavingArcSteps;
+  let current: { start: number; steps: number; largestDistance: number } | null = null;
+  for (let t = fig.entryArcSteps; t <= last; t++) {
+    const d = fig.distance[t]!;
+    if (d <= fig.band + 1e-12) {
+      if (current) stretches.push(current);
+      current = null;
+    } else if (current) {
+      current.steps++;
+      current.largestDistance = Math.max(current.largestDistance, d);
+    } else {
+      current = { start: t, steps: 1, largestDistance: d };
+    }
+  }
+  if (current) stretches.push(current);
+  return {
+    count: stretches.length,
+    steps: stretches.reduce((sum, s) => sum + s.steps, 0),
+    largestDistance: stretches.reduce((max, s) => Math.max(max, s.largestDistance), 0),
+    stretches,
+  };
+}

@@ -22,7 +22,12 @@ export interface ReferenceLp {
   readonly rows: readonly Row[];
 }
 
-export function referenceLp(p: DispatchProblem): ReferenceLp {
+export interface ReferenceOptions {
+  /** Energy (kWh) handed to the battery at the end of step `step`: added to the right side of its SoC row. */
+  readonly inject?: { readonly step: number; readonly kwh: number };
+}
+
+export function referenceLp(p: DispatchProblem, options: ReferenceOptions = {}): ReferenceLp {
   const b = p.battery;
   const dt = p.stepHours;
   const n = p.priceImport.length;
@@ -50,8 +55,8 @@ export function referenceLp(p: DispatchProblem): ReferenceLp {
         [`c${t}`, -b.efficiencyCharge * dt],
         [`d${t}`, dt / b.efficiencyDischarge],
       ],
-      lo: 0,
-      hi: 0,
+      lo: options.inject?.step === t ? options.inject.kwh : 0,
+      hi: options.inject?.step === t ? options.inject.kwh : 0,
     });
     const net = p.loadKw[t]! - p.generationKw[t]!;
     rows.push({
