@@ -25,6 +25,10 @@ import { plansRouter } from './plans/plans.routes';
 import { studiesRouter } from './studies/studies.routes';
 import { jobsRouter } from './jobs/jobs.routes';
 import { horizonPreviewRouter } from './horizon-preview/horizon-preview.routes';
+import { tokensRouter } from './tokens/tokens.routes';
+import { tokenAuthentication } from './tokens/token-auth';
+import { unlessToken } from './tokens/token-request';
+import { refuseTokenOnSessionOnlyRoutes } from './tokens/session-only-routes';
 
 const clientDir = path.resolve(import.meta.dirname, '..', 'dist', 'client');
 
@@ -45,6 +49,7 @@ function apiRouters(): Router[] {
     horizonPreviewRouter,
     studiesRouter,
     jobsRouter,
+    tokensRouter,
   ];
 }
 
@@ -79,12 +84,15 @@ export function createApp(config: AppConfig) {
     res.setHeader('Cache-Control', 'no-store');
     next();
   });
-  // CSRF: state-changing requests must come from our origin (server/auth/origin-check.ts).
-  api.use(requireSameOrigin(config.appOrigin));
+  // `Authorization: Bearer <token>` → req.user; a bad token is a 401 here (server/tokens/token-auth.ts).
+  api.use(tokenAuthentication(config));
+  // CSRF: state-changing cookie requests must come from our origin (server/auth/origin-check.ts).
+  api.use(unlessToken(requireSameOrigin(config.appOrigin)));
   api.use(express.json({ limit: '1mb' }));
   // Session → req.user, then the access table decides (server/auth/access-table.ts).
-  api.use(loadSession(config));
+  api.use(unlessToken(loadSession(config)));
   api.use(accessControl(() => listRoutes(api, '/api')));
+  api.use(refuseTokenOnSessionOnlyRoutes);
   for (const router of apiRouters()) api.use(router);
   api.use((req, _res, next) => next(new AppError('not_found', `No API route ${req.method} ${req.path}.`, 404)));
   app.use('/api', api);

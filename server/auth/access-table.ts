@@ -74,6 +74,15 @@ export const accessTable = {
   'GET /api/batteries/:id/plan-defaults': readers, // the plan form's proposed initial SoC and horizon
   'GET /api/jobs': readers, // background jobs with progress (the home page's attention list)
 
+  // API tokens: one's own (the secret is shown once); admins also manage service users and their tokens.
+  // Creating tokens needs a browser session (server/tokens/session-only-routes.ts).
+  'GET /api/tokens': signedIn,
+  'POST /api/tokens': signedIn,
+  'DELETE /api/tokens/:id': signedIn, // one's own; an admin may revoke anyone's
+  'GET /api/service-users': admins,
+  'POST /api/service-users': admins, // a name and a role; no password, no sign-in
+  'POST /api/service-users/:id/tokens': admins,
+
   // Audit trail and mail outbox (admin only)
   'GET /api/audit': admins,
   'GET /api/mail/outbox': admins,
