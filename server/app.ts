@@ -29,6 +29,7 @@ import { tokensRouter } from './tokens/tokens.routes';
 import { tokenAuthentication } from './tokens/token-auth';
 import { unlessToken } from './tokens/token-request';
 import { refuseTokenOnSessionOnlyRoutes } from './tokens/session-only-routes';
+import { honourIdempotencyKey } from './idempotency/idempotency-key';
 
 const clientDir = path.resolve(import.meta.dirname, '..', 'dist', 'client');
 
@@ -93,6 +94,8 @@ export function createApp(config: AppConfig) {
   api.use(unlessToken(loadSession(config)));
   api.use(accessControl(() => listRoutes(api, '/api')));
   api.use(refuseTokenOnSessionOnlyRoutes);
+  // A retried POST with the same Idempotency-Key gets the first answer again (uploads: in their route).
+  api.use(honourIdempotencyKey());
   for (const router of apiRouters()) api.use(router);
   api.use((req, _res, next) => next(new AppError('not_found', `No API route ${req.method} ${req.path}.`, 404)));
   app.use('/api', api);

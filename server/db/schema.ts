@@ -14,3 +14,4 @@ export * from '../plans/plans.schema';
 export * from '../studies/studies.schema';
 export * from '../sign-off/sign-off.schema';
 export * from '../tokens/tokens.schema';
+export * from '../idempotency/idempotency.schema';
