@@ -26,6 +26,7 @@ import { studiesRouter } from './studies/studies.routes';
 import { jobsRouter } from './jobs/jobs.routes';
 import { horizonPreviewRouter } from './horizon-preview/horizon-preview.routes';
 import { tokensRouter } from './tokens/tokens.routes';
+import { openApiRouter } from './openapi/openapi.routes';
 import { tokenAuthentication } from './tokens/token-auth';
 import { unlessToken } from './tokens/token-request';
 import { refuseTokenOnSessionOnlyRoutes } from './tokens/session-only-routes';
@@ -51,6 +52,7 @@ function apiRouters(): Router[] {
     studiesRouter,
     jobsRouter,
     tokensRouter,
+    openApiRouter,
   ];
 }
 

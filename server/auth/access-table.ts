@@ -20,6 +20,7 @@ const admins = permissions['users.manage'];
 
 export const accessTable = {
   'GET /api/health': 'public',
+  'GET /api/openapi.json': signedIn, // the OpenAPI 3.1 description of every route in this table
 
   // Sign-in and the session
   'POST /api/auth/sign-in': 'public',

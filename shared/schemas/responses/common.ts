@@ -1,0 +1,17 @@
+/** Small pieces the response schemas share: instants, ids, the error body. */
+import { z } from 'zod';
+
+/** An RFC 3339 instant as the API writes it (`toISOString()`, UTC). */
+export const instant = z.iso.datetime({ offset: true });
+export const uuid = z.uuid();
+
+/** Every error answer: `{error, issues?}` (issues name a line or a field). */
+export const errorSchema = z
+  .looseObject({
+    error: z.string(),
+    issues: z.array(z.looseObject({ line: z.number().optional(), path: z.string().optional(), message: z.string() })).optional(),
+  })
+  .meta({ id: 'Error', description: 'What went wrong, where, and how to fix it.' });
+
+export const healthSchema = z.object({ ok: z.boolean(), db: z.enum(['up', 'down']) }).meta({ id: 'Health' });
+export const messageSchema = z.object({ message: z.string() }).meta({ id: 'Message' });
