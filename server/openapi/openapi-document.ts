@@ -39,7 +39,8 @@ function operationId(rule: AccessRule): string {
 }
 
 function errorStatuses(rule: AccessRule, spec: OperationSpec): number[] {
-  const statuses = new Set(spec.errors ?? []);
+  // Any request can carry a token in its URL (400); any token request can pass its rate limit (429).
+  const statuses = new Set([400, 429, ...(spec.errors ?? [])]);
   if (rule.access !== 'public') [401, 403].forEach((s) => statuses.add(s));
   if (rule.path.includes('/:')) statuses.add(404);
   if (spec.body || spec.form || spec.query) statuses.add(422);

@@ -10,6 +10,7 @@ import { getPool } from '../../server/db/client';
 import { createTestApp } from '../support/test-app';
 import { signInAs } from '../support/auth';
 import { bearer, createToken, secretOf } from '../support/tokens';
+import { expectMatchesOpenApi } from '../support/openapi-check';
 
 const app = createTestApp();
 const dayMs = 86_400_000;
@@ -25,6 +26,7 @@ describe('POST /api/tokens', () => {
     const before = Date.now();
     const response = await planner.post('/api/tokens').send({ name: 'nightly forecast push' });
     expect(response.status, JSON.stringify(response.body)).toBe(201);
+    expectMatchesOpenApi(response);
     expect(Object.keys(response.body).sort()).toEqual(['expiresAt', 'id', 'name', 'token']);
     expect(response.body.name).toBe('nightly forecast push');
     // 32 hex digits of the id, then 43 base64url characters = 258 bits, of which 256 are random [D].
@@ -83,6 +85,7 @@ describe('GET /api/tokens', () => {
     expect((await bearer(app, created.token).get('/api/sites')).status).toBe(200);
     const response = await planner.get('/api/tokens');
     expect(response.status).toBe(200);
+    expectMatchesOpenApi(response);
     expect(response.body).toHaveLength(1);
     const [listed] = response.body;
     expect(Object.keys(listed).sort()).toEqual(['createdAt', 'expiresAt', 'id', 'lastUsedAt', 'lastUsedIp', 'name']);

@@ -15,3 +15,10 @@ export const errorSchema = z
 
 export const healthSchema = z.object({ ok: z.boolean(), db: z.enum(['up', 'down']) }).meta({ id: 'Health' });
 export const messageSchema = z.object({ message: z.string() }).meta({ id: 'Message' });
+
+/**
+ * `schema | null` for a schema with its own id. Written as a union because the generator
+ * renders `.nullable()` of a referenced schema as the bare reference (null lost); a
+ * union becomes `anyOf: [{$ref}, {type: 'null'}]`.
+ */
+export const orNull = <T extends z.ZodType>(schema: T) => z.union([schema, z.null()]);

@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { planStatuses, type Plan, type PlanCreated, type PlanDefaults, type PlanInputs, type PlanResults } from '../plan';
 import { steadyDaysValues } from '../steady-days';
-import { instant, uuid } from './common';
+import { instant, orNull, uuid } from './common';
 import { jobProgressSchema } from './job-responses';
 import type { SameType } from './same-type';
 
@@ -57,8 +57,8 @@ export const initialSocSourceSchema = z.enum(['request', 'last-approved-plan', '
 
 export const runProfilesSchema = z.object({
   price: profileRefSchema,
-  load: profileRefSchema.nullable(),
-  generation: profileRefSchema.nullable(),
+  load: orNull(profileRefSchema),
+  generation: orNull(profileRefSchema),
 });
 
 export const planInputsSchema = z
@@ -165,7 +165,7 @@ export const planSchema = z
     approvedAt: instant.nullable(),
     method: z.enum(['dp', 'lp']).nullable(),
     errorMessage: z.string().nullable(),
-    job: jobProgressSchema.nullable(),
+    job: orNull(jobProgressSchema),
     inputs: planInputsSchema.optional().meta({ description: 'Only in GET /api/plans/:id.' }),
     results: planResultsSchema.nullable().optional().meta({ description: 'Only in GET /api/plans/:id; null until computed.' }),
     headline: z

@@ -2,7 +2,7 @@ import { z } from 'zod';
 import { jobStates } from '../job';
 import { steadyDaysValues } from '../steady-days';
 import type { Study, StudyCreated, StudyInputs, StudyResults } from '../study';
-import { instant, uuid } from './common';
+import { instant, orNull, uuid } from './common';
 import { jobProgressSchema } from './job-responses';
 import {
   batterySnapshotSchema,
@@ -61,7 +61,7 @@ export const studyResultsSchema = z
         method,
       }),
     ),
-    recommendation: recommendationSchema.nullable(),
+    recommendation: orNull(recommendationSchema),
     targetGapPct: z.number(),
     notes: z.array(z.string()),
     seconds: z.number(),
@@ -86,7 +86,7 @@ export const studySchema = z
     status: z.enum(jobStates),
     method: method.nullable(),
     errorMessage: z.string().nullable(),
-    job: jobProgressSchema.nullable(),
+    job: orNull(jobProgressSchema),
     inputs: studyInputsSchema.optional().meta({ description: 'Only in GET /api/studies/:id.' }),
     results: studyResultsSchema.nullable().optional().meta({ description: 'Only in GET /api/studies/:id.' }),
     recommendation: recommendationSchema
