@@ -4,8 +4,8 @@
  * 422 with every problem (up to the reader's cap) and stores nothing; an
  * accepted one is stored with its original bytes, SHA-256 and uploader, and its
  * audit row, in one transaction. The same file sent again for the same site and kind,
- * read the same way, stores nothing new: the existing profile is the answer, so a
- * pipeline that retries a push makes no duplicates.
+ * read the same way and under the same name, stores nothing new: the existing profile is
+ * the answer, so a pipeline that retries a push makes no duplicates.
  */
 import { createHash } from 'node:crypto';
 import { decodeProfileBytes, parseProfileCsv } from '@shared/profile-csv';
@@ -96,7 +96,14 @@ export async function uploadProfile(
   const sha256 = createHash('sha256').update(file.buffer).digest('hex');
   const name = options.name ?? filename.replace(/\.[^.]+$/, '');
   return getDb().transaction(async (tx) => {
-    const identity = { siteId, kind: options.kind, sha256, sourceUnit: options.unit, intervalEnding: options.intervalEnding };
+    const identity = {
+      siteId,
+      kind: options.kind,
+      sha256,
+      sourceUnit: options.unit,
+      intervalEnding: options.intervalEnding,
+      name,
+    };
     const same = await repo.findSameUpload(tx, identity);
     // A profile that needed filled gaps answers only a request that allows filling.
     if (same && (same.filledCount === 0 || options.fillGaps)) {

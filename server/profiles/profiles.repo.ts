@@ -88,11 +88,12 @@ export interface UploadIdentity {
   sha256: string;
   sourceUnit: string;
   intervalEnding: boolean;
+  name: string;
 }
 
 /**
- * The profile an identical upload already made: the same bytes read the same way for
- * the same site and kind. Takes a transaction-scoped lock on that identity first, so
+ * The profile an identical upload already made: the same bytes, read the same way, under
+ * the same name, for the same site and kind (a retried push). Takes a transaction-scoped lock on that identity first, so
  * two simultaneous identical uploads store one profile, not two.
  */
 export async function findSameUpload(tx: DbOrTx, u: UploadIdentity) {
@@ -107,6 +108,7 @@ export async function findSameUpload(tx: DbOrTx, u: UploadIdentity) {
         eq(profiles.originalSha256, u.sha256),
         eq(profiles.sourceUnit, u.sourceUnit),
         eq(profiles.intervalEnding, u.intervalEnding),
+        eq(profiles.name, u.name),
       ),
     )
     .orderBy(profiles.uploadedAt)

@@ -1,7 +1,7 @@
 /**
  * A pipeline that pushes the same file twice (a retry after a lost answer) gets the
- * profile already stored, 200 instead of 201, and no duplicate; a different file, or
- * the same bytes read differently (another unit), is a new profile.
+ * profile already stored, 200 instead of 201, and no duplicate; a different file, the
+ * same bytes read differently (another unit), or under another name, is a new profile.
  * Identity by SHA-256 of the bytes [S] FIPS 180-4; concurrency by PostgreSQL advisory
  * locks [S] PostgreSQL manual, "Advisory Locks".
  */
@@ -29,7 +29,8 @@ describe('re-sending the same file', () => {
     const site = await createSite(planner);
     const first = await upload(planner, site.id, sample(WEEK), WEEK);
     expect(first.status).toBe(201);
-    const again = await upload(planner, site.id, sample(WEEK), 'renamed.csv', { name: 'another name' });
+    // The name comes from the file name when the form gives none, as a retried push sends it.
+    const again = await upload(planner, site.id, sample(WEEK), WEEK);
     expect(again.status).toBe(200);
     expect(again.body).toEqual(first.body);
     expect(await profileCount(site.id)).toBe(1);
@@ -37,16 +38,17 @@ describe('re-sending the same file', () => {
     expect(audit.rows.map((r) => r.action)).toEqual(['profile.upload', 'profile.upload_repeated']);
   });
 
-  it('is a new profile for another site, another kind, another unit or other bytes', async () => {
+  it('is a new profile for another site, kind, unit, name or other bytes', async () => {
     const site = await createSite(planner);
     const other = await createSite(planner);
     expect((await upload(planner, site.id, sample(WEEK), WEEK)).status).toBe(201);
     expect((await upload(planner, other.id, sample(WEEK), WEEK)).status).toBe(201);
     expect((await upload(planner, site.id, sample(WEEK), WEEK, { unit: 'currency/kWh' })).status).toBe(201);
     expect((await upload(planner, site.id, sample(WEEK), WEEK, { kind: 'load', unit: 'kW' })).status).toBe(201);
+    expect((await upload(planner, site.id, sample(WEEK), WEEK, { name: 'Scenario B' })).status).toBe(201);
     const edited = Buffer.concat([sample(WEEK), Buffer.from('\n')]);
     expect((await upload(planner, site.id, edited, WEEK)).status).toBe(201);
-    expect(await profileCount(site.id)).toBe(4);
+    expect(await profileCount(site.id)).toBe(5);
   });
 
   it('five times at once stores one profile: one 201 and four 200 with the same id', async () => {

@@ -70,7 +70,7 @@ export const siteProfileOperations = {
     summary: 'Upload a price, load or generation profile as CSV.',
     description:
       'Multipart form with the file and its options. A rejected file answers 422 with every problem by line and stores nothing. ' +
-      'The same file sent again for the same site and kind, read the same way, answers 200 with the profile already stored.',
+      'The same file sent again for the same site and kind, read the same way and under the same name, answers 200 with the profile already stored.',
     params: uuidParams,
     form: profileUploadFormSchema,
     responses: {
