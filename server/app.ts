@@ -26,6 +26,12 @@ import { studiesRouter } from './studies/studies.routes';
 import { jobsRouter } from './jobs/jobs.routes';
 import { horizonPreviewRouter } from './horizon-preview/horizon-preview.routes';
 import { registerJobKinds } from './job-kinds';
+import { tokensRouter } from './tokens/tokens.routes';
+import { openApiRouter } from './openapi/openapi.routes';
+import { tokenAuthentication } from './tokens/token-auth';
+import { unlessToken } from './tokens/token-request';
+import { refuseTokenOnSessionOnlyRoutes } from './tokens/session-only-routes';
+import { honourIdempotencyKey } from './idempotency/idempotency-key';
 
 const clientDir = path.resolve(import.meta.dirname, '..', 'dist', 'client');
 
@@ -46,6 +52,8 @@ function apiRouters(): Router[] {
     horizonPreviewRouter,
     studiesRouter,
     jobsRouter,
+    tokensRouter,
+    openApiRouter,
   ];
 }
 
@@ -82,12 +90,17 @@ export function createApp(config: AppConfig) {
     res.setHeader('Cache-Control', 'no-store');
     next();
   });
-  // CSRF: state-changing requests must come from our origin (server/auth/origin-check.ts).
-  api.use(requireSameOrigin(config.appOrigin));
+  // `Authorization: Bearer <token>` → req.user; a bad token is a 401 here (server/tokens/token-auth.ts).
+  api.use(tokenAuthentication(config));
+  // CSRF: state-changing cookie requests must come from our origin (server/auth/origin-check.ts).
+  api.use(unlessToken(requireSameOrigin(config.appOrigin)));
   api.use(express.json({ limit: '1mb' }));
   // Session → req.user, then the access table decides (server/auth/access-table.ts).
-  api.use(loadSession(config));
+  api.use(unlessToken(loadSession(config)));
   api.use(accessControl(() => listRoutes(api, '/api')));
+  api.use(refuseTokenOnSessionOnlyRoutes);
+  // A retried POST with the same Idempotency-Key gets the first answer again (uploads: in their route).
+  api.use(honourIdempotencyKey());
   for (const router of apiRouters()) api.use(router);
   api.use((req, _res, next) => next(new AppError('not_found', `No API route ${req.method} ${req.path}.`, 404)));
   app.use('/api', api);

@@ -18,6 +18,10 @@ const envSchema = z.object({
   /** Start the local fake SMTP server (development, demo and tests). */
   FAKE_SMTP: z.enum(['true', 'false']).default('true'),
   LOG_LEVEL: z.enum(['silent', 'error', 'info', 'debug']).default('info'),
+  /** Requests one API token may make per minute (server/tokens/token-auth.ts). */
+  API_TOKEN_REQUESTS_PER_MINUTE: z.coerce.number().int().min(1).max(1_000_000).default(600),
+  /** Requests with an invalid API token one client address may make per 15 minutes. */
+  API_TOKEN_FAILURES_PER_ADDRESS: z.coerce.number().int().min(1).max(1_000_000).default(30),
 });
 
 export type AppConfig = z.infer<typeof envSchema> & { appOrigin: string };

@@ -1,6 +1,7 @@
 import { and, desc, eq, gte, ilike, lt, lte, type SQL } from 'drizzle-orm';
 import type { DbOrTx } from '../db/client';
 import { auditEvents } from './audit.schema';
+import { currentAuditVia } from './audit-via';
 
 export interface AuditInput {
   actorId?: string | null;
@@ -12,8 +13,12 @@ export interface AuditInput {
   details?: Record<string, unknown>;
 }
 
-/** Appends one audit event; pass the transaction so the event commits with the change it records. */
+/**
+ * Appends one audit event; pass the transaction so the event commits with the change it records.
+ * A request made with an API token adds the token's name and id (server/audit/audit-via.ts).
+ */
 export async function insertAuditEvent(db: DbOrTx, event: AuditInput): Promise<void> {
+  const via = currentAuditVia();
   await db.insert(auditEvents).values({
     actorId: event.actorId ?? null,
     actorEmail: event.actorEmail ?? null,
@@ -21,6 +26,8 @@ export async function insertAuditEvent(db: DbOrTx, event: AuditInput): Promise<v
     entityType: event.entityType ?? null,
     entityId: event.entityId ?? null,
     ip: event.ip ?? null,
+    via: via?.label ?? null,
+    viaTokenId: via?.tokenId ?? null,
     details: event.details ?? {},
   });
 }

@@ -12,6 +12,9 @@ export const auditEvents = pgTable(
     entityType: text('entity_type'),
     entityId: text('entity_id'),
     ip: text('ip'),
+    /** How the actor reached us when not by a browser session, e.g. `token nightly push`. */
+    via: text('via'),
+    viaTokenId: text('via_token_id'),
     details: jsonb('details').$type<Record<string, unknown>>().notNull().default({}),
   },
   (t) => [index('audit_events_at_idx').on(t.at), index('audit_events_action_idx').on(t.action)],

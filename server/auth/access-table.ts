@@ -20,6 +20,7 @@ const admins = permissions['users.manage'];
 
 export const accessTable = {
   'GET /api/health': 'public',
+  'GET /api/openapi.json': signedIn, // the OpenAPI 3.1 description of every route in this table
 
   // Sign-in and the session
   'POST /api/auth/sign-in': 'public',
@@ -73,6 +74,15 @@ export const accessTable = {
   'GET /api/studies/:id': readers,
   'GET /api/batteries/:id/plan-defaults': readers, // the plan form's proposed initial SoC and horizon
   'GET /api/jobs': readers, // background jobs with progress (the home page's attention list)
+
+  // API tokens: one's own (the secret is shown once); admins also manage service users and their tokens.
+  // Creating tokens needs a browser session (server/tokens/session-only-routes.ts).
+  'GET /api/tokens': signedIn,
+  'POST /api/tokens': signedIn,
+  'DELETE /api/tokens/:id': signedIn, // one's own; an admin may revoke anyone's
+  'GET /api/service-users': admins,
+  'POST /api/service-users': admins, // a name and a role; no password, no sign-in
+  'POST /api/service-users/:id/tokens': admins,
 
   // Audit trail and mail outbox (admin only)
   'GET /api/audit': admins,

@@ -133,7 +133,8 @@ export async function requestPasswordReset(email: string, ip: string, appOrigin:
     // Requests count as "failures" so they are rate limited; none of them is a success.
     await repo.recordAttempt(tx, 'reset-request', email, ip, false);
     const user = await repo.findUserByEmail(tx, email);
-    const send = !!user && !user.disabled && recent.byEmail < limits.perAccount;
+    // Service users never get a password, so never a reset link (server/tokens/service-users.service.ts).
+    const send = !!user && !user.disabled && user.kind === 'person' && recent.byEmail < limits.perAccount;
     await recordAudit(
       tx,
       { actorId: user?.id ?? null, actorEmail: email, ip },

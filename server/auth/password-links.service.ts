@@ -32,6 +32,7 @@ function usableLink(row: LinkRow | undefined): LinkRow {
     throw new AppError('link_expired', `This link expired at ${row.link.expiresAt.toISOString()}. Ask for a new one.`, 410);
   }
   if (row.user.disabled) throw new AppError('account_disabled', 'This account is disabled. Ask an administrator.', 410);
+  if (row.user.kind === 'service') throw new AppError('link_invalid', 'Service users have no password.', 400);
   return row;
 }
 

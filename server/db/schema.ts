@@ -13,3 +13,5 @@ export * from '../jobs/jobs.schema';
 export * from '../plans/plans.schema';
 export * from '../studies/studies.schema';
 export * from '../sign-off/sign-off.schema';
+export * from '../tokens/tokens.schema';
+export * from '../idempotency/idempotency.schema';

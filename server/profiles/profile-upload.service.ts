@@ -3,7 +3,9 @@
  * reader the browser preview used and is the authority. A rejected file answers
  * 422 with every problem (up to the reader's cap) and stores nothing; an
  * accepted one is stored with its original bytes, SHA-256 and uploader, and its
- * audit row, in one transaction.
+ * audit row, in one transaction. The same file sent again for the same site and kind,
+ * read the same way and under the same name, stores nothing new: the existing profile is
+ * the answer, so a pipeline that retries a push makes no duplicates.
  */
 import { createHash } from 'node:crypto';
 import { decodeProfileBytes, parseProfileCsv } from '@shared/profile-csv';
@@ -65,7 +67,7 @@ export async function uploadProfile(
   file: UploadedFile | undefined,
   options: ProfileUploadOptions & { name?: string | undefined },
   actor: Actor,
-): Promise<string> {
+): Promise<{ id: string; created: boolean }> {
   const site = await requireSite(getDb(), siteId);
   if (!file) {
     const message = 'No file was attached: send the CSV in the form field "file".';
@@ -94,6 +96,25 @@ export async function uploadProfile(
   const sha256 = createHash('sha256').update(file.buffer).digest('hex');
   const name = options.name ?? filename.replace(/\.[^.]+$/, '');
   return getDb().transaction(async (tx) => {
+    const identity = {
+      siteId,
+      kind: options.kind,
+      sha256,
+      sourceUnit: options.unit,
+      intervalEnding: options.intervalEnding,
+      name,
+    };
+    const same = await repo.findSameUpload(tx, identity);
+    // A profile that needed filled gaps answers only a request that allows filling.
+    if (same && (same.filledCount === 0 || options.fillGaps)) {
+      await recordAudit(tx, actor, {
+        action: 'profile.upload_repeated',
+        entityType: 'profile',
+        entityId: same.id,
+        details: { siteId, kind: options.kind, filename, sha256 },
+      });
+      return { id: same.id, created: false };
+    }
     const id = await repo.insertProfile(tx, {
       siteId,
       kind: options.kind,
@@ -130,6 +151,6 @@ export async function uploadProfile(
         filledCount: profile.filledIndexes.length,
       },
     });
-    return id;
+    return { id, created: true };
   });
 }

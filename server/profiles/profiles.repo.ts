@@ -91,3 +91,37 @@ export async function deleteProfile(db: DbOrTx, id: string): Promise<boolean> {
   const rows = await db.delete(profiles).where(eq(profiles.id, id)).returning({ id: profiles.id });
   return rows.length > 0;
 }
+
+export interface UploadIdentity {
+  siteId: string;
+  kind: 'price' | 'load' | 'generation';
+  sha256: string;
+  sourceUnit: string;
+  intervalEnding: boolean;
+  name: string;
+}
+
+/**
+ * The profile an identical upload already made: the same bytes, read the same way, under
+ * the same name, for the same site and kind (a retried push). Takes a transaction-scoped lock on that identity first, so
+ * two simultaneous identical uploads store one profile, not two.
+ */
+export async function findSameUpload(tx: DbOrTx, u: UploadIdentity) {
+  await tx.execute(sql`select pg_advisory_xact_lock(hashtext(${`profile-upload:${u.siteId}:${u.kind}:${u.sha256}`}))`);
+  const [row] = await tx
+    .select({ id: profiles.id, filledCount: sql<number>`cardinality(${profiles.filledIndexes})` })
+    .from(profiles)
+    .where(
+      and(
+        eq(profiles.siteId, u.siteId),
+        eq(profiles.kind, u.kind),
+        eq(profiles.originalSha256, u.sha256),
+        eq(profiles.sourceUnit, u.sourceUnit),
+        eq(profiles.intervalEnding, u.intervalEnding),
+        eq(profiles.name, u.name),
+      ),
+    )
+    .orderBy(profiles.uploadedAt)
+    .limit(1);
+  return row;
+}

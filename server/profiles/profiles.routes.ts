@@ -8,6 +8,7 @@ import { profileListQuerySchema, profileNameSchema, profileWindowQuerySchema } f
 import { profileUploadOptionsSchema } from '@shared/schemas/profile-upload';
 import { AppError } from '../http/app-error';
 import { actorOf, pathId } from '../http/request-context';
+import { honourIdempotencyKey } from '../idempotency/idempotency-key';
 import { receiveProfileUpload } from './profile-upload.middleware';
 import { uploadProfile } from './profile-upload.service';
 import * as service from './profiles.service';
@@ -29,11 +30,12 @@ function parseUploadFields(body: unknown) {
   });
 }
 
-profilesRouter.post('/sites/:id/profiles', receiveProfileUpload, async (req, res) => {
+profilesRouter.post('/sites/:id/profiles', receiveProfileUpload, honourIdempotencyKey({ forUploads: true }), async (req, res) => {
   const siteId = pathId(req, 'site');
   const options = parseUploadFields(req.body ?? {});
-  const id = await uploadProfile(siteId, req.file, options, actorOf(req));
-  res.status(201).json(await service.getProfileSummary(id));
+  const { id, created } = await uploadProfile(siteId, req.file, options, actorOf(req));
+  // 200 when the same file was already stored (a retried push): the existing profile, no duplicate.
+  res.status(created ? 201 : 200).json(await service.getProfileSummary(id));
 });
 
 profilesRouter.get('/sites/:id/profiles', async (req, res) => {

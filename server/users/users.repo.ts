@@ -17,8 +17,13 @@ export async function findUserById(db: DbOrTx, id: string, forUpdate = false): P
   return row;
 }
 
+/** People, not service users (those are listed with their tokens, server/tokens). */
 export async function listUsers(db: DbOrTx): Promise<UserRow[]> {
-  return db.select().from(users).orderBy(asc(users.email));
+  return db.select().from(users).where(eq(users.kind, 'person')).orderBy(asc(users.email));
+}
+
+export async function listServiceUsers(db: DbOrTx): Promise<UserRow[]> {
+  return db.select().from(users).where(eq(users.kind, 'service')).orderBy(asc(users.name));
 }
 
 /** Inserts a user; returns undefined when the e-mail is already taken. */
@@ -39,13 +44,14 @@ export async function updateUser(db: DbOrTx, id: string, patch: UserPatch): Prom
 /**
  * Locks every active admin row, always in id order so two transactions cannot deadlock.
  * Two admins demoting each other at once then queue here, and the second sees the
- * first's change, so the last admin cannot disappear in a race.
+ * first's change, so the last admin cannot disappear in a race. Service users do not
+ * count: they cannot sign in to manage users.
  */
 export async function lockActiveAdmins(tx: DbOrTx): Promise<string[]> {
   const rows = await tx
     .select({ id: users.id })
     .from(users)
-    .where(and(eq(users.role, 'admin'), eq(users.disabled, false)))
+    .where(and(eq(users.role, 'admin'), eq(users.disabled, false), eq(users.kind, 'person')))
     .orderBy(asc(users.id))
     .for('update');
   return rows.map((r) => r.id);

@@ -13,6 +13,7 @@ import { passwordLinkMail, passwordLinkUrl } from '../auth/password-link-mail';
 import { endUserSessions } from '../auth/session';
 import { hashPassword } from '../auth/password-hash';
 import { assertAcceptablePassword } from '../auth/password-policy';
+import { revokeAllTokensOf } from '../tokens/tokens.service';
 import * as repo from './users.repo';
 import type { UserRow } from './users.schema';
 
@@ -62,6 +63,7 @@ export async function resendInvitation(id: string, admin: Actor): Promise<Invite
   const { user, token } = await getDb().transaction(async (tx) => {
     const row = await repo.findUserById(tx, id, true);
     if (!row) throw notFound('The user');
+    if (row.kind === 'service') throw conflict(`${row.name} is a service user: it never signs in, so it gets no invitation.`);
     if (row.disabled) throw conflict(`${row.email} is disabled: enable the account before inviting again.`);
     if (row.passwordHash)
       throw conflict(`${row.email} has already set a password; they can use "Forgot password" on the sign-in page.`);
@@ -93,6 +95,11 @@ export async function updateUser(id: string, patch: repo.UserPatch, admin: Actor
     if (patch.role && patch.role !== row.role) await audit('user.role_changed', { from: row.role, to: patch.role });
     if (patch.disabled !== undefined && patch.disabled !== row.disabled)
       await audit(patch.disabled ? 'user.disabled' : 'user.enabled', {});
+    // A disabled account's API tokens are revoked with it: enabling it again does not revive them.
+    if (patch.disabled === true) {
+      const revoked = await revokeAllTokensOf(tx, id, admin.id, 'user disabled');
+      if (revoked.length > 0) await audit('user.tokens_revoked', { tokenIds: revoked });
+    }
     if (patch.name && patch.name !== row.name) await audit('user.renamed', { from: row.name, to: patch.name });
     return next;
   });

@@ -10,6 +10,9 @@ export const auditEventSchema = z.object({
   entityType: z.string().nullable(),
   entityId: z.string().nullable(),
   ip: z.string().nullable(),
+  /** `token <name>` when the action came through an API token, else null. */
+  via: z.string().nullable(),
+  viaTokenId: z.string().nullable(),
   details: z.record(z.string(), z.unknown()),
 });
 export type AuditEvent = z.infer<typeof auditEventSchema>;

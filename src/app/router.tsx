@@ -46,6 +46,8 @@ const router = createBrowserRouter([
     children: [
       { index: true, element: <HomeRoute /> },
       { path: 'account/password', element: <ChangePasswordPage /> },
+      { path: 'account/tokens', ...lazyPage(() => import('@/features/tokens/components/tokens-page').then((m) => m.TokensPage)) },
+      { path: 'api-docs', ...lazyPage(() => import('@/features/api-docs/components/api-docs-page').then((m) => m.ApiDocsPage)) },
       {
         path: 'users',
         element: (

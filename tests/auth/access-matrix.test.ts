@@ -8,6 +8,10 @@
  * (server/auth/route-inventory.ts), the same list the access middleware uses at run time
  * to refuse unlisted routes.
  *
+ * Each role is also tried with an API token of its own (`Authorization: Bearer`, no cookie, no
+ * Origin header): a token has its user's role, except on the routes that need a browser
+ * session (server/tokens/session-only-routes.ts), which refuse every token with 403.
+ *
  * Handlers not written yet answer 404 "No API route" from the API fallback. That is accepted
  * for an allowed role only while the route is absent from the router stack; the list of such
  * routes is printed, so colleagues' routes are checked for real as soon as they land.
@@ -18,8 +22,10 @@ import { roles, type Role } from '@shared/schemas/auth';
 import { compileAccessTable } from '../../server/auth/access-control';
 import { listRoutes } from '../../server/auth/route-inventory';
 import { compilePattern } from '../../server/auth/route-pattern';
+import { sessionOnlyRoutes } from '../../server/tokens/session-only-routes';
 import { createTestApp } from '../support/test-app';
 import { anonymousAgent, createUser, signInAs, type SignedInAgent, type TestUser } from '../support/auth';
+import { createToken } from '../support/tokens';
 
 const app = createTestApp();
 const rules = compileAccessTable();
@@ -32,12 +38,14 @@ const concrete = (path: string) => path.replace(/:[A-Za-z_][A-Za-z0-9_]*/g, plac
 
 const users = {} as Record<Role, TestUser>;
 const agents = {} as Record<Role, SignedInAgent>;
+const tokens = {} as Record<Role, string>;
 const missingHandlers = new Set<string>();
 
 beforeAll(async () => {
   for (const role of roles) {
     users[role] = await createUser(role);
     agents[role] = await signInAs(app, users[role]);
+    tokens[role] = (await createToken(agents[role], `matrix ${role}`)).token;
   }
 });
 
@@ -74,6 +82,29 @@ function send(agent: ReturnType<typeof anonymousAgent>, method: string, path: st
       throw new Error(`No matrix request for method ${method}`);
   }
 }
+
+/** The same request with only the role's API token: no cookie jar, no Origin header. */
+function sendWithToken(role: Role, method: string, path: string) {
+  const url = concrete(path);
+  const withToken = <T extends { set(field: string, value: string): T }>(test: T) =>
+    test.set('Authorization', `Bearer ${tokens[role]}`);
+  switch (method) {
+    case 'GET':
+      return withToken(request(app).get(url));
+    case 'POST':
+      return withToken(request(app).post(url)).send({});
+    case 'PATCH':
+      return withToken(request(app).patch(url)).send({});
+    case 'PUT':
+      return withToken(request(app).put(url)).send({});
+    case 'DELETE':
+      return withToken(request(app).delete(url));
+    default:
+      throw new Error(`No matrix request for method ${method}`);
+  }
+}
+
+const sessionOnly = new Set<string>(sessionOnlyRoutes);
 
 function expectAllowed(rule: (typeof rules)[number], who: string, status: number, body: { error?: unknown }) {
   const handlerMissing = status === 404 && typeof body.error === 'string' && body.error.startsWith('No API route');
@@ -122,6 +153,18 @@ describe.each(rules.map((rule) => [rule.key, rule] as const))('%s', (_key, rule)
     const allowed = rule.access === 'public' || rule.access.includes(role);
     const response = await send(await agentFor(role), rule.method, rule.path);
     if (allowed) expectAllowed(rule, role, response.status, response.body);
+    else expect(response.status, JSON.stringify(response.body)).toBe(403);
+  });
+});
+
+describe.each(rules.map((rule) => [rule.key, rule] as const))('%s with an API token', (_key, rule) => {
+  it.each(roles.map((role) => [role]))("answers a %s's token as DESIGN section 5 says", async (role) => {
+    const allowed = rule.access === 'public' || rule.access.includes(role);
+    const response = await sendWithToken(role, rule.method, rule.path);
+    if (allowed && sessionOnly.has(rule.key)) {
+      expect(response.status, JSON.stringify(response.body)).toBe(403);
+      expect(response.body.error).toMatch(/signed-in browser session/);
+    } else if (allowed) expectAllowed(rule, `${role} token`, response.status, response.body);
     else expect(response.status, JSON.stringify(response.body)).toBe(403);
   });
 });

@@ -19,8 +19,17 @@ const planIds: string[] = [];
 
 const WEEK = 'prices-week-2026-05-04-15min.csv';
 
+let copies = 0;
+
+/**
+ * A new profile of the week's prices. Each call sends a distinct file (one more trailing
+ * blank line, which the reader skips): the same bytes again would be answered with the
+ * profile already stored, not a new one.
+ */
 async function uploadWeek(): Promise<string> {
-  const response = await upload(planner, site.id, sample(WEEK), WEEK);
+  copies += 1;
+  const bytes = Buffer.concat([sample(WEEK), Buffer.from('\n'.repeat(copies))]);
+  const response = await upload(planner, site.id, bytes, WEEK);
   expect(response.status).toBe(201);
   return response.body.id as string;
 }

@@ -6,7 +6,8 @@ import { testDatabaseUrl } from './database-url';
 
 export const testOrigin = 'http://localhost:3999';
 
-export function createTestApp() {
+/** `env` adds or overrides environment variables, e.g. a low rate limit for one test file. */
+export function createTestApp(env: Record<string, string> = {}) {
   const url = testDatabaseUrl();
   initDb(url, 5);
   const config = loadConfig({
@@ -15,6 +16,7 @@ export function createTestApp() {
     APP_ORIGIN: testOrigin,
     RUN_WORKER: 'false',
     LOG_LEVEL: 'error',
+    ...env,
   });
   return createApp(config);
 }

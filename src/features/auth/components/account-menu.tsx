@@ -11,7 +11,7 @@ const initials = (name: string) =>
     .map((w) => w[0]?.toUpperCase())
     .join('');
 
-/** The signed-in user's name and role, opening to "Change password" and "Sign out". Escape closes it. */
+/** The signed-in user's name and role, opening to "Change password", "API tokens", "API reference" and "Sign out". Escape closes it. */
 export function AccountMenu({ user }: { user: AuthUser }) {
   const [open, setOpen] = useState(false);
   const panelId = useId();
@@ -80,6 +80,24 @@ export function AccountMenu({ user }: { user: AuthUser }) {
                 className="block px-4 py-2 hover:bg-ink-50 focus-visible:bg-ink-50"
               >
                 Change password
+              </Link>
+            </li>
+            <li>
+              <Link
+                to="/account/tokens"
+                onClick={() => setOpen(false)}
+                className="block px-4 py-2 hover:bg-ink-50 focus-visible:bg-ink-50"
+              >
+                API tokens
+              </Link>
+            </li>
+            <li>
+              <Link
+                to="/api-docs"
+                onClick={() => setOpen(false)}
+                className="block px-4 py-2 hover:bg-ink-50 focus-visible:bg-ink-50"
+              >
+                API reference
               </Link>
             </li>
             <li>
