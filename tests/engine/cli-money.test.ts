@@ -71,7 +71,7 @@ describe('command line money figures', () => {
     expect(out.batteryValue).toBeCloseTo(-out.netCost, 9);
     expect(out.storedEnergyValuation.description).toMatch(/EUR\/MWh for 00:00/);
     expect(out.cycling).toMatchObject({ limitSource: 'common practice', heavy: true });
-    expect(out.turnpike.flags.join(' ')).toContain('Heavy cycling');
+    expect(out.warnings.join(' ')).toContain('Heavy cycling');
     expect(Object.keys(out.turnpike)).toEqual(expect.arrayContaining(['excursions', 'summary', 'longerLookaheadHours']));
     expect(out.turnpike.excursions).toEqual(expect.objectContaining({ count: expect.any(Number), steps: expect.any(Number) }));
     const rated = output('planRated');

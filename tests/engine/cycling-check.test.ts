@@ -48,13 +48,13 @@ describe('heavy cycling', () => {
     expect(plan.cycling.highestPerDay).toBeCloseTo(12, 9);
     expect(plan.cycling.message).toMatch(/^Heavy cycling: on 2026-03-02 the schedule makes 12\.00 equivalent full cycles; /);
     expect(plan.cycling.message).toContain('as is common practice');
-    expect(plan.turnpike.flags).toContain(plan.cycling.message);
+    expect(plan.warnings).toContain(plan.cycling.message);
   });
 
   it("uses the battery's own rating when it has one", () => {
     const within = dayPlan(battery({ maxRatedCyclesPerDay: 12 }));
     expect(within.cycling).toMatchObject({ limitPerDay: 12, limitSource: 'battery rating', heavy: false, message: null });
-    expect(within.turnpike.flags.join(' ')).not.toContain('Heavy cycling');
+    expect(within.warnings.join(' ')).not.toContain('Heavy cycling');
     const above = dayPlan(battery({ maxRatedCyclesPerDay: 3 }));
     expect(above.cycling.heavy).toBe(true);
     expect(above.cycling.message).toContain('the battery is rated for 3 per day');

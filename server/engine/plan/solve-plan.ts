@@ -158,7 +158,6 @@ export function solvePlan(inputs: AlignedInputs, request: PlanRequest): PlanResu
     steady,
   );
   const cycling = cyclingCheck(inputs, from, sol.dischargeKw.slice(0, delivery));
-  if (cycling.message) tp.flags.push(cycling.message);
   return {
     ok: true,
     plan: {
@@ -170,7 +169,8 @@ export function solvePlan(inputs: AlignedInputs, request: PlanRequest): PlanResu
       solution: main.solution,
       steady,
       turnpike: tp,
-      warnings: settingWarnings(inputs.battery),
+      // Heavy cycling is a caution about the battery (DESIGN section 8), beside the settings outside common practice.
+      warnings: [...settingWarnings(inputs.battery), ...(cycling.message ? [cycling.message] : [])],
       dpInsights,
       netFigures: net,
       cycling,
