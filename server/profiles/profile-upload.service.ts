@@ -80,6 +80,8 @@ export async function uploadProfile(
     timezone: site.timezone,
     intervalEnding: options.intervalEnding,
     fillGaps: options.fillGaps,
+    ...(options.dateOrder ? { dateOrder: options.dateOrder } : {}),
+    ...(options.decimalSeparator ? { decimalSeparator: options.decimalSeparator } : {}),
   });
   if (!parsed.ok) {
     const count = parsed.issues.length;
@@ -129,6 +131,8 @@ export async function uploadProfile(
         valueCount: profile.values.length,
         stepMinutes: profile.stepMinutes,
         filledCount: profile.filledIndexes.length,
+        ...(options.dateOrder ? { dateOrder: options.dateOrder } : {}),
+        ...(options.decimalSeparator ? { decimalSeparator: options.decimalSeparator } : {}),
       },
     });
     return id;

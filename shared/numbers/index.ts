@@ -1,4 +1,8 @@
-/** Reading numbers in a stated format: one rule for form fields and uploads. */
+/**
+ * Reading numbers in a stated format: one rule for form fields and uploads. The rule lives
+ * beside the profile CSV reader (shared/profile-csv/parse-decimal.ts) because that reader,
+ * which also runs in the browser's parsing worker, imports nothing outside its own folder.
+ */
 export {
   numberFormatExample,
   parseDecimal,
@@ -6,4 +10,4 @@ export {
   type DecimalOptions,
   type DecimalReading,
   type DecimalSeparator,
-} from './parse-decimal';
+} from '../profile-csv/parse-decimal';
