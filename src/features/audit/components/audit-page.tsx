@@ -30,7 +30,7 @@ function EventRow({ event, names }: { event: AuditEvent; names: Record<string, s
       <td className="min-w-48 px-4 py-2 text-ink-700" title={event.entityId ?? undefined}>
         {entityText(event)}
       </td>
-      <td className="min-w-64 px-4 py-2 break-words text-ink-700">{describeDetails(event.details, names) || '—'}</td>
+      <td className="min-w-56 px-4 py-2 text-ink-700 [overflow-wrap:anywhere]">{describeDetails(event.details, names) || '—'}</td>
       <td className="px-4 py-2 font-mono text-xs whitespace-nowrap text-ink-500">{event.ip ?? '—'}</td>
     </tr>
   );

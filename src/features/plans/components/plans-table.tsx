@@ -33,7 +33,8 @@ export function PlansTable({ plans }: { plans: Plan[] }) {
                 <span className="block text-xs text-ink-500">{p.siteName}</span>
               </td>
               <td className="whitespace-nowrap px-2 py-1 tabular-nums">
-                {local(p.deliveryStart, p.siteId)} – {local(p.deliveryEnd, p.siteId)}
+                <span className="block">{local(p.deliveryStart, p.siteId)} –</span>
+                <span className="block">{local(p.deliveryEnd, p.siteId)}</span>
               </td>
               <td className={`px-2 py-1 ${numClass}`}>{p.horizonHours} h</td>
               <td className="px-2 py-1">{p.terminalRule}</td>
