@@ -63,7 +63,8 @@ export function ScrollRegion({
         </p>
       )}
       <div className={`relative ${className}`}>
-        <div ref={ref} role="region" aria-label={label} tabIndex={0} className="overflow-x-auto rounded">
+        {/* Positioned, so absolutely placed content inside (screen-reader text) scrolls and clips with it. */}
+        <div ref={ref} role="region" aria-label={label} tabIndex={0} className="relative overflow-x-auto rounded">
           {children}
         </div>
         {edges.left && <div aria-hidden="true" className={`${shade} left-0 rounded-l bg-linear-to-r`} />}
