@@ -7,6 +7,7 @@ import type { AuditFilters, AuditPage } from '@shared/schemas/audit';
 import type { DbOrTx } from '../db/client';
 import { getDb } from '../db/client';
 import type { Actor } from '../http/request-context';
+import { namesOfIds } from './audit-names.repo';
 import { insertAuditEvent, listAuditEvents } from './audit.repo';
 
 /**
@@ -42,6 +43,17 @@ export async function recordAudit(db: DbOrTx, who: Actor | AnonymousAuthor, even
   await insertAuditEvent(db, { ...author, ...event });
 }
 
+/** Ids in an event's details under keys such as siteId, batteryId, copyId or byPlanId. */
+function detailIds(details: Record<string, unknown>): string[] {
+  return Object.entries(details)
+    .filter(([key, value]) => /Id$/.test(key) && typeof value === 'string')
+    .map(([, value]) => value as string);
+}
+
+function mentionedIds(event: { entityId: string | null; details: Record<string, unknown> }): string[] {
+  return [...(event.entityId ? [event.entityId] : []), ...detailIds(event.details)];
+}
+
 /** One page of the trail, newest first; `nextBefore` continues it. */
 export async function readAuditTrail(q: AuditFilters): Promise<AuditPage> {
   const rows = await listAuditEvents(getDb(), {
@@ -55,8 +67,10 @@ export async function readAuditTrail(q: AuditFilters): Promise<AuditPage> {
     limit: q.limit + 1,
   });
   const page = rows.slice(0, q.limit);
+  const names = await namesOfIds(getDb(), page.flatMap(mentionedIds));
   return {
-    events: page.map((r) => ({ ...r, at: r.at.toISOString() })),
+    events: page.map((r) => ({ ...r, at: r.at.toISOString(), entityName: r.entityId ? (names.get(r.entityId) ?? null) : null })),
     nextBefore: rows.length > q.limit ? (page.at(-1)?.id ?? null) : null,
+    names: Object.fromEntries([...names].filter(([id]) => page.some((r) => detailIds(r.details).includes(id)))),
   };
 }

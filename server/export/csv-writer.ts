@@ -7,11 +7,24 @@
  *
  * Cells are typed: numbers are written as plain decimal numbers (the shortest
  * text that reads back as the same IEEE 754 double, so values round-trip
- * exactly), text is guarded against formula injection, null is an empty field.
+ * exactly), or with a fixed number of decimals when the cell says so
+ * (`fixed(1387.4999999999998, 3)` is 1387.500: the unit's precision, not the
+ * solver's rounding noise); text is guarded against formula injection, null
+ * is an empty field.
  */
 import { guardTextCell } from './formula-guard';
 
-export type CsvCell = number | string | null;
+/** A number to write with exactly `decimals` decimals. */
+export interface FixedNumber {
+  readonly value: number;
+  readonly decimals: number;
+}
+
+export type CsvCell = number | FixedNumber | string | null;
+
+/** A number cell written with exactly `decimals` decimals (NaN or a missing value: an empty field). */
+export const fixed = (value: number | null | undefined, decimals: number): FixedNumber | null =>
+  value === null || value === undefined ? null : { value, decimals };
 
 export const CSV_MEDIA_TYPE = 'text/csv; charset=utf-8; header=present';
 
@@ -31,9 +44,17 @@ export function formatNumberCell(value: number): string {
   return String(value);
 }
 
+/** Exactly `decimals` decimals, rounded half away from zero as toFixed does; never "-0.000". */
+export function formatFixedCell(value: number, decimals: number): string {
+  if (!Number.isFinite(value)) return '';
+  const text = value.toFixed(decimals);
+  return /^-0(\.0*)?$/.test(text) ? text.slice(1) : text;
+}
+
 function field(cell: CsvCell): string {
   if (cell === null) return '';
   if (typeof cell === 'number') return formatNumberCell(cell);
+  if (typeof cell === 'object') return formatFixedCell(cell.value, cell.decimals);
   return quote(guardTextCell(cell));
 }
 

@@ -8,11 +8,13 @@ import { exportPlan } from './export.service';
 export const exportRouter = Router();
 
 exportRouter.get('/plans/:id/export.csv', async (req, res) => {
-  const file = await exportPlan(actorOf(req), planPathId(req));
+  const id = planPathId(req);
+  const file = await exportPlan(actorOf(req), id);
   res.setHeader('Content-Type', CSV_MEDIA_TYPE);
   // The name is ASCII by construction (export-file-name.ts), so the plain form of RFC 6266 suffices.
   res.setHeader('Content-Disposition', `attachment; filename="${file.fileName}"`);
   res.setHeader('X-Slackwater-Plan-Status', file.status);
+  res.setHeader('X-Slackwater-Plan-Id', id);
   if (file.checksum) {
     res.setHeader('X-Slackwater-Checksum', `sha256=${file.checksum}`);
     res.setHeader('X-Slackwater-Checksum-Verified', 'true');

@@ -112,6 +112,13 @@ export async function exportPlan(actor: Actor, id: string): Promise<PlanExport> 
       approvalComment: plan.approvalComment,
       checksum: signedOff ? plan.checksum : null,
       notice: notice(plan.status),
+      batteryName: plan.inputs.battery.name,
+      batteryVersion: plan.inputs.battery.version,
+      deliveryStart: plan.deliveryStart.toISOString(),
+      deliveryEnd: plan.deliveryEnd.toISOString(),
+      horizonHours: plan.horizonHours,
+      terminalRule: plan.terminalRule,
+      exportedAt: new Date().toISOString(),
     });
   } catch (error) {
     if (error instanceof ExportDataError)

@@ -38,7 +38,7 @@ function translate(error: unknown): AppError {
         return rejected(`Send exactly one file, in the form field "file" (got a file in "${error.field ?? '?'}").`);
       default:
         return rejected(
-          `The upload form was refused: ${error.message}. Send only the fields file, kind, unit, name, intervalEnding and fillGaps.`,
+          `The upload form was refused: ${error.message}. Send only the fields file, kind, unit, name, intervalEnding, fillGaps, dateOrder and decimalSeparator.`,
         );
     }
   }

@@ -82,6 +82,8 @@ export async function uploadProfile(
     timezone: site.timezone,
     intervalEnding: options.intervalEnding,
     fillGaps: options.fillGaps,
+    ...(options.dateOrder ? { dateOrder: options.dateOrder } : {}),
+    ...(options.decimalSeparator ? { decimalSeparator: options.decimalSeparator } : {}),
   });
   if (!parsed.ok) {
     const count = parsed.issues.length;
@@ -149,6 +151,8 @@ export async function uploadProfile(
         valueCount: profile.values.length,
         stepMinutes: profile.stepMinutes,
         filledCount: profile.filledIndexes.length,
+        ...(options.dateOrder ? { dateOrder: options.dateOrder } : {}),
+        ...(options.decimalSeparator ? { decimalSeparator: options.decimalSeparator } : {}),
       },
     });
     return { id, created: true };

@@ -7,6 +7,8 @@ export {
   type ProfileIssue,
 } from './parse-profile-csv';
 export { decodeProfileBytes } from './decode-profile-bytes';
+export type { DateOrder } from './parse-timestamp';
+export type { DecimalSeparator } from './parse-decimal';
 export { SUPPORTED_STEPS_MINUTES } from './check-sequence';
 export { DEFAULT_MAX_ISSUES } from './issue-list';
 export {

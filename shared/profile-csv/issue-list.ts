@@ -22,13 +22,13 @@ const CATEGORY_HINTS: Readonly<Record<IssueCategory, string>> = {
   file: 'Export the data from your spreadsheet or system as a CSV text file (UTF-8) and upload that file.',
   structure:
     'The file needs a header row, then one row per interval with a time column and a value column, separated by commas or semicolons.',
-  time: `Write times in ISO 8601, e.g. ${EXAMPLE_TIMES}.`,
+  time: `Write times in ISO 8601, e.g. ${EXAMPLE_TIMES}; for dates written day or month first (08.12.2026 00:00), choose the file's date order at upload.`,
   'local-time':
     'On daylight-saving days local times can be missing or repeated; write every time with its UTC offset (RFC 3339), e.g. 2026-10-25T02:00:00+02:00 and 2026-10-25T02:00:00+01:00.',
   offset:
     "Use the same UTC offset throughout, or the offsets of the site's time zone (they change only on its daylight-saving days).",
   number:
-    'Values must be plain numbers such as -12.5 (or -12,5 in a semicolon-separated file): no units, thousands separators, NaN or Infinity.',
+    'Values must be plain numbers such as -12.5 (or -12,5 in a semicolon-separated file): no units, NaN or Infinity. For thousands separators, choose the decimal separator at upload (1.010,25 or 1,010.25).',
   range: 'Availability is a fraction of the power ratings from 0 (unavailable) to 1 (fully available), or 0–100 with the unit %.',
   order: 'Sort the rows by time, earliest first, with each interval once.',
   gap: 'To fill missing intervals by linear interpolation between their neighbours, upload again with gap filling turned on.',

@@ -1,9 +1,12 @@
 /**
- * Reads one value cell. Plain decimal numbers only: an optional sign, digits,
- * one decimal separator, an optional exponent. A decimal comma is read only in
- * semicolon-separated files, where it cannot be confused with the delimiter
- * (DESIGN section 4). Thousands separators are refused rather than guessed.
+ * Reads one value cell. Without a declared decimal separator: plain decimal
+ * numbers only (an optional sign, digits, one decimal separator, an optional
+ * exponent), a decimal comma only in semicolon-separated files, where it cannot
+ * be confused with the delimiter, and thousands separators refused rather than
+ * guessed. With one (`decimalSeparator`), the other of point and comma separates
+ * thousands, by the rule every number field in Slackwater follows (shared/numbers).
  */
+import { parseDecimal, type DecimalSeparator } from './parse-decimal';
 import { truncate } from './parse-timestamp';
 
 export type NumberReading =
@@ -13,8 +16,12 @@ const DOT_NUMBER = /^[+-]?(?:\d+(?:\.\d*)?|\.\d+)(?:[eE][+-]?\d+)?$/;
 const COMMA_NUMBER = /^[+-]?(?:\d+(?:,\d*)?|,\d+)(?:[eE][+-]?\d+)?$/;
 const NON_FINITE_WORDS = /^[+-]?(?:nan|inf|infinity|∞)$/i;
 
-export function parseNumber(cell: string, decimalComma: boolean): NumberReading {
+export function parseNumber(cell: string, decimalComma: boolean, decimalSeparator?: DecimalSeparator): NumberReading {
   if (cell === '') return { ok: false, blank: true, reason: 'the value is empty' };
+  if (decimalSeparator !== undefined) {
+    const reading = parseDecimal(cell, decimalSeparator);
+    return reading.ok ? reading : { ...reading, reason: reading.reason.replace(`"${cell}"`, `"${truncate(cell)}"`) };
+  }
   let text: string | null = null;
   if (DOT_NUMBER.test(cell)) text = cell;
   else if (decimalComma && COMMA_NUMBER.test(cell)) text = cell.replace(',', '.');

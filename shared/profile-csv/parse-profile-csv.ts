@@ -7,7 +7,8 @@
 import { checkSequence } from './check-sequence';
 import { fillGapsLinearly } from './fill-gaps';
 import { DEFAULT_MAX_ISSUES, IssueList, type ProfileIssue } from './issue-list';
-import { parseTimestamp } from './parse-timestamp';
+import type { DecimalSeparator } from './parse-decimal';
+import { parseTimestamp, type DateOrder } from './parse-timestamp';
 import { pickColumns } from './pick-columns';
 import { describeProfile } from './profile-notes';
 import { ALL_PROFILE_KINDS, canonicalFactor, canonicalUnitOf, type AnyProfileKind, type ProfileUnit } from './profile-units';
@@ -31,6 +32,13 @@ export interface ParseProfileOptions {
   intervalEnding?: boolean;
   /** Fill missing intervals and blank values by linear interpolation. Default false: reject gaps. */
   fillGaps?: boolean;
+  /** Dates written day first (`dmy`, 08.12.2026 00:00) or month first (`mdy`, 12/08/2026 00:00); default: ISO 8601 only. */
+  dateOrder?: DateOrder;
+  /**
+   * The decimal separator of the values; the other of point and comma then separates thousands
+   * (1.010,25 or 1,010.25). Default: a point, or a comma in semicolon-separated files, no thousands separators.
+   */
+  decimalSeparator?: DecimalSeparator;
   /** Most problems reported. Default 50. */
   maxIssues?: number;
 }
@@ -75,6 +83,18 @@ function checkOptions(options: ParseProfileOptions, issues: IssueList): CheckedO
       0,
       `The site's time zone "${options.timezone}" is not a known IANA time zone name (such as Europe/Berlin); correct the site first.`,
     );
+  if (options.dateOrder !== undefined && !['dmy', 'mdy'].includes(options.dateOrder))
+    issues.add(
+      'options',
+      0,
+      `The date order "${String(options.dateOrder)}" is not known; choose dmy or mdy, or none for ISO 8601.`,
+    );
+  if (options.decimalSeparator !== undefined && !['.', ','].includes(options.decimalSeparator))
+    issues.add(
+      'options',
+      0,
+      `The decimal separator "${String(options.decimalSeparator)}" is not known; choose "." or ",", or none for plain numbers.`,
+    );
   return issues.count === 0 && clock !== null && unit !== null ? { clock, unit, currency } : null;
 }
 
@@ -97,7 +117,7 @@ export function parseProfileCsv(text: string, options: ParseProfileOptions): Par
 
   const { header } = table;
   const headerCells = header.fields;
-  if (headerCells.some((cell) => parseTimestamp(cell).ok)) {
+  if (headerCells.some((cell) => parseTimestamp(cell, options.dateOrder).ok)) {
     issues.add(
       'structure',
       header.line,
@@ -122,7 +142,7 @@ export function parseProfileCsv(text: string, options: ParseProfileOptions): Par
     return failure(issues);
   }
 
-  const columns = pickColumns(headerCells, table.rows[0]?.fields, options.kind, intervalEnding);
+  const columns = pickColumns(headerCells, table.rows[0]?.fields, options.kind, intervalEnding, options.dateOrder);
   if ('reason' in columns) {
     issues.add('structure', header.line, `Line ${header.line}: ${columns.reason}`);
     return failure(issues);
@@ -136,6 +156,8 @@ export function parseProfileCsv(text: string, options: ParseProfileOptions): Par
       columnCount: headerCells.length,
       valueHeader: headerCells[columns.valueColumn] ?? '',
       decimalComma: table.delimiter === ';',
+      decimalSeparator: options.decimalSeparator,
+      dateOrder: options.dateOrder,
       fillGaps,
       clock,
     },
@@ -169,6 +191,8 @@ export function parseProfileCsv(text: string, options: ParseProfileOptions): Par
     kind: options.kind,
     unit,
     intervalEnding,
+    dateOrder: options.dateOrder,
+    decimalSeparator: options.decimalSeparator,
     startMs,
     stepMinutes,
     values,

@@ -4,7 +4,14 @@
  * time in the site's zone, resolved elsewhere). Hand-written rather than
  * date-fns `parseISO` because it runs once per row on 100k-row files and must
  * say precisely what is wrong.
+ *
+ * Dates written day first or month first (`08.12.2026 00:00`, `12/08/2026 1:00 PM`)
+ * are read only when the upload says which order the file uses (`dateOrder`):
+ * 08.12.2026 is 8 December in one and 12 August in the other, so it is never guessed.
  */
+
+/** How a file that does not write ISO 8601 dates orders day and month; absent: ISO 8601 only. */
+export type DateOrder = 'dmy' | 'mdy';
 
 export type TimestampReading =
   | {
@@ -21,6 +28,11 @@ export type TimestampReading =
 const ISO_PATTERN =
   /^(\d{4})-(\d{2})-(\d{2})[Tt ](\d{2}):(\d{2})(?::(\d{2})(?:[.,](\d{1,9}))?)? ?(?:([Zz])|([+-])(\d{2})(?::?(\d{2}))?)?$/;
 const DATE_ONLY = /^\d{4}-\d{2}-\d{2}$/;
+// Day-first or month-first: one separator twice (. / -), a four-digit year, a time with optional
+// seconds and AM/PM, optionally an offset as in the ISO pattern.
+const ORDERED_PATTERN =
+  /^(\d{1,2})([./-])(\d{1,2})\2(\d{4})(?:[Tt ]|, ?)(\d{1,2}):(\d{2})(?::(\d{2}))? ?([AaPp][Mm])?(?: ?(?:([Zz])|([+-])(\d{2})(?::?(\d{2}))?))?$/;
+const SHORT_YEAR = /^\d{1,2}([./-])\d{1,2}\1\d{2}(?:[Tt ,]|$)/;
 const TIME_ONLY = /^\d{1,2}:\d{2}(:\d{2})?$/;
 
 const DAY_MS = 86_400_000;
@@ -134,23 +146,76 @@ function readPattern(cell: string): Parts | null {
   };
 }
 
+/** A day-first or month-first cell in the order given; the hour on a 12-hour clock when AM/PM follows. */
+function readOrdered(cell: string, order: DateOrder): Parts | { reason: string } | null {
+  const m = ORDERED_PATTERN.exec(cell);
+  if (m === null) return null;
+  const first = Number(m[1]);
+  const second = Number(m[3]);
+  let hour = Number(m[5]);
+  const meridiem = m[8]?.toLowerCase();
+  if (meridiem) {
+    if (hour < 1 || hour > 12)
+      return { reason: `"${cell}" has hour ${hour} with ${meridiem.toUpperCase()}; a 12-hour clock runs from 1 to 12` };
+    hour = (hour % 12) + (meridiem === 'pm' ? 12 : 0);
+  }
+  return {
+    year: Number(m[4]),
+    month: order === 'dmy' ? second : first,
+    day: order === 'dmy' ? first : second,
+    hour,
+    minute: Number(m[6]),
+    second: m[7] === undefined ? 0 : Number(m[7]),
+    millis: 0,
+    offsetSign: m[9] !== undefined ? 1 : m[10] === undefined ? 0 : m[10] === '-' ? -1 : 1,
+    offsetHours: m[11] === undefined ? 0 : Number(m[11]),
+    offsetMinutes: m[12] === undefined ? 0 : Number(m[12]),
+  };
+}
+
+/** True for a cell such as 08.12.2026 00:00: a date and time written day or month first. */
+export function looksDayOrMonthFirst(cell: string): boolean {
+  return ORDERED_PATTERN.test(cell);
+}
+
 const pad = (n: number, width = 2): string => String(n).padStart(width, '0');
 
-export function parseTimestamp(cell: string): TimestampReading {
-  const p = readFast(cell) ?? readPattern(cell);
-  if (p === null) {
-    if (cell === '') return fail('the time is empty');
-    if (DATE_ONLY.test(cell)) return fail(`"${cell}" has a date but no time of day`);
-    // Spreadsheet exports often split date and time into two columns.
-    if (TIME_ONLY.test(cell)) return fail(`"${cell}" has a time of day but no date (put date and time in one column)`);
-    return fail(`"${truncate(cell)}" is not an ISO 8601 date and time`);
+const ORDER_WORDS: Readonly<Record<DateOrder, string>> = { dmy: 'day-month-year', mdy: 'month-day-year' };
+
+/** Why a cell that is not ISO 8601 was refused, and what to choose or write instead. */
+function notReadable(cell: string, order: DateOrder | undefined): TimestampReading {
+  if (cell === '') return fail('the time is empty');
+  if (DATE_ONLY.test(cell)) return fail(`"${cell}" has a date but no time of day`);
+  // Spreadsheet exports often split date and time into two columns.
+  if (TIME_ONLY.test(cell)) return fail(`"${cell}" has a time of day but no date (put date and time in one column)`);
+  if (SHORT_YEAR.test(cell)) return fail(`"${truncate(cell)}" has a two-digit year; write the year with four digits`);
+  if (order === undefined && ORDERED_PATTERN.test(cell)) {
+    return fail(
+      `"${truncate(cell)}" is not an ISO 8601 date and time; it writes the day and month first, which can be read two ways: choose the file's date order at upload (day-month-year or month-day-year)`,
+    );
   }
+  const also = order
+    ? ` or a ${ORDER_WORDS[order]} date and time such as ${order === 'dmy' ? '08.12.2026 00:00' : '12/08/2026 00:00'}`
+    : '';
+  return fail(`"${truncate(cell)}" is not an ISO 8601 date and time${also}`);
+}
+
+export function parseTimestamp(cell: string, order?: DateOrder): TimestampReading {
+  let p = readFast(cell) ?? readPattern(cell);
+  let readAs = '';
+  if (p === null && order !== undefined) {
+    const ordered = readOrdered(cell, order);
+    if (ordered !== null && 'reason' in ordered) return fail(ordered.reason);
+    p = ordered;
+    readAs = ` (read as ${ORDER_WORDS[order]})`;
+  }
+  if (p === null) return notReadable(cell, order);
   const { year, month, day, hour, minute, second, millis } = p;
   // Also keeps Date.UTC away from its 0-99 → 1900-1999 year mapping.
   if (year < 1900 || year > 2199) return fail(`"${cell}" has the year ${pad(year, 4)}, outside 1900-2199`);
-  if (month < 1 || month > 12) return fail(`"${cell}" has month ${pad(month)}, which does not exist`);
+  if (month < 1 || month > 12) return fail(`"${cell}" has month ${pad(month)}${readAs}, which does not exist`);
   if (day < 1 || day > daysInMonth(year, month)) {
-    return fail(`"${cell}" has day ${pad(day)}, which does not exist in ${pad(year, 4)}-${pad(month)}`);
+    return fail(`"${cell}" has day ${pad(day)}${readAs}, which does not exist in ${pad(year, 4)}-${pad(month)}`);
   }
   // ISO 8601 lets 24:00 mean the end of the day, common in interval-ending labels.
   const endOfDay = hour === 24 && minute === 0 && second === 0 && millis === 0;

@@ -5,7 +5,7 @@
  * The choice is explained in a note so the user can check it.
  */
 import type { AnyProfileKind } from './profile-units';
-import { parseTimestamp } from './parse-timestamp';
+import { looksDayOrMonthFirst, parseTimestamp, type DateOrder } from './parse-timestamp';
 
 export interface ColumnChoice {
   readonly timeColumn: number;
@@ -14,13 +14,14 @@ export interface ColumnChoice {
   readonly ignored: readonly string[];
 }
 
+// "utc" adds nothing: where a file has a local-time column and a UTC one (as Slackwater's own
+// export: interval_start, interval_start_utc), both name the same instants and the first wins.
 const TIME_WORDS: Readonly<Record<string, number>> = {
   timestamp: 3,
   datetime: 3,
   time: 2,
   ts: 2,
   date: 1,
-  utc: 1,
   interval: 1,
   period: 1,
 };
@@ -81,12 +82,19 @@ export function pickColumns(
   firstRow: readonly string[] | undefined,
   kind: AnyProfileKind,
   intervalEnding: boolean,
+  dateOrder?: DateOrder,
 ): ColumnChoice | { reason: string } {
   let timeColumn = best(header.map((h) => timeScore(h, intervalEnding)));
   let how = 'by its header name';
   if (timeColumn < 0) {
-    timeColumn = (firstRow ?? []).findIndex((cell) => parseTimestamp(cell).ok);
+    timeColumn = (firstRow ?? []).findIndex((cell) => parseTimestamp(cell, dateOrder).ok);
     how = 'because its first cell reads as a time';
+  }
+  const ordered = (firstRow ?? []).findIndex(looksDayOrMonthFirst);
+  if (timeColumn < 0 && dateOrder === undefined && ordered >= 0) {
+    return {
+      reason: `no timestamp column in ISO 8601: column ${ordered + 1} ("${header[ordered] ?? ''}") holds "${firstRow?.[ordered] ?? ''}", a date written day or month first, which can be read two ways. Choose the file's date order at upload (day-month-year or month-day-year).`,
+    };
   }
   if (timeColumn < 0) {
     return {

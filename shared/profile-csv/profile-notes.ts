@@ -10,6 +10,8 @@ import { canonicalFactor, canonicalUnitOf, isEnergyPerInterval, type AnyProfileK
 import type { CsvTable } from './read-csv-rows';
 import type { TimedRows } from './read-timed-rows';
 import { formatInstant, formatOffset, type ZoneClock } from './zone-clock';
+import type { DecimalSeparator } from './parse-decimal';
+import type { DateOrder } from './parse-timestamp';
 
 export interface ProfileFacts {
   readonly table: CsvTable;
@@ -19,6 +21,8 @@ export interface ProfileFacts {
   readonly kind: AnyProfileKind;
   readonly unit: ProfileUnit;
   readonly intervalEnding: boolean;
+  readonly dateOrder: DateOrder | undefined;
+  readonly decimalSeparator: DecimalSeparator | undefined;
   readonly startMs: number;
   readonly stepMinutes: number;
   /** Values in the upload unit, gaps already filled. */
@@ -32,9 +36,19 @@ export function describeProfile(f: ProfileFacts): string[] {
   const zone = f.clock.timeZone;
   const notes: string[] = [];
   const semicolon = f.table.delimiter === ';';
-  notes.push(
-    `Read as ${semicolon ? 'semicolon' : 'comma'}-separated values${semicolon ? ' (a decimal comma is read as a decimal point)' : ''}.`,
-  );
+  const numbers =
+    f.decimalSeparator === ','
+      ? ' with a decimal comma and points between thousands, as chosen'
+      : f.decimalSeparator === '.'
+        ? ' with a decimal point and commas between thousands, as chosen'
+        : semicolon
+          ? ' (a decimal comma is read as a decimal point)'
+          : '';
+  notes.push(`Read as ${semicolon ? 'semicolon' : 'comma'}-separated values${numbers}.`);
+  if (f.dateOrder)
+    notes.push(
+      `Dates not in ISO 8601 were read ${f.dateOrder === 'dmy' ? 'day first (day-month-year, e.g. 08.12.2026 is 8 December)' : 'month first (month-day-year, e.g. 12/08/2026 is 8 December)'}, as chosen.`,
+    );
   if (f.table.hadByteOrderMark) notes.push('A byte order mark at the start of the file was ignored.');
   notes.push(f.columns.note);
   if (f.columns.ignored.length > 0) notes.push(`Ignored columns: ${f.columns.ignored.map((c) => `"${c}"`).join(', ')}.`);

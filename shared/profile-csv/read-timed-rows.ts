@@ -7,7 +7,8 @@
 import type { TimedRow } from './check-sequence';
 import type { IssueList } from './issue-list';
 import { parseNumber } from './parse-number';
-import { parseTimestamp } from './parse-timestamp';
+import { parseTimestamp, type DateOrder } from './parse-timestamp';
+import type { DecimalSeparator } from './parse-decimal';
 import type { CsvRow } from './read-csv-rows';
 import { formatOffset, type ZoneClock } from './zone-clock';
 
@@ -17,6 +18,10 @@ export interface TimedRowsContext {
   readonly columnCount: number;
   readonly valueHeader: string;
   readonly decimalComma: boolean;
+  /** Declared at upload: the decimal separator (the other one then separates thousands). */
+  readonly decimalSeparator: DecimalSeparator | undefined;
+  /** Declared at upload: day-first or month-first dates; absent, ISO 8601 only. */
+  readonly dateOrder: DateOrder | undefined;
   readonly fillGaps: boolean;
   readonly clock: ZoneClock;
 }
@@ -89,9 +94,16 @@ function localInstant(line: number, timeText: string, wallMs: number, clock: Zon
   return Number.NaN;
 }
 
+/** How to write a value in this file. */
+function numberExample(ctx: TimedRowsContext): string {
+  if (ctx.decimalSeparator === ',') return 'Write a number such as -1.012,5 or -1012,5 (decimal comma, as chosen).';
+  if (ctx.decimalSeparator === '.') return 'Write a number such as -1,012.5 or -1012.5 (decimal point, as chosen).';
+  return `Write a plain number such as -12.5${ctx.decimalComma ? ' or -12,5' : ''}.`;
+}
+
 /** The value in the upload unit; NaN when blank (to be filled) or unreadable (reported). */
 function readValue(line: number, cell: string, ctx: TimedRowsContext, issues: IssueList): number {
-  const reading = parseNumber(cell, ctx.decimalComma);
+  const reading = parseNumber(cell, ctx.decimalComma, ctx.decimalSeparator);
   if (reading.ok) return reading.value;
   if (reading.blank && !ctx.fillGaps) {
     issues.add(
@@ -100,11 +112,7 @@ function readValue(line: number, cell: string, ctx: TimedRowsContext, issues: Is
       `Line ${line}: the value in "${ctx.valueHeader}" is empty. Enter a number, or upload with gap filling turned on to interpolate it.`,
     );
   } else if (!reading.blank) {
-    issues.add(
-      'number',
-      line,
-      `Line ${line}: ${reading.reason} in "${ctx.valueHeader}". Write a plain number such as -12.5${ctx.decimalComma ? ' or -12,5' : ''}.`,
-    );
+    issues.add('number', line, `Line ${line}: ${reading.reason} in "${ctx.valueHeader}". ${numberExample(ctx)}`);
   }
   return Number.NaN;
 }
@@ -131,13 +139,25 @@ export function readTimedRows(csvRows: readonly CsvRow[], ctx: TimedRowsContext,
       continue;
     }
 
+    // More fields than the header: most often a decimal comma in a comma-separated file, which splits
+    // the value in two; reading the first half would store a wrong number.
+    if (fields.length > ctx.columnCount && fields.slice(ctx.columnCount).some((f) => f !== '')) {
+      issues.add(
+        'structure',
+        line,
+        `Line ${line} has ${fields.length} fields but the header has ${ctx.columnCount}. If a value has a decimal comma, put it in quotes ("12,5") or separate the columns with semicolons.`,
+      );
+      rows.push({ line, ms: Number.NaN, value: Number.NaN, timeText });
+      continue;
+    }
+
     let ms = Number.NaN;
-    const time = parseTimestamp(timeText);
+    const time = parseTimestamp(timeText, ctx.dateOrder);
     if (!time.ok) {
       issues.add(
         'time',
         line,
-        `Line ${line}: ${time.reason}. Write the time like 2026-01-01T00:00:00+01:00, or 2026-01-01T00:00 for local time in ${zone}.`,
+        `Line ${line}: ${time.reason}. Write the time like 2026-01-01T00:00:00+01:00, or 2026-01-01T00:00 for local time in ${zone}${ctx.dateOrder ? `, or ${ctx.dateOrder === 'dmy' ? '01.01.2026 00:00' : '01/01/2026 00:00'}` : ''}.`,
       );
     } else {
       const hasOffset = time.offsetMinutes !== null;

@@ -14,6 +14,8 @@ export const auditEventSchema = z.object({
   via: z.string().nullable(),
   viaTokenId: z.string().nullable(),
   details: z.record(z.string(), z.unknown()),
+  /** The entity's name as it is now (a plan or study: its battery and start), or null when it is gone or has none. */
+  entityName: z.string().nullable(),
 });
 export type AuditEvent = z.infer<typeof auditEventSchema>;
 
@@ -53,5 +55,10 @@ export const auditQuerySchema = z.strictObject({
 export type AuditQuery = z.input<typeof auditQuerySchema>;
 export type AuditFilters = z.output<typeof auditQuerySchema>;
 
-export const auditPageSchema = z.object({ events: z.array(auditEventSchema), nextBefore: z.number().nullable() });
+export const auditPageSchema = z.object({
+  events: z.array(auditEventSchema),
+  nextBefore: z.number().nullable(),
+  /** Names of the ids the page's details mention (siteId, batteryId, …), id → name, for the ones that still exist. */
+  names: z.record(z.string(), z.string()),
+});
 export type AuditPage = z.infer<typeof auditPageSchema>;

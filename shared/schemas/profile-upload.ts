@@ -10,6 +10,10 @@ import { resolveProfileUnit } from '../profile-csv/price-units';
 
 const flag = z.union([z.boolean(), z.stringbool()]).default(false);
 
+/** A choice among a few words; an empty multipart field counts as not given. */
+const optionalChoice = <T extends string>(values: readonly [T, ...T[]], message: string) =>
+  z.preprocess((v) => (v === '' ? undefined : v), z.enum(values, { error: message }).optional());
+
 export const profileKindSchema = z.enum(PROFILE_KINDS);
 
 export const profileUploadOptionsSchema = z
@@ -20,6 +24,16 @@ export const profileUploadOptionsSchema = z
     intervalEnding: flag,
     /** Fill missing intervals by linear interpolation; default: reject gaps. */
     fillGaps: flag,
+    /** Dates written day first (08.12.2026 00:00) or month first (12/08/2026 00:00); default: ISO 8601 only. */
+    dateOrder: optionalChoice(
+      ['dmy', 'mdy'],
+      'Choose dmy (day-month-year) or mdy (month-day-year), or leave dateOrder out for ISO 8601 dates.',
+    ),
+    /** The values' decimal separator; the other of "." and "," then separates thousands. Default: plain numbers. */
+    decimalSeparator: optionalChoice(
+      ['.', ','],
+      'Choose "." or "," as the decimal separator, or leave decimalSeparator out for plain numbers.',
+    ),
   })
   .superRefine((value, ctx) => {
     if (!isAcceptedUnit(value.kind, value.unit)) {

@@ -5,6 +5,7 @@
  */
 import { createZoneClock, formatInstant } from '@shared/profile-csv';
 import { format } from 'date-fns';
+import { displayLocale } from './number-format';
 
 const clocks = new Map<string, ReturnType<typeof createZoneClock>>();
 
@@ -44,25 +45,42 @@ export function fromWallTimeInput(text: string, timeZone: string): number | null
   return clock.instantsOf(wall)[0] ?? null;
 }
 
+const shown = (n: number | null | undefined): n is number => n !== null && n !== undefined && Number.isFinite(n);
+
+/** Up to `digits` decimals, in the person's number format ("4,000", "0.92"). */
 export const formatNumber = (n: number | null | undefined, digits = 1) =>
-  n === null || n === undefined || !Number.isFinite(n)
-    ? '–'
-    : n.toLocaleString(undefined, { maximumFractionDigits: digits, minimumFractionDigits: 0 });
+  shown(n) ? n.toLocaleString(displayLocale(), { maximumFractionDigits: digits, minimumFractionDigits: 0 }) : '–';
+
+/** Exactly `digits` decimals, for columns of figures that line up ("4,000.0", "12.5" → "12.50"); -0 shows as 0. */
+export const formatFixed = (n: number | null | undefined, digits: number) =>
+  shown(n)
+    ? (Math.abs(n) < 0.5 * 10 ** -digits ? 0 : n).toLocaleString(displayLocale(), {
+        maximumFractionDigits: digits,
+        minimumFractionDigits: digits,
+      })
+    : '–';
+
+/** A count: "8,760". */
+export const formatCount = (n: number | null | undefined) => formatFixed(n, 0);
 
 export const formatMoney = (n: number | null | undefined, currency: string) =>
-  n === null || n === undefined || !Number.isFinite(n)
-    ? '–'
-    : `${n.toLocaleString(undefined, { maximumFractionDigits: 2, minimumFractionDigits: 2 })} ${currency}`;
+  shown(n) ? `${formatFixed(n, 2)}${currency ? ` ${currency}` : ''}` : '–';
 
 export const formatPercent = (share: number | null | undefined, digits = 0) =>
-  share === null || share === undefined || !Number.isFinite(share) ? '–' : `${(share * 100).toFixed(digits)} %`;
+  shown(share) ? `${formatFixed(share * 100, digits)} %` : '–';
+
+/**
+ * An efficiency (a fraction) as every page states it: in % with one decimal, e.g. 0.922 → "92.2 %".
+ * A round trip is the product of the charging and discharging efficiencies.
+ */
+export const formatEfficiency = (fraction: number | null | undefined) => formatPercent(fraction, 1);
 
 /** "350 ms", "4.2 s", "45 s", "3 min", "1 h 20 min". */
 export function formatDuration(seconds: number | null | undefined): string {
   if (seconds === null || seconds === undefined || !Number.isFinite(seconds)) return '–';
   // The exact path solves in milliseconds: "1 s" would hide a thousandfold difference.
   if (seconds < 1) return `${Math.max(1, Math.round(seconds * 1000))} ms`;
-  if (seconds < 10) return `${seconds.toFixed(1)} s`;
+  if (seconds < 10) return `${formatFixed(seconds, 1)} s`;
   if (seconds < 60) return `${Math.round(seconds)} s`;
   const minutes = Math.round(seconds / 60);
   if (minutes < 60) return `${minutes} min`;
@@ -72,7 +90,7 @@ export function formatDuration(seconds: number | null | undefined): string {
 /** Steps as hours or minutes: "5 h", "45 min". */
 export function formatSteps(steps: number, stepMinutes: number): string {
   const minutes = steps * stepMinutes;
-  return minutes % 60 === 0 ? `${minutes / 60} h` : minutes > 60 ? `${(minutes / 60).toFixed(1)} h` : `${minutes} min`;
+  return minutes % 60 === 0 ? `${minutes / 60} h` : minutes > 60 ? `${formatFixed(minutes / 60, 1)} h` : `${minutes} min`;
 }
 
 /**

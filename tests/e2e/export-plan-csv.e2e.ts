@@ -127,15 +127,22 @@ describe('exporting a plan to CSV', () => {
         const plan = await apiGet<PlanInputs>(page, `/api/plans/${planId}`);
         const { energyKwh, efficiencyCharge, efficiencyDischarge, selfDischargePctPerHour } = plan.inputs.battery;
         const dt = plan.results.stepMinutes / 60;
+        // The file writes kW and kWh to 3 decimals and % to 2: each written flow is within 0.0005 kW of the engine's,
+        // so the SoC followed from them may drift by 0.0005·Δt·(η_ch + 1/η_dis) kWh a step, plus the SoC's own rounding.
         let energy = (plan.initialSocPct / 100) * energyKwh;
-        for (const row of rows) {
+        const drift = 0.0005 * dt * (efficiencyCharge + 1 / efficiencyDischarge);
+        rows.forEach((row, t) => {
           energy =
             (1 - (selfDischargePctPerHour / 100) * dt) * energy +
             efficiencyCharge * num(row, 'charge_kw') * dt -
             (num(row, 'discharge_kw') * dt) / efficiencyDischarge;
-          expect(Math.abs(num(row, 'soc_end_kwh') - energy), `SoC at ${row.interval_start}`).toBeLessThan(1e-6 * energyKwh);
-          expect(num(row, 'soc_end_pct')).toBeCloseTo((num(row, 'soc_end_kwh') / energyKwh) * 100, 9);
-        }
+          expect(Math.abs(num(row, 'soc_end_kwh') - energy), `SoC at ${row.interval_start}`).toBeLessThan(
+            1e-6 * energyKwh + 0.0005 + (t + 1) * drift,
+          );
+          expect(Math.abs(num(row, 'soc_end_pct') - (num(row, 'soc_end_kwh') / energyKwh) * 100)).toBeLessThanOrEqual(
+            0.005 + (0.0005 / energyKwh) * 100 + 1e-9,
+          );
+        });
 
         // The facts on the first row: the page's checksum, the approver, the cautions.
         const first = rows[0] ?? {};

@@ -84,17 +84,33 @@ describe('exporting an approved plan', () => {
     expect(rows.map((r) => Number(r.price_eur_per_mwh))).toEqual(place.prices.slice(0, 24));
   });
 
-  it('names the file after site, window, plan, status and checksum, and sends the checksum in a header', () => {
+  it('names the file after site, window, plan and status in under 100 characters, and sends the checksum in a header', () => {
     const disposition = response.headers['content-disposition'] as string;
     const slug = place.siteName
       .toLowerCase()
       .replace(/[^a-z0-9]+/g, '-')
       .replace(/^-|-$/g, '');
-    expect(disposition).toBe(
-      `attachment; filename="slackwater_${slug}_2026-03-29T0000+0100_to_2026-03-30T0100+0200_plan-${plan.id}_approved_sha256-${plan.checksum}.csv"`,
-    );
+    // [D] 24 one-hour intervals from 00:00+01:00 on the spring DST day; the plan id's first 8 characters.
+    const fileName = `slackwater_${slug}_2026-03-29T0000+0100_24h_plan-${plan.id.slice(0, 8)}_approved.csv`;
+    expect(disposition).toBe(`attachment; filename="${fileName}"`);
+    expect(fileName.length).toBeLessThan(100);
     expect(response.headers['x-slackwater-checksum']).toBe(`sha256=${plan.checksum}`);
     expect(response.headers['x-slackwater-plan-status']).toBe('approved');
+    expect(response.headers['x-slackwater-plan-id']).toBe(plan.id);
+  });
+
+  it("states the approval time with the site's offset and the plan's facts on the first row", async () => {
+    const [first] = rowsOf(text);
+    const stored = await sqlQuery<{ approved_at: Date; battery_id: string }>(
+      'select approved_at, battery_id from plans where id = $1',
+      [plan.id],
+    );
+    const approvedAt = first?.approved_at ?? '';
+    // [D] the same instant as stored, written with Berlin's offset at that time (+01:00 or +02:00), like the intervals.
+    expect(Date.parse(approvedAt)).toBe(Math.floor(stored[0]!.approved_at.getTime() / 1000) * 1000);
+    expect(approvedAt).toMatch(/^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}:\d{2}\+0[12]:00$/);
+    expect(first).toMatchObject({ battery: 'Unit 1', delivery_start: '2026-03-29T00:00:00+01:00', plan_id: plan.id });
+    expect(first?.interval_start_utc).toBe('2026-03-28T23:00:00Z');
   });
 
   it('guards user-written text against formula injection while numbers stay numbers', () => {
@@ -179,9 +195,7 @@ describe('who may export what', () => {
     await approvedPlan('second', { fromHour: 26, hours: 6 });
     const response = await download(planner, older.id);
     expect(response.status).toBe(200);
-    expect(response.headers['content-disposition']).toMatch(
-      new RegExp(`_superseded-not-current_sha256-${older.checksum}\\.csv"$`),
-    );
+    expect(response.headers['content-disposition']).toMatch(/_superseded-not-current\.csv"$/);
     expect(response.headers['x-slackwater-checksum']).toBe(`sha256=${older.checksum}`);
     const rows = rowsOf(response.body as string);
     expect(rows.every((r) => r.plan_status === 'superseded: NOT CURRENT, a newer approved plan replaces it')).toBe(true);

@@ -63,10 +63,13 @@ describe('plan CSV export', () => {
   it('derives net power and SoC % from the series, units in the column names', () => {
     const rows = rowsOf(planCsv(springDay(), meta()));
     const r1 = rows[1] ?? {};
-    // [D] net = discharge - charge = 0 - 1000; SoC % = 500 / 4000 * 100.
-    expect(r1.net_battery_power_kw_discharge_positive).toBe('-1000');
-    expect(r1.soc_end_kwh).toBe('500');
-    expect(r1.soc_end_pct).toBe('12.5');
+    // [D] net = discharge - charge = 0 - 1000; SoC % = 500 / 4000 * 100; kW and kWh with 3 decimals, % with 2.
+    expect(Number(r1.net_battery_power_kw_discharge_positive)).toBe(-1000);
+    expect(r1.net_battery_power_kw_discharge_positive).toBe('-1000.000');
+    expect(Number(r1.soc_end_kwh)).toBe(500);
+    expect(r1.soc_end_kwh).toBe('500.000');
+    expect(Number(r1.soc_end_pct)).toBe(12.5);
+    expect(r1.soc_end_pct).toBe('12.50');
     expect(r1.price_eur_per_mwh).toBe('-7.25');
     expect(rows[3]?.stored_energy_value_eur_per_mwh).toBe('');
     expect(Object.keys(r1)).toContain('grid_import_kw');
@@ -101,7 +104,8 @@ describe('plan CSV export', () => {
     if (!result.ok) throw new Error(JSON.stringify(result.issues));
     expect(result.profile.startMs).toBe(schedule.startMs);
     expect(result.profile.stepMinutes).toBe(60);
-    expect(result.profile.values).toEqual(schedule.priceCurrencyPerMwh.map((v) => (v === 0 ? 0 : v)));
+    // [D] the file writes prices to the cent (88.125 → 88.13, 1e-7 → 0.00), and those figures come back exactly.
+    expect(result.profile.values).toEqual(schedule.priceCurrencyPerMwh.map((v) => Math.round(v * 100) / 100 || 0));
     expect(result.profile.notes.join(' ')).toMatch(/Times from "interval_start".*values from "price_eur_per_mwh"/);
   });
 
@@ -126,16 +130,72 @@ describe('plan CSV export', () => {
       endMs: at('2026-03-29T22:00:00Z'),
       planId: 'p1',
     };
+    // The window as its local start and its length: the spring DST day is 23 hours [S: Directive 2000/84/EC, Art. 2].
     expect(exportFileName({ ...base, status: 'approved', checksum: 'ab'.repeat(32) })).toBe(
-      `slackwater_hafen-sud-pier-3_2026-03-29T0000+0100_to_2026-03-30T0000+0200_plan-p1_approved_sha256-${'ab'.repeat(32)}.csv`,
+      'slackwater_hafen-sud-pier-3_2026-03-29T0000+0100_23h_plan-p1_approved.csv',
     );
     expect(exportFileName({ ...base, status: 'draft', checksum: null })).toBe(
-      'slackwater_hafen-sud-pier-3_2026-03-29T0000+0100_to_2026-03-30T0000+0200_plan-p1_draft-NOT-APPROVED.csv',
+      'slackwater_hafen-sud-pier-3_2026-03-29T0000+0100_23h_plan-p1_draft-NOT-APPROVED.csv',
     );
   });
 
   it('refuses series whose length differs from the window, instead of shifting rows', () => {
     const broken = { ...springDay(), chargeKw: [0] };
     expect(() => planCsv(broken, meta())).toThrow(/chargeKw series has 1 entries but the delivery window has 23/);
+  });
+
+  it('keeps every file name under 100 characters, the checksum in the file instead', () => {
+    const longest = exportFileName({
+      siteName: 'Harbourside Depot and Container Terminal, North Quay',
+      timezone: 'America/St_Johns',
+      startMs: at('2026-01-01T00:00:00-03:30'),
+      endMs: at('2027-01-01T00:00:00-03:30'),
+      planId: '5b1d3c9a-0000-4000-8000-00000000000a',
+      status: 'submitted',
+      checksum: 'ab'.repeat(32),
+    });
+    expect(longest).toBe('slackwater_harbourside-depot_2026-01-01T0000-0330_8760h_plan-5b1d3c9a_submitted-NOT-APPROVED.csv');
+    expect(longest.length).toBeLessThan(100);
+    expect(rowsOf(planCsv(springDay(), meta()))[0]?.checksum_sha256).toBe('ab'.repeat(32));
+  });
+
+  it("writes kW and kWh with 3 decimals, prices with 2 and % with 2, never the solver's rounding noise", () => {
+    const noisy = { ...springDay(), chargeKw: springDay().chargeKw.map((c, i) => (i === 0 ? 1387.4999999999998 : c)) };
+    const text = planCsv(noisy, meta());
+    expect(text).not.toMatch(/\d\.\d*9999|\d\.\d*0000\d/);
+    const [first, second] = rowsOf(text);
+    // [D] 1387.4999999999998 kW is 1387.500 kW to the watt; net = 0 − 1387.500.
+    expect(first?.charge_kw).toBe('1387.500');
+    expect(first?.net_battery_power_kw_discharge_positive).toBe('-1387.500');
+    expect(first?.price_eur_per_mwh).toBe('12.50');
+    expect(first?.stored_energy_value_eur_per_mwh).toBe('40.00');
+    expect(second?.price_eur_per_mwh).toBe('-7.25');
+    for (const row of rowsOf(text)) {
+      for (const column of ['charge_kw', 'discharge_kw', 'soc_end_kwh', 'grid_import_kw', 'grid_export_kw'])
+        expect(row[column]).toMatch(/^-?\d+\.\d{3}$/);
+      expect(row.soc_end_pct).toMatch(/^-?\d+\.\d{2}$/);
+    }
+  });
+
+  it("gives each interval's start in UTC too, and the approval time with the site's offset", () => {
+    const rows = rowsOf(planCsv(springDay(), meta({ approvedAt: '2026-03-27T16:00:00Z' })));
+    // [S: Directive 2000/84/EC] 2026-03-29T03:00+02:00 is 01:00 UTC; 27 March is still winter time (+01:00).
+    expect(rows[2]?.interval_start_utc).toBe('2026-03-29T01:00:00Z');
+    expect(rows.every((r) => Date.parse(r.interval_start_utc ?? '') === Date.parse(r.interval_start ?? ''))).toBe(true);
+    expect(rows[0]?.approved_at).toBe('2026-03-27T17:00:00+01:00');
+  });
+
+  it('puts the status in column A of every row and the cautions in B2, where a spreadsheet opens', () => {
+    const text = planCsv(
+      springDay(),
+      meta({ batteryName: 'Unit 1', batteryVersion: 2, horizonHours: 48, terminalRule: 'steady-value' }),
+    );
+    const header = text.split('\r\n')[0]?.split(',') ?? [];
+    expect(header.slice(0, 3)).toEqual(['plan_status', 'notice', 'interval_start']);
+    const [first, second] = rowsOf(text);
+    expect(first?.notice).toBe('Decision support only.');
+    expect(second?.notice).toBe('');
+    expect(first).toMatchObject({ battery: 'Unit 1', battery_version: '2', horizon_hours: '48', terminal_rule: 'steady-value' });
+    expect(second?.battery).toBe('');
   });
 });

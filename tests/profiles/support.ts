@@ -12,6 +12,8 @@ export interface UploadFields {
   name?: string;
   intervalEnding?: boolean;
   fillGaps?: boolean;
+  dateOrder?: string;
+  decimalSeparator?: string;
 }
 
 /** POST /api/sites/:id/profiles as a browser form would send it. */

@@ -3,9 +3,33 @@
  * legend (ChartFigure) around one or more XYCharts drawn at a fixed height in
  * the shared look (ChartPlot).
  */
-import type { ReactNode } from 'react';
+import { createContext, useContext, useLayoutEffect, useRef, useState, type ReactNode } from 'react';
 import { Grid, XYChart, type Margin, type XYChartTheme } from '@visx/xychart';
 import { chartMargin, chartTheme } from './chart-theme';
+
+/** The plot being rendered: its whole width and the x where drawing starts and ends (px), for axes that fit their ticks. */
+export interface PlotBox {
+  width: number;
+  left: number;
+  right: number;
+}
+const PlotBoxContext = createContext<PlotBox>({ width: 600, left: chartMargin.left, right: 600 - chartMargin.right });
+export const usePlotBox = () => useContext(PlotBoxContext);
+
+/** The element's content width, kept up to date; 0 until measured. */
+function useWidth() {
+  const ref = useRef<HTMLDivElement>(null);
+  const [width, setWidth] = useState(0);
+  useLayoutEffect(() => {
+    const box = ref.current;
+    if (!box) return;
+    setWidth(box.clientWidth);
+    const observer = new ResizeObserver(([entry]) => setWidth(Math.floor(entry?.contentRect.width ?? 0)));
+    observer.observe(box);
+    return () => observer.disconnect();
+  }, []);
+  return { ref, width };
+}
 
 export interface LegendItem {
   colour: string;
@@ -47,13 +71,21 @@ interface ChartPlotProps extends Pick<XYChartProps, 'xScale' | 'yScale' | 'acces
 }
 
 export function ChartPlot({ height, gridTicks, margin, theme = chartTheme, children, ...rest }: ChartPlotProps) {
+  const { ref, width } = useWidth();
+  const sides = { ...chartMargin, ...margin };
+  const inner = width - sides.left - sides.right;
   return (
-    // XYChart takes its width from its parent, which needs the height or the chart collapses onto what follows.
-    <div style={{ height }}>
-      <XYChart height={height} theme={theme} margin={{ ...chartMargin, ...margin }} {...rest}>
-        <Grid columns={false} numTicks={gridTicks} />
-        {children}
-      </XYChart>
+    // The box keeps the chart's height while it is measured, or the chart collapses onto what follows.
+    <div ref={ref} style={{ height }} className="min-w-0">
+      {/* Drawn once there is room for the plot: a width below the margins would give its rectangles negative sizes. */}
+      {inner > 20 && (
+        <PlotBoxContext.Provider value={{ width, left: sides.left, right: width - sides.right }}>
+          <XYChart width={width} height={height} theme={theme} margin={sides} {...rest}>
+            <Grid columns={false} numTicks={gridTicks} />
+            {children}
+          </XYChart>
+        </PlotBoxContext.Provider>
+      )}
     </div>
   );
 }

@@ -1,4 +1,7 @@
-/** Slackwater's chart look (DESIGN section 7): ink structure, sea-glass battery and steady cycle, amber leaving arc. */
+/**
+ * Slackwater's chart look: ink structure, sea-glass battery and steady cycle, amber only
+ * for warnings and the leaving arc, brick red only for violations (never an ordinary series).
+ */
 import { buildChartTheme } from '@visx/xychart';
 
 export const colours = {
@@ -8,19 +11,30 @@ export const colours = {
   seaglass: '#2f9c81',
   seaglassSoft: '#98dcc6',
   seaglassBand: '#dcf4ec',
+  /** Further cool series colours, for lines told apart by colour (plans, curves, site flows). */
+  harbour: '#2e6ca8',
+  heather: '#7656a0',
+  tide: '#2a8aa3',
+  slate: '#6b7a90',
+  /** Reserved: warnings and the leaving arc. */
   amber: '#e0961f',
+  /** Reserved: violations. */
   brick: '#b23a26',
 };
 
-/** Lines told apart by colour alone (one per plan, curve or rule), in the order they are handed out. */
+/**
+ * Lines told apart by colour (one per plan, curve or rule), in the order they are handed out.
+ * Amber and brick are not among them: they keep their meaning (warning, violation).
+ */
 export const seriesPalette = [
   colours.ink,
+  colours.harbour,
   colours.seaglass,
-  colours.amber,
+  colours.heather,
+  colours.tide,
+  colours.slate,
   colours.inkSoft,
-  colours.brick,
   colours.seaglassSoft,
-  colours.inkFaint,
 ];
 
 /**
@@ -39,9 +53,10 @@ export function chartThemeWith(seriesColours: string[]) {
   });
 }
 
-export const chartTheme = chartThemeWith([colours.ink, colours.seaglass, colours.amber]);
+export const chartTheme = chartThemeWith([colours.ink, colours.seaglass, colours.harbour]);
 
-export const chartMargin = { top: 12, right: 16, bottom: 32, left: 64 };
+/** Room below for two-line time labels (time, then the date where the day changes); to the right for the last label. */
+export const chartMargin = { top: 12, right: 24, bottom: 40, left: 64 };
 
 /** The lookahead is drawn dashed and faded, apart from the delivery window. */
 export const lookaheadLine = { strokeDasharray: '5 4', strokeOpacity: 0.6 };

@@ -1,6 +1,7 @@
 import { useEffect, useId, useRef, useState } from 'react';
 import { Link, useNavigate } from 'react-router-dom';
 import { roleLabels, type AuthUser } from '@shared/schemas/auth';
+import { NumberFormatChoice } from '@/components/number-format-choice';
 import { useSignOut } from '../api/sign-out';
 
 const initials = (name: string) =>
@@ -72,6 +73,9 @@ export function AccountMenu({ user }: { user: AuthUser }) {
             Signed in as <span className="font-medium break-all">{user.email}</span>
             <span className="mt-0.5 block text-xs text-ink-500">Role: {roleLabels[user.role]}</span>
           </p>
+          <div className="border-b border-ink-100 px-4 py-2">
+            <NumberFormatChoice id={`${panelId}-number-format`} />
+          </div>
           <ul className="pt-1 text-sm">
             <li>
               <Link

@@ -1,36 +1,39 @@
 import { Link } from 'react-router-dom';
 import type { Battery } from '@shared/schemas/battery';
 import { EmptyState, ErrorState, LoadingState } from '@/components/query-state';
+import { ScrollRegion } from '@/components/scroll-region';
+import { numClass, tableClass, tdClass, thClass, theadClass } from '@/components/table-classes';
+import { formatEfficiency, formatNumber } from '@/lib/format';
 import { useSiteBatteries } from '../api/get-site-batteries';
 
-const fmt = (n: number) => n.toLocaleString(undefined, { maximumFractionDigits: 3 });
+const fmt = (n: number) => formatNumber(n, 3);
 
 function BatteryRow({ battery }: { battery: Battery }) {
   return (
     <tr className="border-t border-ink-100">
-      <td className="px-3 py-2">
+      <td className={tdClass}>
         <Link to={`/batteries/${battery.id}`} className="font-medium text-seaglass-700 underline-offset-2 hover:underline">
           {battery.name}
         </Link>
       </td>
-      <td className="px-3 py-2 tabular-nums">
+      <td className={`${tdClass} ${numClass}`}>
         {fmt(battery.powerChargeKw)} / {fmt(battery.powerDischargeKw)} kW
       </td>
-      <td className="px-3 py-2 tabular-nums">{fmt(battery.energyKwh)} kWh</td>
-      <td className="px-3 py-2 tabular-nums">
+      <td className={`${tdClass} ${numClass}`}>{fmt(battery.energyKwh)} kWh</td>
+      <td className={`${tdClass} ${numClass}`}>
         {fmt(battery.socMinPct)}–{fmt(battery.socMaxPct)} %
       </td>
-      <td className="px-3 py-2 tabular-nums">{(battery.efficiencyCharge * battery.efficiencyDischarge * 100).toFixed(1)} %</td>
-      <td className="px-3 py-2">
+      <td className={`${tdClass} ${numClass}`}>{formatEfficiency(battery.efficiencyCharge * battery.efficiencyDischarge)}</td>
+      <td className={tdClass}>
         {battery.warnings.length > 0 ? (
           <span
-            className="rounded bg-amber-100 px-2 py-0.5 text-sm text-ink-900"
+            className="rounded bg-amber-100 px-2 py-0.5 whitespace-nowrap text-ink-900"
             title={battery.warnings.map((w) => w.message).join('\n')}
           >
             {battery.warnings.length} to check
           </span>
         ) : (
-          <span className="text-sm text-ink-500">none</span>
+          <span className="text-ink-500">none</span>
         )}
       </td>
     </tr>
@@ -43,35 +46,37 @@ export function BatteriesList({ siteId }: { siteId: string }) {
   if (batteries.isError) return <ErrorState error={batteries.error} onRetry={() => void batteries.refetch()} />;
   if (batteries.data.length === 0) return <EmptyState title="No batteries at this site yet." />;
   return (
-    <table className="w-full rounded bg-white text-left shadow-sm">
-      <caption className="sr-only">Batteries</caption>
-      <thead className="bg-ink-100 text-sm text-ink-700">
-        <tr>
-          <th scope="col" className="px-3 py-2">
-            Battery
-          </th>
-          <th scope="col" className="px-3 py-2">
-            Charge / discharge
-          </th>
-          <th scope="col" className="px-3 py-2">
-            Energy
-          </th>
-          <th scope="col" className="px-3 py-2">
-            SoC window
-          </th>
-          <th scope="col" className="px-3 py-2">
-            Round trip
-          </th>
-          <th scope="col" className="px-3 py-2">
-            Warnings
-          </th>
-        </tr>
-      </thead>
-      <tbody>
-        {batteries.data.map((b) => (
-          <BatteryRow key={b.id} battery={b} />
-        ))}
-      </tbody>
-    </table>
+    <ScrollRegion label="Batteries table (scrolls sideways)">
+      <table className={tableClass}>
+        <caption className="sr-only">Batteries</caption>
+        <thead className={theadClass}>
+          <tr>
+            <th scope="col" className={thClass}>
+              Battery
+            </th>
+            <th scope="col" className={`${thClass} ${numClass}`}>
+              Charge / discharge
+            </th>
+            <th scope="col" className={`${thClass} ${numClass}`}>
+              Energy
+            </th>
+            <th scope="col" className={`${thClass} ${numClass}`}>
+              SoC window
+            </th>
+            <th scope="col" className={`${thClass} ${numClass}`}>
+              Round-trip efficiency
+            </th>
+            <th scope="col" className={thClass}>
+              Warnings
+            </th>
+          </tr>
+        </thead>
+        <tbody>
+          {batteries.data.map((b) => (
+            <BatteryRow key={b.id} battery={b} />
+          ))}
+        </tbody>
+      </table>
+    </ScrollRegion>
   );
 }

@@ -9,7 +9,9 @@ import {
 import { lithiumIonDefaults } from '@shared/schemas/battery-defaults';
 import { batteryWarnings, type SiteLimits } from '@shared/schemas/battery-warnings';
 import { FormActions, FormField, WarningNote, buttonClass, describedBy, inputClass } from '@/components/form-field';
-import { fieldErrors, numberText, parseNumberInput } from '@/lib/form-values';
+import { NumberFormatChoice } from '@/components/number-format-choice';
+import { fieldErrors, numberInputErrors, numberText, parseNumberInput } from '@/lib/form-values';
+import { formatEfficiency, formatFixed, formatNumber } from '@/lib/format';
 import { BATTERY_FIELD_GROUPS } from './battery-form-fields';
 
 type ParamKey = keyof BatteryParams;
@@ -45,8 +47,11 @@ export function BatteryForm({ battery, site, serverError, pending, onSubmit, onC
   const [text, setText] = useState<Text>(() => toText(battery ?? lithiumIonDefaults()));
   const [touched, setTouched] = useState(false);
   const parsed = batterySchema.safeParse(fromText(text));
+  const numberTexts = Object.fromEntries((Object.keys(BATTERY_FIELD_LABELS) as ParamKey[]).map((key) => [key, text[key]]));
   const errors = {
     ...(touched && !parsed.success ? fieldErrors(parsed.error) : {}),
+    // Why a number was refused (a separator of the other format, "3.000"), over the schema's "enter a number".
+    ...(touched ? numberInputErrors(numberTexts) : {}),
     ...(serverError ? fieldErrors(serverError) : {}),
   };
   const warnings = parsed.success ? batteryWarnings(parsed.data, site) : [];
@@ -70,6 +75,7 @@ export function BatteryForm({ battery, site, serverError, pending, onSubmit, onC
 
   return (
     <form onSubmit={submit} noValidate className="space-y-5" aria-label={battery ? 'Edit battery' : 'New battery'}>
+      <NumberFormatChoice id="battery-number-format" />
       <div className="max-w-md">
         <FormField id="battery-name" label="Name" error={errors.name}>
           <input
@@ -110,9 +116,9 @@ export function BatteryForm({ battery, site, serverError, pending, onSubmit, onC
       ))}
       {parsed.success && (
         <p className="text-sm text-ink-700">
-          Round trip {(parsed.data.efficiencyCharge * parsed.data.efficiencyDischarge * 100).toFixed(1)} % · duration{' '}
-          {(parsed.data.energyKwh / parsed.data.powerDischargeKw).toFixed(2)} h · usable{' '}
-          {((parsed.data.energyKwh * (parsed.data.socMaxPct - parsed.data.socMinPct)) / 100).toLocaleString()} kWh
+          Round-trip efficiency {formatEfficiency(parsed.data.efficiencyCharge * parsed.data.efficiencyDischarge)} · duration{' '}
+          {formatFixed(parsed.data.energyKwh / parsed.data.powerDischargeKw, 2)} h · usable{' '}
+          {formatNumber((parsed.data.energyKwh * (parsed.data.socMaxPct - parsed.data.socMinPct)) / 100, 1)} kWh
         </p>
       )}
       {general.map((w) => (

@@ -6,6 +6,7 @@ import { useState, type FormEvent } from 'react';
 import type { Plan } from '@shared/schemas/plan';
 import { buttonClass, inputClass } from '@/components/form-field';
 import { ApiError } from '@/lib/api-client';
+import { readNumberInput } from '@/lib/form-values';
 import { useCreatePlan } from '../api/create-plan';
 
 const horizonChoices = [24, 36, 48, 72, 96, 168];
@@ -23,7 +24,14 @@ export function CompareHorizonsForm({ base, existing }: { base: Plan; existing: 
 
   const submit = async (e: FormEvent) => {
     e.preventDefault();
-    const all = [...horizons, ...(extra.trim() ? [Number(extra)] : [])].filter((h) => Number.isFinite(h) && h >= windowHours);
+    const other = readNumberInput(extra);
+    if (other.error) {
+      setMessage(`Another horizon: ${other.error}`);
+      return;
+    }
+    const all = [...horizons, ...(other.value !== null ? [other.value] : [])].filter(
+      (h) => Number.isFinite(h) && h >= windowHours,
+    );
     const wanted = all.flatMap((h) => rules.map((r) => ({ h, r }))).filter(({ h, r }) => !have.has(`${h}/${r}`));
     if (wanted.length === 0) {
       setMessage('Every chosen combination already has a plan (horizons shorter than the window are left out).');

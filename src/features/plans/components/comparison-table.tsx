@@ -1,8 +1,9 @@
 import { Link } from 'react-router-dom';
 import type { Plan } from '@shared/schemas/plan';
-import { formatMoney, formatNumber, formatPercent, formatSteps } from '@/lib/format';
+import { formatFixed, formatMoney, formatPercent, formatSteps } from '@/lib/format';
 import { ruleLabel } from './comparison-labels';
 import { ScrollRegion } from '@/components/scroll-region';
+import { numClass, tableClass, theadClass } from '@/components/table-classes';
 
 /**
  * The plan the others are measured against: the longest horizon computed, the same rule preferred
@@ -33,9 +34,9 @@ export function ComparisonTable({ plans }: { plans: Plan[] }) {
   const currency = plans[0]?.inputs?.site.currency ?? '';
   return (
     <ScrollRegion label="Comparison table (scrolls sideways)">
-      <table className="w-full rounded bg-white text-left text-sm shadow-sm">
+      <table className={tableClass}>
         <caption className="sr-only">Plans of this delivery window by horizon and terminal rule</caption>
-        <thead className="bg-ink-100 text-ink-700">
+        <thead className={theadClass}>
           <tr>
             {[
               'Horizon',
@@ -49,8 +50,8 @@ export function ComparisonTable({ plans }: { plans: Plan[] }) {
               'Commit window',
               'Max SoC gap to longest plan',
               'Flags',
-            ].map((h) => (
-              <th key={h} scope="col" className="whitespace-nowrap px-2 py-1.5">
+            ].map((h, k) => (
+              <th key={h} scope="col" className={`px-2 py-1.5 align-bottom ${k >= 3 && k <= 9 ? numClass : ''}`}>
                 {h}
               </th>
             ))}
@@ -62,7 +63,7 @@ export function ComparisonTable({ plans }: { plans: Plan[] }) {
             const step = r?.stepMinutes ?? 60;
             const gap = differenceToLongest(p, plans);
             return (
-              <tr key={p.id} className="border-t border-ink-100 tabular-nums">
+              <tr key={p.id} className="border-t border-ink-100">
                 <td className="px-2 py-1">
                   <Link to={`/plans/${p.id}`} className="font-semibold text-seaglass-700 underline">
                     {p.horizonHours} h
@@ -70,15 +71,15 @@ export function ComparisonTable({ plans }: { plans: Plan[] }) {
                 </td>
                 <td className="px-2 py-1">{ruleLabel(p)}</td>
                 <td className="px-2 py-1">{p.method ?? p.job?.state ?? ''}</td>
-                <td className="px-2 py-1">{formatMoney(r?.summary.cost, currency)}</td>
-                <td className="px-2 py-1">{formatMoney(r?.summary.earnings, currency)}</td>
-                <td className="px-2 py-1">{formatPercent(r?.turnpike.nearSteadyShare)}</td>
-                <td className="px-2 py-1">{r ? formatSteps(r.turnpike.entryArcSteps, step) : '–'}</td>
-                <td className="px-2 py-1">{r ? formatSteps(r.turnpike.leavingArcSteps, step) : '–'}</td>
-                <td className="px-2 py-1">
+                <td className={`px-2 py-1 ${numClass}`}>{formatMoney(r?.summary.cost, currency)}</td>
+                <td className={`px-2 py-1 ${numClass}`}>{formatMoney(r?.summary.earnings, currency)}</td>
+                <td className={`px-2 py-1 ${numClass}`}>{formatPercent(r?.turnpike.nearSteadyShare)}</td>
+                <td className={`px-2 py-1 ${numClass}`}>{r ? formatSteps(r.turnpike.entryArcSteps, step) : '–'}</td>
+                <td className={`px-2 py-1 ${numClass}`}>{r ? formatSteps(r.turnpike.leavingArcSteps, step) : '–'}</td>
+                <td className={`px-2 py-1 ${numClass}`}>
                   {r && r.turnpike.commitWindowSteps !== null ? formatSteps(r.turnpike.commitWindowSteps, step) : '–'}
                 </td>
-                <td className="px-2 py-1">{gap === null ? '–' : `${formatNumber(gap, 1)} %`}</td>
+                <td className={`px-2 py-1 ${numClass}`}>{gap === null ? '–' : `${formatFixed(gap, 1)} %`}</td>
                 <td className="px-2 py-1">
                   {/* Flagged plans stand out in amber (DESIGN section 7); the flags' words are on the plan page. */}
                   {r && r.turnpike.flags.length > 0 ? (

@@ -10,11 +10,12 @@ import type { SteadyDays } from '@shared/schemas/steady-days';
 import { FormField, buttonClass, describedBy, inputClass } from '@/components/form-field';
 import { RunSourceFields, useRunSourceLists, type RunSource } from '@/components/run-source-fields';
 import { SteadyDaysField, steadyDaysOf } from '@/components/steady-days-field';
-import { fieldErrors, parseNumberInput } from '@/lib/form-values';
+import { NumberFormatChoice } from '@/components/number-format-choice';
+import { fieldErrors, numberInputErrors, numberText, parseNumberInput, readNumberInput } from '@/lib/form-values';
 import { formatNumber, fromWallTimeInput, toWallTimeInput } from '@/lib/format';
 import { useCreatePlan } from '../api/create-plan';
 import { usePlanDefaults } from '../api/get-plan-defaults';
-import { TerminalRuleField, terminalRuleText, type TerminalKind } from './terminal-rule-field';
+import { TerminalRuleField, type TerminalKind } from './terminal-rule-field';
 import { prefilledTerminal, prefilledWindow, runSourceOf, type PlanPrefill } from './new-plan-prefill';
 
 const DAY_MS = 86_400_000;
@@ -32,6 +33,13 @@ const sourceSoc: Record<string, string> = {
   request: 'your entry',
 };
 
+/** A number from a link ("25", "40.5") as the form shows it; other text as it is. */
+function linkNumber(text: string | undefined): string {
+  if (text === undefined || text.trim() === '') return '';
+  const n = Number(text);
+  return Number.isFinite(n) ? numberText(n) : text;
+}
+
 function windowLengthHours(startMs: number | null, endMs: number | null): number | null {
   return startMs === null || endMs === null || endMs <= startMs ? null : (endMs - startMs) / 3_600_000;
 }
@@ -46,11 +54,13 @@ export function PlanForm({ initial }: { initial?: PlanPrefill }) {
   const navigate = useNavigate();
   const [source, setSource] = useState<RunSource>(() => runSourceOf(initial));
   const [windowEdit, setWindow] = useState<{ start: string; end: string } | null>(null);
-  const [horizon, setHorizon] = useState(initial?.horizonHours ?? '');
-  const [terminal, setTerminal] = useState<{ kind: TerminalKind; targetPct: string }>(() =>
-    prefilledTerminal(initial?.terminalRule),
-  );
-  const [soc, setSoc] = useState(initial?.initialSocPct ?? '');
+  // Numbers in a link are plain JavaScript text: shown in the person's number format.
+  const [horizon, setHorizon] = useState(() => linkNumber(initial?.horizonHours));
+  const [terminal, setTerminal] = useState<{ kind: TerminalKind; targetPct: string }>(() => {
+    const preset = prefilledTerminal(initial?.terminalRule);
+    return { ...preset, targetPct: linkNumber(preset.targetPct) };
+  });
+  const [soc, setSoc] = useState(() => linkNumber(initial?.initialSocPct));
   const [steadyDays, setSteadyDays] = useState<SteadyDays>(() => steadyDaysOf(initial?.steadyDays));
   const [errors, setErrors] = useState<Record<string, string>>({});
   const create = useCreatePlan();
@@ -71,6 +81,7 @@ export function PlanForm({ initial }: { initial?: PlanPrefill }) {
     e.preventDefault();
     const endMs = fromWallTimeInput(deliveryWindow.end, timeZone);
     const horizonValue = horizon.trim() === '' ? defaultHorizon : parseNumberInput(horizon);
+    const target = readNumberInput(terminal.targetPct);
     const body = {
       batteryId: source.batteryId,
       priceProfileId: source.priceProfileId,
@@ -79,13 +90,16 @@ export function PlanForm({ initial }: { initial?: PlanPrefill }) {
       deliveryStart: startMs === null ? '' : new Date(startMs).toISOString(),
       deliveryEnd: endMs === null ? '' : new Date(endMs).toISOString(),
       horizonHours: horizonValue,
-      terminalRule: terminalRuleText(terminal.kind, terminal.targetPct),
+      terminalRule: terminal.kind === 'target' ? `target:${target.value ?? ''}` : terminal.kind,
       initialSocPct: parseNumberInput(soc),
       steadyDays,
     };
     const parsed = planCreateSchema.safeParse(body);
-    if (!parsed.success) {
-      setErrors(fieldErrors(parsed.error));
+    // Why a typed number was refused (the other format's separator, "3.000") says more than "give a number".
+    const refused = numberInputErrors({ horizonHours: horizon, initialSocPct: soc });
+    if (terminal.kind === 'target' && target.error) refused.terminalRule = target.error;
+    if (!parsed.success || Object.keys(refused).length > 0) {
+      setErrors({ ...(parsed.success ? {} : fieldErrors(parsed.error)), ...refused });
       return;
     }
     setErrors({});
@@ -97,6 +111,7 @@ export function PlanForm({ initial }: { initial?: PlanPrefill }) {
 
   return (
     <form onSubmit={submit} noValidate className="space-y-5 rounded-lg border border-ink-100 bg-white p-5 shadow-sm">
+      <NumberFormatChoice id="plan-number-format" />
       <RunSourceFields value={source} onChange={setSource} errors={errors} />
       <fieldset className="grid gap-4 sm:grid-cols-3">
         <legend className="mb-2 text-sm font-semibold text-ink-800">Delivery window ({timeZone} local time)</legend>
@@ -141,7 +156,7 @@ export function PlanForm({ initial }: { initial?: PlanPrefill }) {
             inputMode="decimal"
             className={inputClass}
             value={horizon}
-            placeholder={defaultHorizon !== null ? String(defaultHorizon) : '48'}
+            placeholder={defaultHorizon !== null ? numberText(defaultHorizon) : '48'}
             aria-invalid={!!errors.horizonHours}
             aria-describedby={describedBy('horizonHours', { error: errors.horizonHours })}
             onChange={(e) => setHorizon(e.target.value)}
@@ -163,7 +178,7 @@ export function PlanForm({ initial }: { initial?: PlanPrefill }) {
             inputMode="decimal"
             className={inputClass}
             value={soc}
-            placeholder={defaults.data ? String(defaults.data.initialSocPct) : ''}
+            placeholder={defaults.data ? numberText(defaults.data.initialSocPct) : ''}
             aria-invalid={!!errors.initialSocPct}
             aria-describedby={describedBy('initialSocPct', { error: errors.initialSocPct })}
             onChange={(e) => setSoc(e.target.value)}

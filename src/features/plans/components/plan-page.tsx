@@ -13,6 +13,7 @@ import { ErrorState, LoadingState } from '@/components/query-state';
 import { JobProgressBar, isJobActive } from '@/components/job-progress';
 import { formatLocalTime, formatNumber } from '@/lib/format';
 import { usePlan } from '../api/get-plan';
+import { useSiteFlows } from '../api/get-site-flows';
 import { Cautions } from './cautions';
 import { PlanSummaryCard } from './plan-summary-card';
 import { TurnpikePanel } from './turnpike-panel';
@@ -65,6 +66,32 @@ function sectionsOf(plan: Plan, withSignOff: boolean): PlanSection[] {
   ];
 }
 
+/** The charts, with the site's load and generation read from the plan's profiles. */
+function PlanChartsSection({ plan, results }: { plan: Plan; results: NonNullable<Plan['results']> }) {
+  const inputs = plan.inputs;
+  const flows = useSiteFlows(plan);
+  const energyKwh = inputs?.battery.energyKwh ?? 1;
+  const usableKwh = inputs ? (energyKwh * (inputs.battery.socMaxPct - inputs.battery.socMinPct)) / 100 : 1;
+  return (
+    <section aria-labelledby="charts-heading">
+      <h2 id="charts-heading" className="sr-only">
+        Charts
+      </h2>
+      <LazyPlanCharts
+        results={results}
+        timeZone={inputs?.site.timezone ?? 'UTC'}
+        currency={inputs?.site.currency ?? ''}
+        energyKwh={energyKwh}
+        usableKwh={usableKwh}
+        load={flows.load}
+        generation={flows.generation}
+        importLimitKw={inputs?.site.importLimitKw ?? null}
+        exportLimitKw={inputs?.site.exportLimitKw ?? null}
+      />
+    </section>
+  );
+}
+
 export function PlanPage({ signOff }: { signOff?: (planId: string) => ReactNode }) {
   const { id = '' } = useParams();
   const query = usePlan(id);
@@ -76,7 +103,6 @@ export function PlanPage({ signOff }: { signOff?: (planId: string) => ReactNode 
   const tz = inputs?.site.timezone ?? 'UTC';
   const currency = inputs?.site.currency ?? '';
   const energyKwh = inputs?.battery.energyKwh ?? 1;
-  const usableKwh = inputs ? (energyKwh * (inputs.battery.socMaxPct - inputs.battery.socMinPct)) / 100 : 1;
   return (
     <article className="space-y-6">
       <header className="space-y-3">
@@ -103,20 +129,15 @@ export function PlanPage({ signOff }: { signOff?: (planId: string) => ReactNode 
       )}
       {plan.results && (
         <>
-          <PlanSummaryCard results={plan.results} currency={currency} />
+          <PlanSummaryCard
+            results={plan.results}
+            currency={currency}
+            energyKwh={energyKwh}
+            initialSocPct={plan.initialSocPct}
+            socWindow={inputs ? [inputs.battery.socMinPct, inputs.battery.socMaxPct] : null}
+          />
           <TurnpikePanel results={plan.results} />
-          <section aria-labelledby="charts-heading">
-            <h2 id="charts-heading" className="sr-only">
-              Charts
-            </h2>
-            <LazyPlanCharts
-              results={plan.results}
-              timeZone={tz}
-              currency={currency}
-              energyKwh={energyKwh}
-              usableKwh={usableKwh}
-            />
-          </section>
+          <PlanChartsSection plan={plan} results={plan.results} />
           {inputs && <HorizonPreviewSection plan={plan} inputs={inputs} results={plan.results} />}
           <section aria-labelledby="schedule-heading" className="space-y-2">
             <h2 id="schedule-heading" className="text-lg font-semibold text-ink-900">

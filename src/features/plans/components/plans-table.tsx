@@ -3,6 +3,7 @@ import type { Plan } from '@shared/schemas/plan';
 import { useSiteTime } from '@/components/use-site-time';
 import { formatMoney, formatPercent } from '@/lib/format';
 import { ScrollRegion } from '@/components/scroll-region';
+import { numClass, tableClass, theadClass } from '@/components/table-classes';
 
 /** One row per plan: window, horizon, status, the job and the headline figures. */
 export function PlansTable({ plans }: { plans: Plan[] }) {
@@ -10,12 +11,12 @@ export function PlansTable({ plans }: { plans: Plan[] }) {
   const { local } = useSiteTime();
   return (
     <ScrollRegion label="Plans table (scrolls sideways)">
-      <table className="w-full rounded bg-white text-left text-sm shadow-sm">
-        <thead className="bg-ink-100 text-ink-700">
+      <table className={tableClass}>
+        <thead className={theadClass}>
           <tr>
             {['Battery', 'Delivery (site time)', 'Horizon', 'Rule', 'Status', 'Computation', 'Cost', 'Near-steady', 'Flags'].map(
-              (h) => (
-                <th key={h} scope="col" className="whitespace-nowrap px-2 py-1.5">
+              (h, k) => (
+                <th key={h} scope="col" className={`whitespace-nowrap px-2 py-1.5 ${[2, 6, 7].includes(k) ? numClass : ''}`}>
                   {h}
                 </th>
               ),
@@ -24,25 +25,26 @@ export function PlansTable({ plans }: { plans: Plan[] }) {
         </thead>
         <tbody>
           {plans.map((p) => (
-            <tr key={p.id} className="border-t border-ink-100 tabular-nums">
+            <tr key={p.id} className="border-t border-ink-100">
               <td className="px-2 py-1">
                 <Link to={`/plans/${p.id}`} className="font-semibold text-seaglass-700 underline">
                   {p.batteryName ?? 'battery'}
                 </Link>
                 <span className="block text-xs text-ink-500">{p.siteName}</span>
               </td>
-              <td className="whitespace-nowrap px-2 py-1">
-                {local(p.deliveryStart, p.siteId)} – {local(p.deliveryEnd, p.siteId)}
+              <td className="whitespace-nowrap px-2 py-1 tabular-nums">
+                <span className="block">{local(p.deliveryStart, p.siteId)} –</span>
+                <span className="block">{local(p.deliveryEnd, p.siteId)}</span>
               </td>
-              <td className="px-2 py-1">{p.horizonHours} h</td>
+              <td className={`px-2 py-1 ${numClass}`}>{p.horizonHours} h</td>
               <td className="px-2 py-1">{p.terminalRule}</td>
               <td className="px-2 py-1">{p.status}</td>
               <td className="px-2 py-1">
                 {p.job?.state === 'running' ? `running ${formatPercent(p.job.shareDone)}` : (p.job?.state ?? '–')}
                 {p.method ? ` · ${p.method}` : ''}
               </td>
-              <td className="px-2 py-1">{formatMoney(p.headline?.cost, '')}</td>
-              <td className="px-2 py-1">{formatPercent(p.headline?.nearSteadyShare)}</td>
+              <td className={`px-2 py-1 ${numClass}`}>{formatMoney(p.headline?.cost, '')}</td>
+              <td className={`px-2 py-1 ${numClass}`}>{formatPercent(p.headline?.nearSteadyShare)}</td>
               <td className={`px-2 py-1 ${p.headline?.flags ? 'font-semibold text-amber-700' : ''}`}>
                 {p.headline ? p.headline.flags : '–'}
               </td>

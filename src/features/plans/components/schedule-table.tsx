@@ -12,11 +12,18 @@ import {
 } from '@tanstack/react-table';
 import type { PlanResults, PlanStep } from '@shared/schemas/plan';
 import { buttonClass } from '@/components/form-field';
-import { formatLocalTime, formatNumber } from '@/lib/format';
+import { formatFixed, formatLocalTime } from '@/lib/format';
 import { ScrollRegion } from '@/components/scroll-region';
+import { numClass, tableClass, theadClass } from '@/components/table-classes';
 
 const features = tableFeatures({ rowPaginationFeature, paginatedRowModel: createPaginatedRowModel() });
 const helper = createColumnHelper<typeof features, PlanStep>();
+
+/** Columns of text; every other column holds figures, right-aligned to fixed decimals. */
+const TEXT_COLUMNS = new Set(['time', 'delivery', 'arc']);
+const alignOf = (id: string) => (TEXT_COLUMNS.has(id) ? 'whitespace-nowrap' : numClass);
+// The start time stays in view while the table scrolls sideways, so every row stays identifiable.
+const stickyFirst = (id: string) => (id === 'time' ? 'sticky left-0 z-10 bg-inherit' : '');
 
 const arcWords: Record<PlanStep['arc'], string> = {
   entry: 'entry arc',
@@ -44,24 +51,24 @@ export function ScheduleTable({
           cell: (i) => formatLocalTime(Date.parse(i.getValue()), timeZone),
         }),
         helper.accessor('delivery', { header: 'Part', cell: (i) => (i.getValue() ? 'delivery' : 'lookahead') }),
-        helper.accessor('priceImport', { header: `Price ${currency}/MWh`, cell: (i) => formatNumber(i.getValue(), 2) }),
-        helper.accessor('chargeKw', { header: 'Charge kW', cell: (i) => formatNumber(i.getValue(), 1) }),
-        helper.accessor('dischargeKw', { header: 'Discharge kW', cell: (i) => formatNumber(i.getValue(), 1) }),
-        helper.accessor('socKwh', { header: 'SoC kWh (end)', cell: (i) => formatNumber(i.getValue(), 1) }),
-        helper.accessor('socPct', { header: 'SoC %', cell: (i) => formatNumber(i.getValue(), 1) }),
+        helper.accessor('priceImport', { header: `Price ${currency}/MWh`, cell: (i) => formatFixed(i.getValue(), 2) }),
+        helper.accessor('chargeKw', { header: 'Charge kW', cell: (i) => formatFixed(i.getValue(), 1) }),
+        helper.accessor('dischargeKw', { header: 'Discharge kW', cell: (i) => formatFixed(i.getValue(), 1) }),
+        helper.accessor('socKwh', { header: 'SoC kWh (end)', cell: (i) => formatFixed(i.getValue(), 1) }),
+        helper.accessor('socPct', { header: 'SoC %', cell: (i) => formatFixed(i.getValue(), 1) }),
         helper.accessor('steadySocKwh', {
           header: 'Steady SoC %',
-          cell: (i) => formatNumber(i.getValue() === null ? null : (i.getValue()! / energyKwh) * 100, 1),
+          cell: (i) => formatFixed(i.getValue() === null ? null : (i.getValue()! / energyKwh) * 100, 1),
         }),
-        helper.accessor('gridImportKw', { header: 'Import kW', cell: (i) => formatNumber(i.getValue(), 1) }),
-        helper.accessor('gridExportKw', { header: 'Export kW', cell: (i) => formatNumber(i.getValue(), 1) }),
+        helper.accessor('gridImportKw', { header: 'Import kW', cell: (i) => formatFixed(i.getValue(), 1) }),
+        helper.accessor('gridExportKw', { header: 'Export kW', cell: (i) => formatFixed(i.getValue(), 1) }),
         helper.accessor('storedEnergyValue', {
           header: `Stored-energy value ${currency}/MWh`,
-          cell: (i) => formatNumber(i.getValue(), 2),
+          cell: (i) => formatFixed(i.getValue(), 2),
         }),
         helper.accessor('distance', {
           header: 'Distance % usable',
-          cell: (i) => formatNumber(i.getValue() === null ? null : i.getValue()! * 100, 1),
+          cell: (i) => formatFixed(i.getValue() === null ? null : i.getValue()! * 100, 1),
         }),
         helper.accessor('arc', { header: 'Arc', cell: (i) => arcWords[i.getValue()] }),
       ]),
@@ -77,15 +84,19 @@ export function ScheduleTable({
   return (
     <div className="space-y-2">
       <ScrollRegion label="Schedule table (scrolls sideways)">
-        <table className="w-full rounded bg-white text-left text-sm shadow-sm">
+        <table className={tableClass}>
           <caption className="sr-only">
             Schedule, one row per step; page {pageIndex + 1} of {table.getPageCount()}
           </caption>
-          <thead className="bg-ink-100 text-ink-700">
+          <thead className={theadClass}>
             {table.getHeaderGroups().map((group) => (
               <tr key={group.id}>
                 {group.headers.map((header) => (
-                  <th key={header.id} scope="col" className="whitespace-nowrap px-2 py-1.5">
+                  <th
+                    key={header.id}
+                    scope="col"
+                    className={`bg-ink-100 px-2 py-1.5 align-bottom ${TEXT_COLUMNS.has(header.column.id) ? 'whitespace-nowrap' : 'text-right'} ${stickyFirst(header.column.id)}`}
+                  >
                     {header.isPlaceholder ? null : <table.FlexRender header={header} />}
                   </th>
                 ))}
@@ -96,10 +107,10 @@ export function ScheduleTable({
             {table.getRowModel().rows.map((row) => (
               <tr
                 key={row.id}
-                className={`border-t border-ink-100 tabular-nums ${row.original.delivery ? '' : 'italic text-ink-500'} ${row.original.arc === 'leaving' ? 'bg-amber-100' : ''}`}
+                className={`border-t border-ink-100 tabular-nums ${row.original.delivery ? '' : 'italic text-ink-500'} ${row.original.arc === 'leaving' ? 'bg-amber-100' : 'bg-white'}`}
               >
                 {row.getAllCells().map((cell) => (
-                  <td key={cell.id} className="whitespace-nowrap px-2 py-1">
+                  <td key={cell.id} className={`px-2 py-1 ${alignOf(cell.column.id)} ${stickyFirst(cell.column.id)}`}>
                     <table.FlexRender cell={cell} />
                   </td>
                 ))}

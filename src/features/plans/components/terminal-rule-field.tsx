@@ -9,10 +9,6 @@ export const terminalChoices: { value: TerminalKind; label: string }[] = [
   { value: 'target', label: 'Target: end at least at a SoC' },
 ];
 
-export function terminalRuleText(kind: TerminalKind, targetPct: string): string {
-  return kind === 'target' ? `target:${targetPct.trim()}` : kind;
-}
-
 interface Props {
   kind: TerminalKind;
   targetPct: string;
@@ -41,12 +37,14 @@ export function TerminalRuleField({ kind, targetPct, onChange, error }: Props) {
         </select>
       </FormField>
       {kind === 'target' && (
-        <FormField id="targetPct" label="End SoC at least" unit="%">
+        <FormField id="targetPct" label="End SoC at least" unit="%" error={error}>
           <input
             id="targetPct"
             inputMode="decimal"
             className={inputClass}
             value={targetPct}
+            aria-invalid={!!error}
+            aria-describedby={describedBy('targetPct', { error })}
             onChange={(e) => onChange(kind, e.target.value)}
           />
         </FormField>

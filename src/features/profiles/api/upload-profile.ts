@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { ProfileSummary } from '@shared/schemas/profile';
-import type { ProfileKind } from '@shared/profile-csv';
+import type { DateOrder, DecimalSeparator, ProfileKind } from '@shared/profile-csv';
 import { api } from '@/lib/api-client';
 
 export interface UploadProfileInput {
@@ -11,6 +11,9 @@ export interface UploadProfileInput {
   name?: string;
   intervalEnding: boolean;
   fillGaps: boolean;
+  /** Left out when the file writes ISO 8601 dates / plain numbers. */
+  dateOrder?: DateOrder | undefined;
+  decimalSeparator?: DecimalSeparator | undefined;
 }
 
 /** multipart/form-data with the field names of DESIGN section 6; a 422 carries `{issues:[{line,message}], hint}`. */
@@ -21,6 +24,8 @@ export function uploadProfile(input: UploadProfileInput) {
   if (input.name) form.append('name', input.name);
   form.append('intervalEnding', String(input.intervalEnding));
   form.append('fillGaps', String(input.fillGaps));
+  if (input.dateOrder) form.append('dateOrder', input.dateOrder);
+  if (input.decimalSeparator) form.append('decimalSeparator', input.decimalSeparator);
   form.append('file', input.file, input.file.name);
   return api.post<ProfileSummary>(`/api/sites/${encodeURIComponent(input.siteId)}/profiles`, form);
 }

@@ -4,12 +4,21 @@ import { FormField, buttonClass, inputClass } from '@/components/form-field';
 import { ErrorState, LoadingState } from '@/components/query-state';
 import { profileOriginalUrl, useProfile } from '../api/get-profile';
 import { downsampleMinMax } from '../lib/downsample';
-import { formatLocalTime, formatNumber } from '@/lib/format';
+import { formatCount, formatLocalTime, formatMoment, formatNumber } from '@/lib/format';
 import { describeStep, displayUnit } from '../lib/format';
 import { localMidnight } from '../lib/local-date';
 import { DeleteProfileButton } from './delete-profile-button';
 import { LazySeriesChart } from './lazy-series-chart';
 import { ProfileValuesTable } from './profile-values-table';
+
+/** The fewest decimals (0-4) that show every value as stored, so one profile's column lines up without hiding digits. */
+function decimalsOf(values: readonly number[]): number {
+  for (let d = 0; d < 4; d += 1) {
+    const scale = 10 ** d;
+    if (values.every((v) => Math.abs(Math.round(v * scale) / scale - v) <= 1e-9 * Math.max(1, Math.abs(v)))) return d;
+  }
+  return 4;
+}
 
 export interface ProfileDetailProps {
   id: string;
@@ -38,13 +47,13 @@ export function ProfileDetail({ id, timezone, currency, canEdit, onDeleted }: Pr
     ['Resolution', describeStep(p.stepMinutes)],
     ['From', formatLocalTime(Date.parse(p.start), timezone)],
     ['To', formatLocalTime(Date.parse(p.end), timezone)],
-    ['Intervals', p.valueCount.toLocaleString()],
+    ['Intervals', formatCount(p.valueCount)],
     ['Min / mean / max', `${formatNumber(p.min, 3)} / ${formatNumber(p.mean, 3)} / ${formatNumber(p.max, 3)}`],
-    ['Filled by interpolation', p.filledCount.toLocaleString()],
+    ['Filled by interpolation', formatCount(p.filledCount)],
     ['Labels', p.intervalEnding ? 'interval-ending (shifted to starts)' : 'interval-beginning'],
-    ['Original file', `${p.originalFilename} (${(p.originalBytes / 1024).toFixed(1)} kB)`],
+    ['Original file', `${p.originalFilename} (${formatNumber(p.originalBytes / 1024, 1)} kB)`],
     ['SHA-256', p.originalSha256],
-    ['Uploaded', `${new Date(p.uploadedAt).toLocaleString()} by ${p.uploadedByName ?? p.uploadedBy}`],
+    ['Uploaded', `${formatMoment(p.uploadedAt)} by ${p.uploadedByName ?? p.uploadedBy}`],
   ];
 
   return (
@@ -79,7 +88,7 @@ export function ProfileDetail({ id, timezone, currency, canEdit, onDeleted }: Pr
           <input id="window-to" type="date" className={inputClass} value={to} onChange={(e) => setTo(e.target.value)} />
         </FormField>
         <p className="pb-2 text-sm text-ink-500">
-          Showing {p.window.count.toLocaleString()} of {p.valueCount.toLocaleString()} intervals.
+          Showing {formatCount(p.window.count)} of {formatCount(p.valueCount)} intervals.
         </p>
       </div>
       <LazySeriesChart points={downsampleMinMax(windowStart, stepMs, p.values)} timeZone={timezone} unit={unit} label={p.name} />
@@ -90,6 +99,7 @@ export function ProfileDetail({ id, timezone, currency, canEdit, onDeleted }: Pr
         filledIndexes={p.filledIndexes.filter((i) => i >= p.window.offset).map((i) => i - p.window.offset)}
         timeZone={timezone}
         unit={unit}
+        decimals={decimalsOf(p.values)}
       />
     </div>
   );

@@ -8,7 +8,9 @@ import {
   useTable,
 } from '@tanstack/react-table';
 import { buttonClass, compactSelect } from '@/components/form-field';
-import { formatLocalTime, formatNumber } from '@/lib/format';
+import { ScrollRegion } from '@/components/scroll-region';
+import { numClass, tableClass, theadClass } from '@/components/table-classes';
+import { formatCount, formatFixed, formatLocalTime } from '@/lib/format';
 
 interface ValueRow {
   index: number;
@@ -28,9 +30,22 @@ export interface ProfileValuesTableProps {
   filledIndexes: readonly number[];
   timeZone: string;
   unit: string;
+  /** Decimals every value is shown with. */
+  decimals: number;
 }
 
-export function ProfileValuesTable({ startMs, stepMinutes, values, filledIndexes, timeZone, unit }: ProfileValuesTableProps) {
+/** Figures right-aligned to one number of decimals, e.g. 2 for prices and 3 for kW. */
+const NUMERIC_COLUMNS = new Set(['index', 'value']);
+
+export function ProfileValuesTable({
+  startMs,
+  stepMinutes,
+  values,
+  filledIndexes,
+  timeZone,
+  unit,
+  decimals,
+}: ProfileValuesTableProps) {
   const data = useMemo(() => {
     const filled = new Set(filledIndexes);
     return values.map((value, index) => ({
@@ -43,48 +58,57 @@ export function ProfileValuesTable({ startMs, stepMinutes, values, filledIndexes
   const columns = useMemo(
     () =>
       helper.columns([
-        helper.accessor('index', { header: '#', cell: (info) => info.getValue() + 1 }),
+        helper.accessor('index', { header: '#', cell: (info) => formatCount(info.getValue() + 1) }),
         helper.accessor('startMs', {
           header: `Interval start (${timeZone})`,
           cell: (info) => formatLocalTime(info.getValue(), timeZone),
         }),
-        helper.accessor('value', { header: unit, cell: (info) => formatNumber(info.getValue(), 4) }),
+        helper.accessor('value', { header: unit, cell: (info) => formatFixed(info.getValue(), decimals) }),
         helper.accessor('filled', { header: 'Filled', cell: (info) => (info.getValue() ? 'interpolated' : '') }),
       ]),
-    [timeZone, unit],
+    [timeZone, unit, decimals],
   );
   const table = useTable({ features, columns, data, initialState: { pagination: { pageIndex: 0, pageSize: 24 } } });
   const { pageIndex, pageSize } = table.state.pagination;
 
   return (
     <div className="space-y-2">
-      <table className="w-full rounded bg-white text-left text-sm shadow-sm">
-        <caption className="sr-only">
-          Values, page {pageIndex + 1} of {table.getPageCount()}
-        </caption>
-        <thead className="bg-ink-100 text-ink-700">
-          {table.getHeaderGroups().map((group) => (
-            <tr key={group.id}>
-              {group.headers.map((header) => (
-                <th key={header.id} scope="col" className="px-3 py-1.5">
-                  {header.isPlaceholder ? null : <table.FlexRender header={header} />}
-                </th>
-              ))}
-            </tr>
-          ))}
-        </thead>
-        <tbody>
-          {table.getRowModel().rows.map((row) => (
-            <tr key={row.id} className={`border-t border-ink-100 tabular-nums ${row.original.filled ? 'bg-amber-100' : ''}`}>
-              {row.getAllCells().map((cell) => (
-                <td key={cell.id} className="px-3 py-1">
-                  <table.FlexRender cell={cell} />
-                </td>
-              ))}
-            </tr>
-          ))}
-        </tbody>
-      </table>
+      <ScrollRegion label="Values table (scrolls sideways)">
+        <table className={tableClass}>
+          <caption className="sr-only">
+            Values, page {pageIndex + 1} of {table.getPageCount()}
+          </caption>
+          <thead className={theadClass}>
+            {table.getHeaderGroups().map((group) => (
+              <tr key={group.id}>
+                {group.headers.map((header) => (
+                  <th
+                    key={header.id}
+                    scope="col"
+                    className={`px-3 py-1.5 ${NUMERIC_COLUMNS.has(header.column.id) ? numClass : ''}`}
+                  >
+                    {header.isPlaceholder ? null : <table.FlexRender header={header} />}
+                  </th>
+                ))}
+              </tr>
+            ))}
+          </thead>
+          <tbody>
+            {table.getRowModel().rows.map((row) => (
+              <tr key={row.id} className={`border-t border-ink-100 tabular-nums ${row.original.filled ? 'bg-amber-100' : ''}`}>
+                {row.getAllCells().map((cell) => (
+                  <td
+                    key={cell.id}
+                    className={`px-3 py-1 ${NUMERIC_COLUMNS.has(cell.column.id) ? numClass : 'whitespace-nowrap'}`}
+                  >
+                    <table.FlexRender cell={cell} />
+                  </td>
+                ))}
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </ScrollRegion>
       <nav aria-label="Pages of values" className="flex flex-wrap items-center gap-2 text-sm">
         <button
           type="button"
@@ -103,7 +127,7 @@ export function ProfileValuesTable({ startMs, stepMinutes, values, filledIndexes
           Previous
         </button>
         <span>
-          Page {pageIndex + 1} of {table.getPageCount().toLocaleString()}
+          Page {pageIndex + 1} of {formatCount(table.getPageCount())}
         </span>
         <button
           type="button"

@@ -3,10 +3,11 @@ import { Link } from 'react-router-dom';
 import { PROFILE_KINDS, type ProfileKind } from '@shared/profile-csv';
 import { compactSelect } from '@/components/form-field';
 import { EmptyState, ErrorState, LoadingState } from '@/components/query-state';
+import { ScrollRegion } from '@/components/scroll-region';
+import { numClass, tableClass, tdClass, thClass, theadClass } from '@/components/table-classes';
+import { formatCount, formatLocalTime, formatMoment, formatNumber } from '@/lib/format';
 import { useSiteProfiles } from '../api/get-site-profiles';
-import { formatLocalTime } from '@/lib/format';
 import { describeStep, displayUnit } from '../lib/format';
-import { formatMoment } from '@/lib/format';
 
 export function ProfilesList({ siteId, timezone, currency }: { siteId: string; timezone: string; currency: string }) {
   const profiles = useSiteProfiles(siteId);
@@ -36,56 +37,58 @@ export function ProfilesList({ siteId, timezone, currency }: { siteId: string; t
           ))}
         </select>
       </label>
-      <table className="w-full rounded bg-white text-left text-sm shadow-sm">
-        <caption className="sr-only">Profiles</caption>
-        <thead className="bg-ink-100 text-ink-700">
-          <tr>
-            <th scope="col" className="px-3 py-2">
-              Name
-            </th>
-            <th scope="col" className="px-3 py-2">
-              Kind
-            </th>
-            <th scope="col" className="px-3 py-2">
-              Resolution
-            </th>
-            <th scope="col" className="px-3 py-2">
-              Period ({timezone})
-            </th>
-            <th scope="col" className="px-3 py-2 text-right">
-              Intervals
-            </th>
-            <th scope="col" className="px-3 py-2">
-              Range
-            </th>
-            <th scope="col" className="px-3 py-2">
-              Uploaded
-            </th>
-          </tr>
-        </thead>
-        <tbody>
-          {shown.map((p) => (
-            <tr key={p.id} className="border-t border-ink-100">
-              <td className="px-3 py-2">
-                <Link to={`/profiles/${p.id}`} className="font-medium text-seaglass-700 underline-offset-2 hover:underline">
-                  {p.name}
-                </Link>
-              </td>
-              <td className="px-3 py-2">{p.kind}</td>
-              <td className="px-3 py-2">{describeStep(p.stepMinutes)}</td>
-              <td className="px-3 py-2 tabular-nums">
-                {formatLocalTime(Date.parse(p.start), timezone).slice(0, 16)} →{' '}
-                {formatLocalTime(Date.parse(p.end), timezone).slice(0, 16)}
-              </td>
-              <td className="px-3 py-2 text-right tabular-nums">{p.valueCount.toLocaleString()}</td>
-              <td className="px-3 py-2 tabular-nums">
-                {p.min.toLocaleString()} … {p.max.toLocaleString()} {displayUnit(p.unit, currency)}
-              </td>
-              <td className="px-3 py-2">{formatMoment(p.uploadedAt)}</td>
+      <ScrollRegion label="Profiles table (scrolls sideways)">
+        <table className={tableClass}>
+          <caption className="sr-only">Profiles</caption>
+          <thead className={theadClass}>
+            <tr>
+              <th scope="col" className={thClass}>
+                Name
+              </th>
+              <th scope="col" className={thClass}>
+                Kind
+              </th>
+              <th scope="col" className={thClass}>
+                Resolution
+              </th>
+              <th scope="col" className={thClass}>
+                Period ({timezone})
+              </th>
+              <th scope="col" className={`${thClass} ${numClass}`}>
+                Intervals
+              </th>
+              <th scope="col" className={`${thClass} ${numClass}`}>
+                Range
+              </th>
+              <th scope="col" className={thClass}>
+                Uploaded
+              </th>
             </tr>
-          ))}
-        </tbody>
-      </table>
+          </thead>
+          <tbody>
+            {shown.map((p) => (
+              <tr key={p.id} className="border-t border-ink-100">
+                <td className={`${tdClass} min-w-48`}>
+                  <Link to={`/profiles/${p.id}`} className="font-medium text-seaglass-700 underline-offset-2 hover:underline">
+                    {p.name}
+                  </Link>
+                </td>
+                <td className={tdClass}>{p.kind}</td>
+                <td className={`${tdClass} whitespace-nowrap`}>{describeStep(p.stepMinutes)}</td>
+                <td className={`${tdClass} whitespace-nowrap tabular-nums`}>
+                  {formatLocalTime(Date.parse(p.start), timezone).slice(0, 16)} →{' '}
+                  {formatLocalTime(Date.parse(p.end), timezone).slice(0, 16)}
+                </td>
+                <td className={`${tdClass} ${numClass}`}>{formatCount(p.valueCount)}</td>
+                <td className={`${tdClass} ${numClass}`}>
+                  {formatNumber(p.min, 2)} … {formatNumber(p.max, 2)} {displayUnit(p.unit, currency)}
+                </td>
+                <td className={`${tdClass} whitespace-nowrap tabular-nums`}>{formatMoment(p.uploadedAt)}</td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </ScrollRegion>
       {shown.length === 0 && <EmptyState title={`No ${kind} profiles.`} />}
     </div>
   );

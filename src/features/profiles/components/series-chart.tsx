@@ -6,6 +6,7 @@ import { Axis, LineSeries } from '@visx/xychart';
 import { ChartFigure, ChartPlot } from '@/components/charts/chart-frame';
 import { chartThemeWith, colours } from '@/components/charts/chart-theme';
 import { NearestTooltip } from '@/components/charts/chart-tooltip';
+import { TimeAxis } from '@/components/charts/time-axis';
 import { formatLocalTime, formatNumber } from '@/lib/format';
 import type { SeriesPoint } from '../lib/downsample';
 
@@ -23,7 +24,8 @@ export interface SeriesChartProps {
 }
 
 export default function SeriesChart({ points, timeZone, unit, label, height = 260 }: SeriesChartProps) {
-  const tickDate = (d: Date | number) => formatLocalTime(typeof d === 'number' ? d : d.getTime(), timeZone).slice(0, 10);
+  const startMs = points[0]?.t ?? 0;
+  const endMs = points.at(-1)?.t ?? 0;
   return (
     // The page titles the chart; the caption names it for screen readers.
     <ChartFigure hideCaption caption={`${label} in ${unit}; the numbers are in the table below.`}>
@@ -35,7 +37,7 @@ export default function SeriesChart({ points, timeZone, unit, label, height = 26
         yScale={{ type: 'linear', nice: true, zero: false }}
         accessibilityLabel={`${label}, ${unit}, ${points.length} points`}
       >
-        <Axis orientation="bottom" numTicks={6} tickFormat={tickDate} />
+        <TimeAxis timeZone={timeZone} startMs={startMs} endMs={endMs} />
         <Axis orientation="left" numTicks={5} label={unit} tickFormat={(v: number) => formatNumber(v, 1)} />
         <LineSeries dataKey={label} data={points} {...accessors} />
         <NearestTooltip<SeriesPoint>

@@ -1,11 +1,22 @@
 import type { PreviewState } from '../hooks/use-profile-preview';
 import { downsampleMinMax } from '../lib/downsample';
-import { formatLocalTime, formatNumber } from '@/lib/format';
+import { formatCount, formatLocalTime, formatNumber } from '@/lib/format';
 import { describeStep, displayUnit } from '../lib/format';
 import { LazySeriesChart } from './lazy-series-chart';
 import { UploadIssuesTable } from './upload-issues-table';
 
-export function UploadPreview({ state, timezone, currency }: { state: PreviewState; timezone: string; currency: string }) {
+export function UploadPreview({
+  state,
+  timezone,
+  currency,
+  hideIssues = false,
+}: {
+  state: PreviewState;
+  timezone: string;
+  currency: string;
+  /** The server's list of the same problems is on the page instead. */
+  hideIssues?: boolean;
+}) {
   if (state.status === 'idle') return null;
   if (state.status === 'working')
     return (
@@ -29,7 +40,7 @@ export function UploadPreview({ state, timezone, currency }: { state: PreviewSta
       </div>
       {result.ok ? (
         <AcceptedPreview profile={result.profile} timezone={timezone} currency={currency} />
-      ) : (
+      ) : hideIssues ? null : (
         <UploadIssuesTable
           title={`The preview found ${result.issues.length === 1 ? 'a problem' : `${result.issues.length} problems`}`}
           issues={result.issues}
@@ -58,9 +69,9 @@ function AcceptedPreview({ profile, timezone, currency }: { profile: Accepted; t
     ['Resolution', describeStep(profile.stepMinutes)],
     ['From', formatLocalTime(profile.startMs, timezone)],
     ['To', formatLocalTime(endMs, timezone)],
-    ['Intervals', profile.values.length.toLocaleString()],
+    ['Intervals', formatCount(profile.values.length)],
     ['Min / max', `${formatNumber(min, 3)} / ${formatNumber(max, 3)} ${unit}`],
-    ['Filled by interpolation', profile.filledIndexes.length.toLocaleString()],
+    ['Filled by interpolation', formatCount(profile.filledIndexes.length)],
   ];
   return (
     <div className="space-y-3">

@@ -4,7 +4,7 @@
  * again and decides. The parsing runs in a worker, so the form stays live.
  */
 import { useEffect, useRef, useState } from 'react';
-import type { ParseProfileResult, ProfileKind } from '@shared/profile-csv';
+import type { DateOrder, DecimalSeparator, ParseProfileResult, ProfileKind } from '@shared/profile-csv';
 import type { ParseRequest, ParseResponse } from '../workers/parse-profile-messages';
 
 export interface PreviewOptions {
@@ -12,6 +12,8 @@ export interface PreviewOptions {
   unit: string;
   intervalEnding: boolean;
   fillGaps: boolean;
+  dateOrder: DateOrder | undefined;
+  decimalSeparator: DecimalSeparator | undefined;
 }
 
 export type PreviewState =
@@ -41,7 +43,7 @@ export function useProfilePreview(file: File | null, options: PreviewOptions, ti
     };
   }, []);
 
-  const { kind, unit, intervalEnding, fillGaps } = options;
+  const { kind, unit, intervalEnding, fillGaps, dateOrder, decimalSeparator } = options;
   useEffect(() => {
     const id = ++lastId.current;
     if (!file || !worker.current) {
@@ -49,9 +51,21 @@ export function useProfilePreview(file: File | null, options: PreviewOptions, ti
       return;
     }
     setState({ status: 'working' });
-    const request: ParseRequest = { id, file, options: { kind, unit, timezone, intervalEnding, fillGaps } };
+    const request: ParseRequest = {
+      id,
+      file,
+      options: {
+        kind,
+        unit,
+        timezone,
+        intervalEnding,
+        fillGaps,
+        ...(dateOrder ? { dateOrder } : {}),
+        ...(decimalSeparator ? { decimalSeparator } : {}),
+      },
+    };
     worker.current.postMessage(request);
-  }, [file, kind, unit, intervalEnding, fillGaps, timezone]);
+  }, [file, kind, unit, intervalEnding, fillGaps, dateOrder, decimalSeparator, timezone]);
 
   return state;
 }

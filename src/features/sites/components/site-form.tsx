@@ -1,7 +1,8 @@
 import { useState, type FormEvent } from 'react';
 import { siteCreateSchema, type Site, type SiteFields } from '@shared/schemas/site';
 import { FormActions, FormField, describedBy, inputClass } from '@/components/form-field';
-import { fieldErrors, numberText, parseNumberInput } from '@/lib/form-values';
+import { NumberFormatChoice } from '@/components/number-format-choice';
+import { fieldErrors, numberInputErrors, numberText, parseNumberInput } from '@/lib/form-values';
 import { TimeZoneSelect } from './time-zone-select';
 
 type Text = Record<
@@ -52,8 +53,11 @@ export function SiteForm({ site, serverError, pending, onSubmit, onCancel }: Sit
   const [text, setText] = useState<Text>(() => toText(site));
   const [touched, setTouched] = useState(false);
   const parsed = siteCreateSchema.safeParse(fromText(text));
+  const { importLimitKw, exportLimitKw, demandChargePerKw, defaultHorizonHours } = text;
   const errors = {
     ...(touched && !parsed.success ? fieldErrors(parsed.error) : {}),
+    // Why a number was refused (a separator of the other format, "3.000"), over the schema's "enter a number".
+    ...(touched ? numberInputErrors({ importLimitKw, exportLimitKw, demandChargePerKw, defaultHorizonHours }) : {}),
     ...(serverError ? fieldErrors(serverError) : {}),
   };
   const set = (key: keyof Text) => (value: string) => setText((t) => ({ ...t, [key]: value }));
@@ -93,6 +97,9 @@ export function SiteForm({ site, serverError, pending, onSubmit, onCancel }: Sit
       className="grid max-w-3xl gap-4 sm:grid-cols-2"
       aria-label={site ? 'Edit site' : 'New site'}
     >
+      <div className="sm:col-span-2">
+        <NumberFormatChoice id="site-number-format" />
+      </div>
       <FormField id="site-name" label="Name" error={errors.name}>
         <input
           id="site-name"

@@ -1,6 +1,7 @@
 import type { Site } from '@shared/schemas/site';
+import { formatNumber } from '@/lib/format';
 
-const orNone = (value: number | null, unit: string) => (value === null ? 'none' : `${value.toLocaleString()} ${unit}`);
+const orNone = (value: number | null, unit: string) => (value === null ? 'none' : `${formatNumber(value, 2)} ${unit}`);
 
 /** The site's settings as a definition list (the header of the site page). */
 export function SiteSummary({ site }: { site: Site }) {
@@ -15,9 +16,9 @@ export function SiteSummary({ site }: { site: Site }) {
   return (
     <dl className="grid grid-cols-2 gap-x-6 gap-y-2 rounded bg-white p-4 shadow-sm sm:grid-cols-3">
       {rows.map(([term, value]) => (
-        <div key={term}>
+        <div key={term} className="min-w-0">
           <dt className="text-xs uppercase tracking-wide text-ink-500">{term}</dt>
-          <dd className="font-medium text-ink-900">{value}</dd>
+          <dd className="font-medium break-words text-ink-900">{value}</dd>
         </div>
       ))}
     </dl>

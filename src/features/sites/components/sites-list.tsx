@@ -1,8 +1,11 @@
 import { Link } from 'react-router-dom';
 import { EmptyState, ErrorState, LoadingState } from '@/components/query-state';
+import { ScrollRegion } from '@/components/scroll-region';
+import { numClass, tableClass, tdClass, thClass, theadClass } from '@/components/table-classes';
+import { formatNumber } from '@/lib/format';
 import { useSites } from '../api/get-sites';
 
-const kw = (value: number | null) => (value === null ? 'no limit' : `${value.toLocaleString()} kW`);
+const kw = (value: number | null) => (value === null ? 'no limit' : `${formatNumber(value, 1)} kW`);
 
 export function SitesList() {
   const sites = useSites();
@@ -16,44 +19,48 @@ export function SitesList() {
     );
   }
   return (
-    <table className="w-full overflow-hidden rounded bg-white text-left shadow-sm">
-      <caption className="sr-only">Sites</caption>
-      <thead className="bg-ink-100 text-sm text-ink-700">
-        <tr>
-          <th scope="col" className="px-3 py-2">
-            Site
-          </th>
-          <th scope="col" className="px-3 py-2">
-            Time zone
-          </th>
-          <th scope="col" className="px-3 py-2">
-            Import / export limit
-          </th>
-          <th scope="col" className="px-3 py-2 text-right">
-            Batteries
-          </th>
-          <th scope="col" className="px-3 py-2 text-right">
-            Profiles
-          </th>
-        </tr>
-      </thead>
-      <tbody>
-        {sites.data.map((site) => (
-          <tr key={site.id} className="border-t border-ink-100">
-            <td className="px-3 py-2">
-              <Link to={`/sites/${site.id}`} className="font-medium text-seaglass-700 underline-offset-2 hover:underline">
-                {site.name}
-              </Link>
-            </td>
-            <td className="px-3 py-2">{site.timezone}</td>
-            <td className="px-3 py-2">
-              {kw(site.importLimitKw)} / {kw(site.exportLimitKw)}
-            </td>
-            <td className="px-3 py-2 text-right tabular-nums">{site.batteryCount}</td>
-            <td className="px-3 py-2 text-right tabular-nums">{site.profileCount}</td>
+    <ScrollRegion label="Sites table (scrolls sideways)">
+      <table className={tableClass}>
+        <caption className="sr-only">Sites</caption>
+        <thead className={theadClass}>
+          <tr>
+            <th scope="col" className={thClass}>
+              Site
+            </th>
+            <th scope="col" className={thClass}>
+              Time zone
+            </th>
+            <th scope="col" className={`${thClass} ${numClass}`}>
+              Import limit
+            </th>
+            <th scope="col" className={`${thClass} ${numClass}`}>
+              Export limit
+            </th>
+            <th scope="col" className={`${thClass} ${numClass}`}>
+              Batteries
+            </th>
+            <th scope="col" className={`${thClass} ${numClass}`}>
+              Profiles
+            </th>
           </tr>
-        ))}
-      </tbody>
-    </table>
+        </thead>
+        <tbody>
+          {sites.data.map((site) => (
+            <tr key={site.id} className="border-t border-ink-100">
+              <td className={tdClass}>
+                <Link to={`/sites/${site.id}`} className="font-medium text-seaglass-700 underline-offset-2 hover:underline">
+                  {site.name}
+                </Link>
+              </td>
+              <td className={tdClass}>{site.timezone}</td>
+              <td className={`${tdClass} ${numClass}`}>{kw(site.importLimitKw)}</td>
+              <td className={`${tdClass} ${numClass}`}>{kw(site.exportLimitKw)}</td>
+              <td className={`${tdClass} ${numClass}`}>{site.batteryCount}</td>
+              <td className={`${tdClass} ${numClass}`}>{site.profileCount}</td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
+    </ScrollRegion>
   );
 }

@@ -4,6 +4,8 @@ import type { JobState } from '@shared/schemas/job';
 import { inputClass } from '@/components/form-field';
 import { EmptyState, ErrorState, LoadingState } from '@/components/query-state';
 import { SiteFilter } from '@/components/run-source-fields';
+import { ScrollRegion } from '@/components/scroll-region';
+import { tableClass, theadClass } from '@/components/table-classes';
 import { useSiteTime } from '@/components/use-site-time';
 import { useCan } from '@/lib/authorization';
 import { formatPercent } from '@/lib/format';
@@ -58,41 +60,45 @@ export function StudiesPage() {
       ) : studies.data.length === 0 ? (
         <EmptyState title="No studies match these filters" />
       ) : (
-        <table className="w-full rounded bg-white text-left text-sm shadow-sm">
-          <thead className="bg-ink-100 text-ink-700">
-            <tr>
-              {['Battery', 'Period (site time)', 'Horizons', 'State', 'Recommendation'].map((h) => (
-                <th key={h} scope="col" className="px-2 py-1.5">
-                  {h}
-                </th>
-              ))}
-            </tr>
-          </thead>
-          <tbody>
-            {studies.data.map((s) => (
-              <tr key={s.id} className="border-t border-ink-100">
-                <td className="px-2 py-1">
-                  <Link to={`/studies/${s.id}`} className="font-semibold text-seaglass-700 underline">
-                    {s.batteryName}
-                  </Link>
-                  <span className="block text-xs text-ink-500">{s.siteName}</span>
-                </td>
-                <td className="px-2 py-1">
-                  {local(s.start, s.siteId)} – {local(s.end, s.siteId)}
-                </td>
-                <td className="px-2 py-1">
-                  {s.horizonsHours.join(', ')} h × {s.terminalRules.join(', ')}
-                </td>
-                <td className="px-2 py-1">{s.status === 'running' ? `running ${formatPercent(s.job?.shareDone)}` : s.status}</td>
-                <td className="px-2 py-1">
-                  {s.recommendation?.horizonHours != null
-                    ? `${s.recommendation.horizonHours} h, ${s.recommendation.terminal}`
-                    : '–'}
-                </td>
+        <ScrollRegion label="Studies table (scrolls sideways)">
+          <table className={tableClass}>
+            <thead className={theadClass}>
+              <tr>
+                {['Battery', 'Period (site time)', 'Horizons', 'State', 'Recommendation'].map((h) => (
+                  <th key={h} scope="col" className="px-2 py-1.5">
+                    {h}
+                  </th>
+                ))}
               </tr>
-            ))}
-          </tbody>
-        </table>
+            </thead>
+            <tbody>
+              {studies.data.map((s) => (
+                <tr key={s.id} className="border-t border-ink-100">
+                  <td className="px-2 py-1">
+                    <Link to={`/studies/${s.id}`} className="font-semibold text-seaglass-700 underline">
+                      {s.batteryName}
+                    </Link>
+                    <span className="block text-xs text-ink-500">{s.siteName}</span>
+                  </td>
+                  <td className="px-2 py-1 whitespace-nowrap tabular-nums">
+                    {local(s.start, s.siteId)} – {local(s.end, s.siteId)}
+                  </td>
+                  <td className="px-2 py-1">
+                    {s.horizonsHours.join(', ')} h × {s.terminalRules.join(', ')}
+                  </td>
+                  <td className="px-2 py-1">
+                    {s.status === 'running' ? `running ${formatPercent(s.job?.shareDone)}` : s.status}
+                  </td>
+                  <td className="px-2 py-1">
+                    {s.recommendation?.horizonHours != null
+                      ? `${s.recommendation.horizonHours} h, ${s.recommendation.terminal}`
+                      : '–'}
+                  </td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </ScrollRegion>
       )}
     </section>
   );

@@ -51,7 +51,7 @@ function ByHorizon({
             data={horizons.map((h) => ({ h }))}
             xAccessor={(d) => d.h}
             yAccessor={() => extra.y}
-            stroke={colours.amber}
+            stroke={colours.inkSoft}
             strokeDasharray="4 3"
           />
         )}
@@ -87,7 +87,14 @@ function ByHorizon({
             <span className="inline-block h-1 w-4" style={{ background: palette[i % palette.length] }} /> {rule}
           </li>
         ))}
-        {extra && <li className="text-amber-700">dashed: {extra.text}</li>}
+        {extra && (
+          <li className="flex items-center gap-1">
+            <svg width="18" height="6" aria-hidden="true">
+              <line x1="0" y1="3" x2="18" y2="3" stroke={colours.inkSoft} strokeWidth="2" strokeDasharray="4 3" />
+            </svg>
+            {extra.text}
+          </li>
+        )}
       </ul>
     </ChartFigure>
   );

@@ -9,17 +9,27 @@ import type { SteadyDays } from '@shared/schemas/steady-days';
 import { FormField, buttonClass, describedBy, inputClass } from '@/components/form-field';
 import { RunSourceFields, emptyRunSource, useRunSourceLists, type RunSource } from '@/components/run-source-fields';
 import { SteadyDaysField } from '@/components/steady-days-field';
-import { fieldErrors, parseNumberInput } from '@/lib/form-values';
+import { NumberFormatChoice } from '@/components/number-format-choice';
+import { fieldErrors, numberInputErrors, parseNumberInput } from '@/lib/form-values';
+import { useDecimalSeparator } from '@/lib/number-format';
 import { fromWallTimeInput } from '@/lib/format';
 import { useCreateStudy } from '../api/create-study';
 
 const ruleChoices = ['free', 'steady-value', 'cyclic'];
 
+/** The horizons typed as a list: spaces and semicolons separate them, and commas too where the comma is not the decimal sign. */
+function horizonTexts(text: string, decimal: string): string[] {
+  return text.split(decimal === ',' ? /[;\s]+/ : /[,;\s]+/).filter(Boolean);
+}
+
 export function StudyForm({ initial }: { initial?: Partial<RunSource> }) {
   const navigate = useNavigate();
   const [source, setSource] = useState<RunSource>({ ...emptyRunSource, ...initial });
   const [period, setPeriod] = useState({ start: '', end: '' });
-  const [horizons, setHorizons] = useState('6, 12, 24, 48, 96, 168');
+  const decimal = useDecimalSeparator();
+  // With a decimal comma, a comma cannot also separate the horizons: semicolons or spaces do.
+  const listSeparator = decimal === ',' ? '; ' : ', ';
+  const [horizons, setHorizons] = useState([6, 12, 24, 48, 96, 168].join(listSeparator));
   const [replan, setReplan] = useState('1');
   const [rules, setRules] = useState<string[]>(['free', 'steady-value']);
   const [soc, setSoc] = useState('');
@@ -42,18 +52,21 @@ export function StudyForm({ initial }: { initial?: Partial<RunSource> }) {
       generationProfileId: source.generationProfileId || null,
       start: startMs === null ? '' : new Date(startMs).toISOString(),
       end: endMs === null ? '' : new Date(endMs).toISOString(),
-      horizonsHours: horizons
-        .split(/[,;\s]+/)
-        .filter(Boolean)
-        .map((h) => parseNumberInput(h)),
+      horizonsHours: horizonTexts(horizons, decimal).map((h) => parseNumberInput(h)),
       replanHours: parseNumberInput(replan),
       terminalRules: rules,
       initialSocPct: parseNumberInput(soc),
       steadyDays,
     };
     const parsed = studyCreateSchema.safeParse(body);
-    if (!parsed.success) {
-      setErrors(fieldErrors(parsed.error));
+    const listed = Object.fromEntries(horizonTexts(horizons, decimal).map((h, i) => [`h${i}`, h]));
+    const refusedHorizon = Object.values(numberInputErrors(listed))[0];
+    const refused = {
+      ...numberInputErrors({ replanHours: replan, initialSocPct: soc }),
+      ...(refusedHorizon ? { horizonsHours: refusedHorizon } : {}),
+    };
+    if (!parsed.success || Object.keys(refused).length > 0) {
+      setErrors({ ...(parsed.success ? {} : fieldErrors(parsed.error)), ...refused });
       return;
     }
     setErrors({});
@@ -85,6 +98,7 @@ export function StudyForm({ initial }: { initial?: Partial<RunSource> }) {
 
   return (
     <form onSubmit={submit} noValidate className="space-y-5 rounded-lg border border-ink-100 bg-white p-5 shadow-sm">
+      <NumberFormatChoice id="study-number-format" />
       <RunSourceFields value={source} onChange={setSource} errors={errors} />
       <fieldset className="grid gap-4 sm:grid-cols-2">
         <legend className="mb-2 text-sm font-semibold text-ink-800">
@@ -118,7 +132,7 @@ export function StudyForm({ initial }: { initial?: Partial<RunSource> }) {
           horizons,
           setHorizons,
           'h',
-          'Separated by commas; each at least the re-plan interval.',
+          `Separated by ${decimal === ',' ? 'semicolons' : 'commas'} or spaces; each at least the re-plan interval.`,
         )}
         {field('replanHours', 'Re-plan every', replan, setReplan, 'h')}
         {field('initialSocPct', 'Initial SoC', soc, setSoc, '%', 'Empty: as for a new plan.')}

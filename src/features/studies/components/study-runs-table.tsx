@@ -1,6 +1,7 @@
 import type { StudyResults } from '@shared/schemas/study';
-import { formatDuration, formatMoney, formatNumber, formatPercent } from '@/lib/format';
+import { formatCount, formatDuration, formatFixed, formatMoney, formatNumber, formatPercent } from '@/lib/format';
 import { ScrollRegion } from '@/components/scroll-region';
+import { numClass, tableClass, theadClass } from '@/components/table-classes';
 
 /** Every closed-loop run: the numbers behind the charts. */
 export function StudyRunsTable({ results, currency }: { results: StudyResults; currency: string }) {
@@ -8,12 +9,12 @@ export function StudyRunsTable({ results, currency }: { results: StudyResults; c
   const rec = results.recommendation;
   return (
     <ScrollRegion label="Runs table (scrolls sideways)">
-      <table className="w-full rounded bg-white text-left text-sm shadow-sm">
+      <table className={tableClass}>
         <caption className="px-2 py-1 text-left text-xs text-ink-500">
           Reference path over the period: {formatMoney(results.referenceCost, currency)} (
           {formatNumber(results.referenceEquivalentCycles, 1)} equivalent cycles)
         </caption>
-        <thead className="bg-ink-100 text-ink-700">
+        <thead className={theadClass}>
           <tr>
             {[
               'Horizon',
@@ -27,8 +28,8 @@ export function StudyRunsTable({ results, currency }: { results: StudyResults; c
               'Solves',
               'Time',
               'Method',
-            ].map((h) => (
-              <th key={h} scope="col" className="whitespace-nowrap px-2 py-1.5">
+            ].map((h, k) => (
+              <th key={h} scope="col" className={`px-2 py-1.5 align-bottom ${k >= 2 && k <= 9 ? numClass : ''}`}>
                 {h}
               </th>
             ))}
@@ -40,22 +41,22 @@ export function StudyRunsTable({ results, currency }: { results: StudyResults; c
             return (
               <tr
                 key={`${r.horizonHours}/${r.terminal}`}
-                className={`border-t border-ink-100 tabular-nums ${chosen ? 'bg-seaglass-100 font-semibold' : ''}`}
+                className={`border-t border-ink-100 ${chosen ? 'bg-seaglass-100 font-semibold' : ''}`}
               >
                 <td className="px-2 py-1">{r.horizonHours} h</td>
                 <td className="px-2 py-1">{r.terminal}</td>
-                <td className="px-2 py-1">
+                <td className={`px-2 py-1 ${numClass}`}>
                   {r.status === 'optimal' ? formatMoney(r.cost, currency) : <span className="text-brick-700">{r.message}</span>}
                 </td>
-                <td className="px-2 py-1">{r.gapPct === null ? '–' : `${formatNumber(r.gapPct, 3)} %`}</td>
-                <td className="px-2 py-1">{formatNumber(r.equivalentCycles, 1)}</td>
-                <td className="px-2 py-1">{formatPercent(r.nearSteadyShare)}</td>
-                <td className="px-2 py-1">
-                  {formatNumber(r.meanLeavingArcSteps, 1)} {formatNumber(r.meanLeavingArcSteps, 1) === '1' ? 'step' : 'steps'}
+                <td className={`px-2 py-1 ${numClass}`}>{r.gapPct === null ? '–' : `${formatFixed(r.gapPct, 3)} %`}</td>
+                <td className={`px-2 py-1 ${numClass}`}>{formatFixed(r.equivalentCycles, 1)}</td>
+                <td className={`px-2 py-1 ${numClass}`}>{formatPercent(r.nearSteadyShare)}</td>
+                <td className={`px-2 py-1 ${numClass}`}>
+                  {formatFixed(r.meanLeavingArcSteps, 1)} {r.meanLeavingArcSteps === 1 ? 'step' : 'steps'}
                 </td>
-                <td className="px-2 py-1">{r.leavingIntoCommitted}</td>
-                <td className="px-2 py-1">{r.solves}</td>
-                <td className="px-2 py-1">{formatDuration(r.seconds)}</td>
+                <td className={`px-2 py-1 ${numClass}`}>{formatCount(r.leavingIntoCommitted)}</td>
+                <td className={`px-2 py-1 ${numClass}`}>{formatCount(r.solves)}</td>
+                <td className={`px-2 py-1 ${numClass}`}>{formatDuration(r.seconds)}</td>
                 <td className="px-2 py-1">{r.method}</td>
               </tr>
             );

@@ -16,6 +16,7 @@ import {
 import { roleLabels, roles } from '@shared/schemas/auth';
 import { userStatuses, type User } from '@shared/schemas/users';
 import { inputClass } from '@/components/form-field';
+import { ScrollRegion } from '@/components/scroll-region';
 import { RoleSelect, UserActions, isActiveAdmin, type ReportOutcome } from './user-row-actions';
 import { formatMoment } from '@/lib/format';
 
@@ -139,7 +140,7 @@ export function UsersTable({ users, report }: { users: User[]; report: ReportOut
           {rows.length} of {users.length} users
         </p>
       </div>
-      <div className="overflow-x-auto rounded-lg border border-ink-100 bg-white shadow-sm">
+      <ScrollRegion label="Users table (scrolls sideways)" className="rounded-lg border border-ink-100 bg-white shadow-sm">
         <table className="w-full text-left text-sm">
           <thead className="bg-ink-50 text-ink-700">
             {table.getHeaderGroups().map((group) => (
@@ -192,7 +193,7 @@ export function UsersTable({ users, report }: { users: User[]; report: ReportOut
             )}
           </tbody>
         </table>
-      </div>
+      </ScrollRegion>
     </div>
   );
 }

@@ -32,15 +32,17 @@ export function splitSteps(results: PlanResults): SplitSteps {
   };
 }
 
-export const timeTick = (timeZone: string) => (d: Date | number) =>
-  new Intl.DateTimeFormat('en-GB', {
-    timeZone,
-    day: '2-digit',
-    month: 'short',
-    hour: '2-digit',
-    minute: '2-digit',
-    hourCycle: 'h23',
-  }).format(typeof d === 'number' ? d : d.getTime());
+/** The first and last instant of a set of points (for the time axis: its ticks lie within the data). */
+export function extentOf<T>(points: readonly T[], at: (p: T) => number): { startMs: number; endMs: number } {
+  let startMs = Infinity;
+  let endMs = -Infinity;
+  for (const p of points) {
+    const t = at(p);
+    if (t < startMs) startMs = t;
+    if (t > endMs) endMs = t;
+  }
+  return { startMs, endMs };
+}
 
 /** SoC and stored-energy value belong to the end of their step. */
 export const atStepEnd = (p: StepPoint) => new Date(p.tEnd);

@@ -2,13 +2,16 @@
 import { Axis, GlyphSeries, LineSeries } from '@visx/xychart';
 import { ChartFigure, ChartPlot } from '@/components/charts/chart-frame';
 import { colours, lookaheadLine } from '@/components/charts/chart-theme';
+import { TimeAxis } from '@/components/charts/time-axis';
 import { formatNumber } from '@/lib/format';
-import { atStepEnd as x, timeTick, type SplitSteps, type StepPoint } from './chart-data';
+import { atStepEnd as x, extentOf, type SplitSteps, type StepPoint } from './chart-data';
 
 const y = (p: StepPoint) => (p.step.distance === null ? null : p.step.distance * 100);
 
 export function DistanceChart({ split, timeZone, bandPct }: { split: SplitSteps; timeZone: string; bandPct: number }) {
-  const edge = split.all.map((p) => ({ t: p.t, v: bandPct }));
+  // The band edge spans the steps' ends, like the distance itself.
+  const edge = split.all.map((p) => ({ t: p.tEnd, v: bandPct }));
+  const extent = extentOf(split.all, (p) => p.tEnd);
   return (
     <ChartFigure
       caption="Distance to the steady cycle"
@@ -26,8 +29,7 @@ export function DistanceChart({ split, timeZone, bandPct }: { split: SplitSteps;
         yScale={{ type: 'linear', nice: true, zero: true }}
         accessibilityLabel="Distance to the steady cycle in % of usable energy per step"
       >
-        {/* Half width: fewer time labels, or they run together. */}
-        <Axis orientation="bottom" numTicks={3} tickFormat={timeTick(timeZone)} />
+        <TimeAxis timeZone={timeZone} {...extent} />
         <Axis orientation="left" numTicks={4} label="% of usable energy" tickFormat={(v: number) => formatNumber(v, 0)} />
         <LineSeries
           dataKey="band edge"

@@ -10,6 +10,7 @@ import { SocChart } from './soc-chart';
 import { DistanceChart } from './distance-chart';
 import { ValueChart } from './value-chart';
 import { ValueCurvesChart } from './value-curves-chart';
+import { SitePowerChart } from './site-power-chart';
 
 export interface PlanChartsProps {
   results: PlanResults;
@@ -17,14 +18,37 @@ export interface PlanChartsProps {
   currency: string;
   energyKwh: number;
   usableKwh: number;
+  /** The site's load and generation per step (null: the plan has no such profile), and its grid limits. */
+  load: (number | null)[] | null;
+  generation: (number | null)[] | null;
+  importLimitKw: number | null;
+  exportLimitKw: number | null;
 }
 
-export default function PlanCharts({ results, timeZone, currency, energyKwh, usableKwh }: PlanChartsProps) {
+export default function PlanCharts({
+  results,
+  timeZone,
+  currency,
+  energyKwh,
+  usableKwh,
+  load,
+  generation,
+  importLimitKw,
+  exportLimitKw,
+}: PlanChartsProps) {
   const split = useMemo(() => splitSteps(results), [results]);
   const bandSocPct = ((results.turnpike.bandPct / 100) * usableKwh * 100) / energyKwh;
   return (
     <div className="space-y-4">
       <PriceDispatchChart split={split} timeZone={timeZone} currency={currency} />
+      <SitePowerChart
+        split={split}
+        timeZone={timeZone}
+        load={load}
+        generation={generation}
+        importLimitKw={importLimitKw}
+        exportLimitKw={exportLimitKw}
+      />
       <SocChart
         split={split}
         timeZone={timeZone}

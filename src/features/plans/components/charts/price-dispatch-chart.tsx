@@ -3,16 +3,16 @@ import { Axis, BarSeries, LineSeries } from '@visx/xychart';
 import { ChartFigure, ChartPlot } from '@/components/charts/chart-frame';
 import { colours, lookaheadLine } from '@/components/charts/chart-theme';
 import { NearestTooltip } from '@/components/charts/chart-tooltip';
+import { TimeAxis } from '@/components/charts/time-axis';
 import { formatLocalTime, formatNumber } from '@/lib/format';
-import { timeTick, type SplitSteps, type StepPoint } from './chart-data';
+import type { SplitSteps, StepPoint } from './chart-data';
 
 const x = (p: StepPoint) => new Date(p.t);
 
 export function PriceDispatchChart({ split, timeZone, currency }: { split: SplitSteps; timeZone: string; currency: string }) {
   // Every step in every bar series, so the band scale has one slot per step.
   const part = (delivery: boolean) => split.all.filter((p) => p.step.delivery === delivery);
-  const every = Math.max(1, Math.ceil(split.all.length / 8));
-  const tickValues = split.all.filter((_, i) => i % every === 0).map((p) => p.t);
+  const grid = split.all.map((p) => p.t);
   return (
     <ChartFigure
       caption="Price and dispatch"
@@ -67,7 +67,7 @@ export function PriceDispatchChart({ split, timeZone, currency }: { split: Split
         yScale={{ type: 'linear', nice: true }}
         accessibilityLabel="Charge (above zero) and discharge (below zero) in kW per step"
       >
-        <Axis orientation="bottom" tickValues={tickValues} tickFormat={(v: number) => timeTick(timeZone)(v)} />
+        <TimeAxis timeZone={timeZone} startMs={grid[0] ?? 0} endMs={grid.at(-1) ?? 0} grid={grid} />
         <Axis orientation="left" numTicks={4} label="kW" />
         <BarSeries
           dataKey="charge"

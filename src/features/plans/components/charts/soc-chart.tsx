@@ -6,8 +6,9 @@ import { AreaSeries, Axis, GlyphSeries, LineSeries } from '@visx/xychart';
 import { ChartFigure, ChartPlot } from '@/components/charts/chart-frame';
 import { colours, lookaheadLine } from '@/components/charts/chart-theme';
 import { NearestTooltip } from '@/components/charts/chart-tooltip';
+import { TimeAxis } from '@/components/charts/time-axis';
 import { formatLocalTime, formatNumber } from '@/lib/format';
-import { atStepEnd as x, timeTick, type SplitSteps, type StepPoint } from './chart-data';
+import { atStepEnd as x, extentOf, type SplitSteps, type StepPoint } from './chart-data';
 
 interface Props {
   split: SplitSteps;
@@ -22,6 +23,7 @@ interface Props {
 export function SocChart({ split, timeZone, energyKwh, bandSocPct, bandPct }: Props) {
   const pct = (kwh: number | null) => (kwh === null ? null : (kwh / energyKwh) * 100);
   const withSteady = split.all.filter((p) => p.step.steadySocKwh !== null);
+  const extent = extentOf(split.all, (p) => p.tEnd);
   return (
     <ChartFigure
       caption="State of charge against the steady cycle"
@@ -40,7 +42,7 @@ export function SocChart({ split, timeZone, energyKwh, bandSocPct, bandPct }: Pr
         yScale={{ type: 'linear', domain: [0, 100] }}
         accessibilityLabel="SoC in % with the steady cycle and its band; the numbers are in the schedule table"
       >
-        <Axis orientation="bottom" numTicks={6} tickFormat={timeTick(timeZone)} />
+        <TimeAxis timeZone={timeZone} {...extent} />
         <Axis orientation="left" numTicks={5} label="SoC %" />
         <AreaSeries
           dataKey="band"

@@ -2,10 +2,12 @@
 import { Axis, LineSeries } from '@visx/xychart';
 import { ChartFigure, ChartPlot } from '@/components/charts/chart-frame';
 import { colours, lookaheadLine } from '@/components/charts/chart-theme';
-import { atStepEnd as x, timeTick, type SplitSteps } from './chart-data';
+import { TimeAxis } from '@/components/charts/time-axis';
+import { atStepEnd as x, extentOf, type SplitSteps } from './chart-data';
 
 export function ValueChart({ split, timeZone, currency }: { split: SplitSteps; timeZone: string; currency: string }) {
   const steady = split.all.filter((p) => p.step.steadyValue !== null);
+  const extent = extentOf(split.all, (p) => p.tEnd);
   return (
     <ChartFigure
       caption="Stored-energy value against its steady value"
@@ -22,8 +24,7 @@ export function ValueChart({ split, timeZone, currency }: { split: SplitSteps; t
         yScale={{ type: 'linear', nice: true, zero: false }}
         accessibilityLabel={`Value of one more MWh stored, ${currency}/MWh, and the steady cycle's value`}
       >
-        {/* Half width: fewer time labels, or they run together. */}
-        <Axis orientation="bottom" numTicks={3} tickFormat={timeTick(timeZone)} />
+        <TimeAxis timeZone={timeZone} {...extent} />
         <Axis orientation="left" numTicks={4} label={`${currency}/MWh`} />
         <LineSeries
           dataKey="steady value"

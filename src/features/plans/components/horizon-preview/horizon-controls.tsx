@@ -6,6 +6,7 @@
  */
 import { useState } from 'react';
 import { describedBy, inputClass } from '@/components/form-field';
+import { numberText, readNumberInput } from '@/lib/form-values';
 import { formatNumber } from '@/lib/format';
 
 export interface HorizonRange {
@@ -19,8 +20,9 @@ export interface HorizonRange {
 }
 
 function problemWith(text: string, r: HorizonRange): string | null {
-  const hours = Number(text.trim().replace(',', '.'));
-  if (text.trim() === '' || !Number.isFinite(hours)) return 'Enter the horizon in hours, e.g. 48.';
+  const { value: hours, error } = readNumberInput(text);
+  if (error) return error;
+  if (hours === null || !Number.isFinite(hours)) return 'Enter the horizon in hours, e.g. 48.';
   if (hours < r.min - 1e-9) return `At least ${formatNumber(r.min, 2)} h: the horizon must cover the delivery window.`;
   if (hours > r.maxHours + 1e-9)
     return `At most ${formatNumber(r.maxHours, 2)} h for a preview; make a full plan for a longer one.`;
@@ -76,20 +78,18 @@ export function HorizonControls({
         <label htmlFor="preview-horizon-hours" className="text-sm font-medium text-ink-800">
           Horizon in hours
         </label>
+        {/* Text, not type=number: the browser's own number field reads the browser's language, not the chosen format. */}
         <input
           id="preview-horizon-hours"
-          type="number"
           inputMode="decimal"
           className={inputClass}
-          min={range.min}
-          max={range.maxHours}
-          step={range.stepHours}
-          value={draft ?? String(hours)}
+          value={draft ?? numberText(hours)}
           aria-invalid={problem !== null}
           aria-describedby={describedBy('preview-horizon-hours', { error: problem ?? undefined })}
           onChange={(e) => {
             setDraft(e.target.value);
-            if (problemWith(e.target.value, range) === null) onChange(Number(e.target.value.trim().replace(',', '.')));
+            const typed = readNumberInput(e.target.value).value;
+            if (problemWith(e.target.value, range) === null && typed !== null) onChange(typed);
           }}
           onBlur={() => problem === null && setDraft(null)}
         />

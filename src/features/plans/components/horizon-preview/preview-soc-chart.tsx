@@ -8,8 +8,9 @@ import type { PlanResults } from '@shared/schemas/plan';
 import { ChartFigure, ChartPlot } from '@/components/charts/chart-frame';
 import { colours, lookaheadLine } from '@/components/charts/chart-theme';
 import { NearestTooltip } from '@/components/charts/chart-tooltip';
+import { TimeAxis } from '@/components/charts/time-axis';
 import { formatLocalTime, formatNumber } from '@/lib/format';
-import { timeTick } from '../charts/chart-data';
+import { extentOf } from '../charts/chart-data';
 import { planSocLine, previewSocLine, type SocPoint } from './preview-series';
 
 const x = (p: SocPoint) => new Date(p.tEnd);
@@ -27,6 +28,7 @@ export default function PreviewSocChart({ results, planHorizonHours, preview, ti
   const other = previewSocLine(preview);
   const planLabel = `plan, ${formatNumber(planHorizonHours, 2)} h`;
   const previewLabel = `preview, ${formatNumber(preview.horizonHours, 2)} h`;
+  const extent = extentOf([...plan.delivery, ...plan.lookahead, ...other.delivery, ...other.lookahead], (p) => p.tEnd);
   return (
     <ChartFigure
       caption="SoC of the plan and of the preview"
@@ -42,7 +44,7 @@ export default function PreviewSocChart({ results, planHorizonHours, preview, ti
         yScale={{ type: 'linear', domain: [0, 100] }}
         accessibilityLabel="SoC in % of the plan and of the preview; the numbers are in the table below the chart"
       >
-        <Axis orientation="bottom" numTicks={6} tickFormat={timeTick(timeZone)} />
+        <TimeAxis timeZone={timeZone} {...extent} />
         <Axis orientation="left" numTicks={5} label="SoC %" />
         <LineSeries dataKey={planLabel} data={plan.delivery} xAccessor={x} yAccessor={y} stroke={colours.ink} strokeWidth={2} />
         {plan.lookahead.length > 0 && (
