@@ -15,7 +15,8 @@ import { solveSteadyCycle, type SteadyCycle } from '../steady/solve-steady-cycle
 import type { DaySelection } from '../steady/representative-day';
 import { terminalRuleFor, type TerminalChoice } from '../terminal/terminal-choice';
 import { DEFAULT_BAND_FRACTION } from '../turnpike/turnpike-figures';
-import { planFlags, settingWarnings } from './plan-flags';
+import { batteryWarningMessages } from '@shared/schemas/battery-warnings';
+import { planFlags } from './plan-flags';
 import { planTurnpike, type PlanTurnpike } from './plan-turnpike';
 import { planInsights, type DpPlanInsights } from '../dp';
 import { localTimeLabel } from '../time/zone-offsets';
@@ -138,7 +139,7 @@ export function solvePlan(inputs: AlignedInputs, request: PlanRequest): PlanResu
       solution: main.solution,
       steady,
       turnpike: tp,
-      warnings: settingWarnings(inputs.battery),
+      warnings: batteryWarningMessages(inputs.battery, inputs.site),
       dpInsights,
     },
   };
