@@ -26,7 +26,7 @@ import { runClosedLoop } from '../server/engine/study/run-closed-loop';
 import { runClosedLoopParallel } from '../server/engine/study/parallel-closed-loop';
 import { runHorizonStudy } from '../server/engine/study/run-horizon-study';
 import type { BatteryParams } from '../server/engine/types';
-import { benchDp } from '../server/engine/dp/bench';
+import { benchDp } from './lib/bench-dp';
 import { benchCliCommand } from './lib/bench-cli';
 
 const glpk = await GLPK();
