@@ -11,9 +11,11 @@
  */
 import { createZoneClock, formatInstant } from '@shared/profile-csv';
 import type { PlanStatus } from '@shared/schemas/sign-off';
+import type { PowerSeries } from '../engine/types';
 import { writeCsv, type CsvCell } from './csv-writer';
 
-export interface ExportSchedule {
+/** The power series (one entry per delivery interval) are the engine's own. */
+export interface ExportSchedule extends PowerSeries {
   /** IANA zone of the site. */
   readonly timezone: string;
   /** ISO 4217 code of the site's currency, e.g. EUR. */
@@ -25,12 +27,8 @@ export interface ExportSchedule {
   readonly energyKwh: number;
   /** One entry per delivery interval. */
   readonly priceCurrencyPerMwh: readonly number[];
-  readonly chargeKw: readonly number[];
-  readonly dischargeKw: readonly number[];
   /** Energy stored at the end of each interval, kWh. */
   readonly socEndKwh: readonly number[];
-  readonly gridImportKw: readonly number[];
-  readonly gridExportKw: readonly number[];
   /** Stored-energy value at the end of each interval, currency/MWh. */
   readonly storedEnergyValue: readonly (number | null)[];
 }

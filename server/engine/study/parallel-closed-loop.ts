@@ -11,6 +11,7 @@
  * result never rests on the guess. Only runs whose whole state is the SoC qualify
  * (no demand charge, no throughput cap).
  */
+import type { ScheduleSeries, ScheduleSeriesBuilder } from '../types';
 import type { AlignedInputs } from '../inputs/align-inputs';
 import { usableEnergyKwh } from '../inputs/problem-for';
 import { scheduleCost } from '../dispatch/schedule-cost';
@@ -25,18 +26,11 @@ export function canRunInParallel(inputs: AlignedInputs, steps: number, overlap: 
   return inputs.site.demandChargePerKw === null && inputs.battery.maxCyclesPerDay === null && steps >= 4 * overlap;
 }
 
-interface Stitched {
-  chargeKw: number[];
-  dischargeKw: number[];
-  gridImportKw: number[];
-  gridExportKw: number[];
-  socKwh: number[];
+interface Stitched extends ScheduleSeriesBuilder {
   plans: PlanLog;
 }
 
-type SeriesOf = Pick<ClosedLoopRun, 'chargeKw' | 'dischargeKw' | 'gridImportKw' | 'gridExportKw' | 'socKwh'> & {
-  readonly plans: PlanLog;
-};
+type SeriesOf = ScheduleSeries & { readonly plans: PlanLog };
 
 /** A copy of steps [runFrom, at) of `run` (which starts at grid step `runFrom`). */
 function cut(run: SeriesOf, runFrom: number, at: number): Stitched {

@@ -6,7 +6,7 @@
  * charge sees the peak reached so far and a throughput cap the energy already
  * discharged that day, so each window prices only what it can still change.
  */
-import type { DispatchProblem, DispatchSolution } from '../types';
+import type { DispatchProblem, DispatchSolution, PowerSeries, ScheduleSeries } from '../types';
 import { createDpClosedLoop, type DpClosedLoop, type DpWindowPlan } from '../dp';
 import type { AlignedInputs } from '../inputs/align-inputs';
 import type { LpBasis } from '../lp/lp-model';
@@ -48,7 +48,8 @@ export interface PlanLog {
   readonly intoCommitted: number[];
 }
 
-export interface ClosedLoopRun {
+/** The applied schedule over [from, to) and the run's figures. */
+export interface ClosedLoopRun extends ScheduleSeries {
   readonly status: DispatchSolution['status'];
   readonly message?: string;
   /** Realised money paid over [from, to), same rule as the reference path. */
@@ -56,11 +57,6 @@ export interface ClosedLoopRun {
   readonly equivalentCycles: number;
   readonly solves: number;
   readonly seconds: number;
-  readonly chargeKw: readonly number[];
-  readonly dischargeKw: readonly number[];
-  readonly gridImportKw: readonly number[];
-  readonly gridExportKw: readonly number[];
-  readonly socKwh: readonly number[];
   /** Mean over open-loop plans of the share of steps within the band of the reference. */
   readonly nearSteadyShare: number;
   readonly meanLeavingArcSteps: number;
@@ -107,11 +103,11 @@ export function runClosedLoop(inputs: AlignedInputs, req: ClosedLoopRequest): Cl
   const band = req.bandFraction ?? DEFAULT_BAND_FRACTION;
   if (req.method !== 'lp' && checkDp(whole).ok) return runClosedLoopOnDp(inputs, req, whole, usable, band, elapsed);
   const session = new HighsSession();
-  const applied = {
-    chargeKw: [] as number[],
-    dischargeKw: [] as number[],
-    gridImportKw: [] as number[],
-    gridExportKw: [] as number[],
+  const applied: { -readonly [K in keyof PowerSeries]: number[] } = {
+    chargeKw: [],
+    dischargeKw: [],
+    gridImportKw: [],
+    gridExportKw: [],
   };
   const socKwh = [req.initialEnergyKwh];
   let basis: LpBasis | undefined;
