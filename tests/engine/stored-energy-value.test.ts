@@ -3,7 +3,7 @@
 import { describe, expect, it } from 'vitest';
 import { solveDispatch } from '../../server/engine/dispatch/solve-dispatch';
 import type { DispatchProblem } from '../../server/engine/types';
-import { MODEL_VARIANTS, randomDispatchProblem } from './support/random-dispatch';
+import { MODEL_VARIANTS, randomDispatchProblem } from './support/random-problems';
 
 const backends = ['highs', 'glpk'] as const;
 const interior = (p: DispatchProblem, e: number) => {

@@ -13,7 +13,7 @@ import { createTestApp, testOrigin } from '../support/test-app';
 import { signInAs, type SignedInAgent } from '../support/auth';
 import type { JobWorker } from '../../server/jobs/job-worker';
 import { PREVIEW_LIMIT, previewLimitStore } from '../../server/horizon-preview/horizon-preview.routes';
-import { optimalArbitrageProfit } from '../jobs/independent-lp';
+import { optimalArbitrageProfit } from '../support/reference-lp';
 import {
   createPlace,
   dailyPrices,
@@ -136,7 +136,7 @@ describe('a horizon preview', () => {
         e = next;
       });
       expect(p.cost).toBeCloseTo(paidDelivery, 6);
-      // [S] javascript-lp-solver 1.0.3 (npm), on the LP of DESIGN section 3 written out in tests/jobs/independent-lp.ts
+      // [S] javascript-lp-solver 1.0.3 (npm), on the LP of docs/model.md written out in tests/support/reference-lp.ts
       // [S: Hashmi et al. 2019, arXiv 1905.00418]: the best profit over the lookahead with a free end.
       const best = optimalArbitrageProfit({
         prices: prices.slice(24, 24 + horizonHours),

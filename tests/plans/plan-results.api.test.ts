@@ -8,7 +8,7 @@ import type { Plan, PlanCreated } from '@shared/schemas/plan';
 import { createTestApp } from '../support/test-app';
 import { signInAs, type SignedInAgent } from '../support/auth';
 import type { JobWorker } from '../../server/jobs/job-worker';
-import { optimalArbitrageProfit } from '../jobs/independent-lp';
+import { optimalArbitrageProfit } from '../support/reference-lp';
 import {
   createPlace,
   dailyPrices,

@@ -5,7 +5,8 @@ import { createDpClosedLoop, solveDispatchDp } from '../../../server/engine/dp';
 import { arcFigures } from '../../../server/engine/turnpike/turnpike-figures';
 import { SlidingArcFigures } from '../../../server/engine/turnpike/sliding-arc-figures';
 import type { TerminalRule } from '../../../server/engine/types';
-import { randomProblem, rng, VARIANTS } from './random-problems';
+import { seededRandom } from '../../support/seeded-random';
+import { randomProblem, VARIANTS } from '../support/random-problems';
 
 const RULES: readonly TerminalRule[] = [
   { kind: 'free' },
@@ -21,7 +22,7 @@ describe('closed-loop plans on the dynamic program', () => {
     const wrong: string[] = [];
     for (let i = 0; i < 40; i++) {
       const seed = 7_000 + i;
-      const r = rng(seed);
+      const r = seededRandom(seed);
       const p = randomProblem(VARIANTS[i % VARIANTS.length]!, seed, 60 + Math.floor(r() * 140));
       const horizonSteps = 2 + Math.floor(r() * 40);
       const replanSteps = 1 + Math.floor(r() * Math.min(horizonSteps, 4));
@@ -63,7 +64,7 @@ describe('closed-loop plans on the dynamic program', () => {
     let withLeavingArc = 0;
     for (let i = 0; i < 40; i++) {
       const seed = 8_000 + i;
-      const r = rng(seed);
+      const r = seededRandom(seed);
       const p = randomProblem(VARIANTS[i % VARIANTS.length]!, seed, 60 + Math.floor(r() * 140));
       const usable = (p.battery.energyKwh * (p.battery.socMaxPct - p.battery.socMinPct)) / 100;
       // Reference: the whole-period optimum, with a few unknown (NaN) entries.
