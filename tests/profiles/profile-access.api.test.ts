@@ -7,8 +7,9 @@ import request from 'supertest';
 import { requireSiteProfile } from '../../server/profiles/profiles.service';
 import { createTestApp } from '../support/test-app';
 import { signInAs, type SignedInAgent } from '../support/auth';
-import { createSite, storedForSite, type CreatedSite } from '../sites/support';
-import { sample, upload } from './support';
+import { storedForSite } from '../sites/support';
+import { sample } from './support';
+import { type CreatedSite, createSite, upload } from '../support/api-fixtures';
 
 const app = createTestApp();
 let planner: SignedInAgent;

@@ -1,7 +1,8 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { createTestApp } from '../support/test-app';
 import { signInAs, type SignedInAgent } from '../support/auth';
-import { auditEvents, createSite, storedForSite, type CreatedSite } from './support';
+import { auditEvents, storedForSite } from './support';
+import { type CreatedSite, createSite } from '../support/api-fixtures';
 
 const app = createTestApp();
 let planner: SignedInAgent;

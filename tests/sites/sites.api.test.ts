@@ -2,7 +2,8 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import request from 'supertest';
 import { createTestApp } from '../support/test-app';
 import { signInAs, type SignedInAgent } from '../support/auth';
-import { auditEvents, createSite, uniqueName } from './support';
+import { auditEvents } from './support';
+import { createSite, uniqueName } from '../support/api-fixtures';
 
 const app = createTestApp();
 let planner: SignedInAgent;
