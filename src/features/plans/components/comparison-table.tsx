@@ -3,6 +3,7 @@ import type { Plan } from '@shared/schemas/plan';
 import { formatMoney, formatNumber, formatPercent, formatSteps } from '@/lib/format';
 import { ruleLabel } from './comparison-labels';
 import { ScrollRegion } from '@/components/scroll-region';
+import { TableHead } from '@/components/data-table';
 
 /**
  * The plan the others are measured against: the longest horizon computed, the same rule preferred
@@ -35,27 +36,21 @@ export function ComparisonTable({ plans }: { plans: Plan[] }) {
     <ScrollRegion label="Comparison table (scrolls sideways)">
       <table className="w-full rounded bg-white text-left text-sm shadow-sm">
         <caption className="sr-only">Plans of this delivery window by horizon and terminal rule</caption>
-        <thead className="bg-ink-100 text-ink-700">
-          <tr>
-            {[
-              'Horizon',
-              'Terminal rule',
-              'Method',
-              'Cost',
-              'Earnings',
-              'Near-steady',
-              'Entry arc',
-              'Leaving arc',
-              'Commit window',
-              'Max SoC gap to longest plan',
-              'Flags',
-            ].map((h) => (
-              <th key={h} scope="col" className="whitespace-nowrap px-2 py-1.5">
-                {h}
-              </th>
-            ))}
-          </tr>
-        </thead>
+        <TableHead
+          headers={[
+            'Horizon',
+            'Terminal rule',
+            'Method',
+            'Cost',
+            'Earnings',
+            'Near-steady',
+            'Entry arc',
+            'Leaving arc',
+            'Commit window',
+            'Max SoC gap to longest plan',
+            'Flags',
+          ]}
+        />
         <tbody>
           {plans.map((p) => {
             const r = p.results;

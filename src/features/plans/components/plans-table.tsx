@@ -3,6 +3,7 @@ import type { Plan } from '@shared/schemas/plan';
 import { useSiteTime } from '@/components/use-site-time';
 import { formatMoney, formatPercent } from '@/lib/format';
 import { ScrollRegion } from '@/components/scroll-region';
+import { TableHead } from '@/components/data-table';
 
 /** One row per plan: window, horizon, status, the job and the headline figures. */
 export function PlansTable({ plans }: { plans: Plan[] }) {
@@ -11,17 +12,19 @@ export function PlansTable({ plans }: { plans: Plan[] }) {
   return (
     <ScrollRegion label="Plans table (scrolls sideways)">
       <table className="w-full rounded bg-white text-left text-sm shadow-sm">
-        <thead className="bg-ink-100 text-ink-700">
-          <tr>
-            {['Battery', 'Delivery (site time)', 'Horizon', 'Rule', 'Status', 'Computation', 'Cost', 'Near-steady', 'Flags'].map(
-              (h) => (
-                <th key={h} scope="col" className="whitespace-nowrap px-2 py-1.5">
-                  {h}
-                </th>
-              ),
-            )}
-          </tr>
-        </thead>
+        <TableHead
+          headers={[
+            'Battery',
+            'Delivery (site time)',
+            'Horizon',
+            'Rule',
+            'Status',
+            'Computation',
+            'Cost',
+            'Near-steady',
+            'Flags',
+          ]}
+        />
         <tbody>
           {plans.map((p) => (
             <tr key={p.id} className="border-t border-ink-100 tabular-nums">

@@ -11,9 +11,9 @@ import {
   useTable,
 } from '@tanstack/react-table';
 import type { PlanResults, PlanStep } from '@shared/schemas/plan';
-import { buttonClass } from '@/components/form-field';
 import { formatLocalTime, formatNumber } from '@/lib/format';
 import { ScrollRegion } from '@/components/scroll-region';
+import { DataTable, TablePager } from '@/components/data-table';
 
 const features = tableFeatures({ rowPaginationFeature, paginatedRowModel: createPaginatedRowModel() });
 const helper = createColumnHelper<typeof features, PlanStep>();
@@ -77,58 +77,17 @@ export function ScheduleTable({
   return (
     <div className="space-y-2">
       <ScrollRegion label="Schedule table (scrolls sideways)">
-        <table className="w-full rounded bg-white text-left text-sm shadow-sm">
-          <caption className="sr-only">
-            Schedule, one row per step; page {pageIndex + 1} of {table.getPageCount()}
-          </caption>
-          <thead className="bg-ink-100 text-ink-700">
-            {table.getHeaderGroups().map((group) => (
-              <tr key={group.id}>
-                {group.headers.map((header) => (
-                  <th key={header.id} scope="col" className="whitespace-nowrap px-2 py-1.5">
-                    {header.isPlaceholder ? null : <table.FlexRender header={header} />}
-                  </th>
-                ))}
-              </tr>
-            ))}
-          </thead>
-          <tbody>
-            {table.getRowModel().rows.map((row) => (
-              <tr
-                key={row.id}
-                className={`border-t border-ink-100 tabular-nums ${row.original.delivery ? '' : 'italic text-ink-500'} ${row.original.arc === 'leaving' ? 'bg-amber-100' : ''}`}
-              >
-                {row.getAllCells().map((cell) => (
-                  <td key={cell.id} className="whitespace-nowrap px-2 py-1">
-                    <table.FlexRender cell={cell} />
-                  </td>
-                ))}
-              </tr>
-            ))}
-          </tbody>
-        </table>
+        <DataTable
+          table={table}
+          caption={`Schedule, one row per step; page ${pageIndex + 1} of ${table.getPageCount()}`}
+          headerCellClassName="whitespace-nowrap px-2 py-1.5"
+          cellClassName="whitespace-nowrap px-2 py-1"
+          rowClassName={(step) =>
+            `border-t border-ink-100 tabular-nums ${step.delivery ? '' : 'italic text-ink-500'} ${step.arc === 'leaving' ? 'bg-amber-100' : ''}`
+          }
+        />
       </ScrollRegion>
-      <nav aria-label="Pages of the schedule" className="flex items-center gap-2 text-sm">
-        <button
-          type="button"
-          className={buttonClass.secondary}
-          onClick={() => table.previousPage()}
-          disabled={!table.getCanPreviousPage()}
-        >
-          Previous
-        </button>
-        <span>
-          Page {pageIndex + 1} of {table.getPageCount()}
-        </span>
-        <button
-          type="button"
-          className={buttonClass.secondary}
-          onClick={() => table.nextPage()}
-          disabled={!table.getCanNextPage()}
-        >
-          Next
-        </button>
-      </nav>
+      <TablePager table={table} label="Pages of the schedule" />
     </div>
   );
 }

@@ -7,7 +7,7 @@ import {
   tableFeatures,
   useTable,
 } from '@tanstack/react-table';
-import { buttonClass, compactSelect } from '@/components/form-field';
+import { DataTable, TablePager } from '@/components/data-table';
 import { formatLocalTime, formatNumber } from '@/lib/format';
 
 interface ValueRow {
@@ -54,84 +54,24 @@ export function ProfileValuesTable({ startMs, stepMinutes, values, filledIndexes
     [timeZone, unit],
   );
   const table = useTable({ features, columns, data, initialState: { pagination: { pageIndex: 0, pageSize: 24 } } });
-  const { pageIndex, pageSize } = table.state.pagination;
+  const { pageIndex } = table.state.pagination;
 
   return (
     <div className="space-y-2">
-      <table className="w-full rounded bg-white text-left text-sm shadow-sm">
-        <caption className="sr-only">
-          Values, page {pageIndex + 1} of {table.getPageCount()}
-        </caption>
-        <thead className="bg-ink-100 text-ink-700">
-          {table.getHeaderGroups().map((group) => (
-            <tr key={group.id}>
-              {group.headers.map((header) => (
-                <th key={header.id} scope="col" className="px-3 py-1.5">
-                  {header.isPlaceholder ? null : <table.FlexRender header={header} />}
-                </th>
-              ))}
-            </tr>
-          ))}
-        </thead>
-        <tbody>
-          {table.getRowModel().rows.map((row) => (
-            <tr key={row.id} className={`border-t border-ink-100 tabular-nums ${row.original.filled ? 'bg-amber-100' : ''}`}>
-              {row.getAllCells().map((cell) => (
-                <td key={cell.id} className="px-3 py-1">
-                  <table.FlexRender cell={cell} />
-                </td>
-              ))}
-            </tr>
-          ))}
-        </tbody>
-      </table>
-      <nav aria-label="Pages of values" className="flex flex-wrap items-center gap-2 text-sm">
-        <button
-          type="button"
-          className={buttonClass.secondary}
-          onClick={() => table.firstPage()}
-          disabled={!table.getCanPreviousPage()}
-        >
-          First
-        </button>
-        <button
-          type="button"
-          className={buttonClass.secondary}
-          onClick={() => table.previousPage()}
-          disabled={!table.getCanPreviousPage()}
-        >
-          Previous
-        </button>
-        <span>
-          Page {pageIndex + 1} of {table.getPageCount().toLocaleString()}
-        </span>
-        <button
-          type="button"
-          className={buttonClass.secondary}
-          onClick={() => table.nextPage()}
-          disabled={!table.getCanNextPage()}
-        >
-          Next
-        </button>
-        <button
-          type="button"
-          className={buttonClass.secondary}
-          onClick={() => table.lastPage()}
-          disabled={!table.getCanNextPage()}
-        >
-          Last
-        </button>
-        <label className="ml-4 flex items-center gap-2">
-          Rows per page
-          <select className={compactSelect} value={pageSize} onChange={(e) => table.setPageSize(Number(e.target.value))}>
-            {PAGE_SIZES.map((size) => (
-              <option key={size} value={size}>
-                {size}
-              </option>
-            ))}
-          </select>
-        </label>
-      </nav>
+      <DataTable
+        table={table}
+        caption={`Values, page ${pageIndex + 1} of ${table.getPageCount()}`}
+        headerCellClassName="px-3 py-1.5"
+        cellClassName="px-3 py-1"
+        rowClassName={(row) => `border-t border-ink-100 tabular-nums ${row.filled ? 'bg-amber-100' : ''}`}
+      />
+      <TablePager
+        table={table}
+        label="Pages of values"
+        className="flex flex-wrap items-center gap-2 text-sm"
+        ends
+        pageSizes={PAGE_SIZES}
+      />
     </div>
   );
 }

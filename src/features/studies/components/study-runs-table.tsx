@@ -1,6 +1,7 @@
 import type { StudyResults } from '@shared/schemas/study';
 import { formatDuration, formatMoney, formatNumber, formatPercent } from '@/lib/format';
 import { ScrollRegion } from '@/components/scroll-region';
+import { TableHead } from '@/components/data-table';
 
 /** Every closed-loop run: the numbers behind the charts. */
 export function StudyRunsTable({ results, currency }: { results: StudyResults; currency: string }) {
@@ -13,27 +14,21 @@ export function StudyRunsTable({ results, currency }: { results: StudyResults; c
           Reference path over the period: {formatMoney(results.referenceCost, currency)} (
           {formatNumber(results.referenceEquivalentCycles, 1)} equivalent cycles)
         </caption>
-        <thead className="bg-ink-100 text-ink-700">
-          <tr>
-            {[
-              'Horizon',
-              'Terminal rule',
-              'Cost',
-              'Gap',
-              'Cycles',
-              'Near-steady',
-              'Mean leaving arc',
-              'Leaving into commit',
-              'Solves',
-              'Time',
-              'Method',
-            ].map((h) => (
-              <th key={h} scope="col" className="whitespace-nowrap px-2 py-1.5">
-                {h}
-              </th>
-            ))}
-          </tr>
-        </thead>
+        <TableHead
+          headers={[
+            'Horizon',
+            'Terminal rule',
+            'Cost',
+            'Gap',
+            'Cycles',
+            'Near-steady',
+            'Mean leaving arc',
+            'Leaving into commit',
+            'Solves',
+            'Time',
+            'Method',
+          ]}
+        />
         <tbody>
           {runs.map((r) => {
             const chosen = rec?.horizonHours === r.horizonHours && rec.terminal === r.terminal;

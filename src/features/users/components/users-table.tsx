@@ -15,6 +15,7 @@ import {
 } from '@tanstack/react-table';
 import { roleLabels, roles } from '@shared/schemas/auth';
 import { userStatuses, type User } from '@shared/schemas/users';
+import { DataTable } from '@/components/data-table';
 import { inputClass } from '@/components/form-field';
 import { RoleSelect, UserActions, isActiveAdmin, type ReportOutcome } from './user-row-actions';
 import { formatMoment } from '@/lib/format';
@@ -140,58 +141,41 @@ export function UsersTable({ users, report }: { users: User[]; report: ReportOut
         </p>
       </div>
       <div className="overflow-x-auto rounded-lg border border-ink-100 bg-white shadow-sm">
-        <table className="w-full text-left text-sm">
-          <thead className="bg-ink-50 text-ink-700">
-            {table.getHeaderGroups().map((group) => (
-              <tr key={group.id}>
-                {group.headers.map((header) => {
-                  const sorted = header.column.getIsSorted();
-                  return (
-                    <th
-                      key={header.id}
-                      scope="col"
-                      aria-sort={sorted ? (sorted === 'asc' ? 'ascending' : 'descending') : undefined}
-                      className="px-4 py-2 font-semibold"
-                    >
-                      {header.column.getCanSort() ? (
-                        <button
-                          type="button"
-                          onClick={header.column.getToggleSortingHandler()}
-                          className="inline-flex items-center gap-1 hover:text-ink-900"
-                        >
-                          <table.FlexRender header={header} />
-                          <span aria-hidden="true" className="text-xs text-ink-500">
-                            {sorted === 'asc' ? '▲' : sorted === 'desc' ? '▼' : '↕'}
-                          </span>
-                        </button>
-                      ) : (
-                        <table.FlexRender header={header} />
-                      )}
-                    </th>
-                  );
-                })}
-              </tr>
-            ))}
-          </thead>
-          <tbody>
-            {rows.map((row) => (
-              <tr key={row.id} className="border-t border-ink-100">
-                {row.getAllCells().map((cell) => (
-                  <td key={cell.id} className="px-4 py-2 align-middle">
-                    <table.FlexRender cell={cell} />
-                  </td>
-                ))}
-              </tr>
-            ))}
-            {rows.length === 0 && (
-              <tr>
-                <td colSpan={6} className="px-4 py-6 text-center text-ink-500">
-                  No user matches these filters.
-                </td>
-              </tr>
-            )}
-          </tbody>
-        </table>
+        <DataTable
+          table={table}
+          className="w-full text-left text-sm"
+          headClassName="bg-ink-50 text-ink-700"
+          headerCellClassName="px-4 py-2 font-semibold"
+          cellClassName="px-4 py-2 align-middle"
+          ariaSort={(header) => {
+            const sorted = header.column.getIsSorted();
+            return sorted ? (sorted === 'asc' ? 'ascending' : 'descending') : undefined;
+          }}
+          renderHeader={(header) => {
+            const sorted = header.column.getIsSorted();
+            return header.column.getCanSort() ? (
+              <button
+                type="button"
+                onClick={header.column.getToggleSortingHandler()}
+                className="inline-flex items-center gap-1 hover:text-ink-900"
+              >
+                <table.FlexRender header={header} />
+                <span aria-hidden="true" className="text-xs text-ink-500">
+                  {sorted === 'asc' ? '▲' : sorted === 'desc' ? '▼' : '↕'}
+                </span>
+              </button>
+            ) : (
+              <table.FlexRender header={header} />
+            );
+          }}
+          empty={
+            <tr>
+              <td colSpan={6} className="px-4 py-6 text-center text-ink-500">
+                No user matches these filters.
+              </td>
+            </tr>
+          }
+        />
       </div>
     </div>
   );
