@@ -307,7 +307,7 @@ async function sixHorizonStudy() {
 }
 
 /**
- * Issue 9: the exact dynamic program (CPU ms) against this file's plain GLPK
+ * The exact dynamic program (CPU ms) against this file's plain GLPK
  * window in the same run; the six-horizon study, and the whole `cli study`
  * command on the sample data (target ≤ 3 s, process start included).
  */

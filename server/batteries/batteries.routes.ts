@@ -1,4 +1,4 @@
-/** `GET|POST /api/sites/:id/batteries`, `GET|PATCH /api/batteries/:id` (DESIGN section 6). */
+/** `GET|POST /api/sites/:id/batteries`, `GET|PATCH /api/batteries/:id`. */
 import { Router } from 'express';
 import { batteryCreateSchema, batteryPatchSchema } from '@shared/schemas/battery';
 import { actorFrom, pathId } from '../sites/request-context';

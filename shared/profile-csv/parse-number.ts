@@ -1,8 +1,8 @@
 /**
  * Reads one value cell. Plain decimal numbers only: an optional sign, digits,
  * one decimal separator, an optional exponent. A decimal comma is read only in
- * semicolon-separated files, where it cannot be confused with the delimiter
- * (DESIGN section 4). Thousands separators are refused rather than guessed.
+ * semicolon-separated files, where it cannot be confused with the delimiter.
+ * Thousands separators are refused rather than guessed.
  */
 import { truncate } from './parse-timestamp';
 

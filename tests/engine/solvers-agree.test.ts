@@ -1,6 +1,6 @@
 // The engine's LP path against two independent LP solvers from the npm registry
 // (javascript-lp-solver 1.0.3 and glpk.js 5.0.0) on a second, independently
-// written formulation of DESIGN section 3 (tests/engine/support/reference-lp.ts):
+// written formulation of docs/model.md (tests/support/reference-lp.ts):
 // optimal costs must agree within 1e-6 relative on 50 seeded random instances of
 // every model variant, for both of the engine's backends, and no schedule may
 // break a limit. [D] An LP has one optimal value even when several schedules reach it

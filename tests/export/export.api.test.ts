@@ -111,7 +111,7 @@ describe('exporting an approved plan', () => {
     expect(second?.notice).toBe('');
   });
 
-  it('carries the cautions of DESIGN section 8 in the file itself', () => {
+  it('carries the cautions in the file itself', () => {
     const notice = rowsOf(text)[0]?.notice ?? '';
     expect(notice).toMatch(/interconnection agreement/);
     expect(notice).toMatch(/grid code/);

@@ -1,5 +1,5 @@
 /**
- * The horizon preview solves on its own worker thread (issue 6: the API stays
+ * The horizon preview solves on its own worker thread (the API stays
  * responsive while computations run): other requests are answered while a slow
  * preview computes, a preview that fails in the thread is answered with a clear
  * error and the next one works, a full queue is refused with 503 and Retry-After,

@@ -1,5 +1,5 @@
 /**
- * The quick horizon preview, POST /api/plans/:id/horizon-preview (issue 9), against the
+ * The quick horizon preview, POST /api/plans/:id/horizon-preview, against the
  * real test database: it agrees with a full plan made with the same horizon through the
  * job, its schedule is optimal by an independent LP solver, bad horizons and models the
  * exact path cannot take are refused with what to do, viewers may use it, and it writes

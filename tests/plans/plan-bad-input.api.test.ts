@@ -1,5 +1,5 @@
 /**
- * Every bad input of issue 6 for plans gets a clear 422 (what, where, how to
+ * Every bad input for plans gets a clear 422 (what, where, how to
  * fix) and stores nothing; a battery edited while its plan waits in the queue
  * does not change the plan; an infeasible model ends the job with the
  * engine's message on the plan.

@@ -29,7 +29,7 @@ const fixtureBattery = {
 
 describe('a plan computed by a background job', () => {
   it('earns 61 on prices [20, 100] with a 1 MW / 1 MWh battery starting empty', async () => {
-    // [S] REFERENCES.md worked fixture A (checked with an independent LP solver): charge 1 MW at 20,
+    // [S] worked fixture A (checked with an independent LP solver): charge 1 MW at 20,
     // discharge 0.81 MW at 100: 0.81·100 − 1·20 = 61. The profile repeats [20, 100] for two days.
     const prices = Array.from({ length: 48 }, (_, i) => (i % 2 === 0 ? 20 : 100));
     const place = await createPlace(jobs.planner, {

@@ -1,5 +1,5 @@
 /**
- * The steady cycle from weekdays or weekend days only (DESIGN section 3: "Offer
+ * The steady cycle from weekdays or weekend days only ("Offer
  * weekday/weekend representative days as an option"), through POST /api/plans and
  * POST /api/studies, the jobs and the stored results.
  */

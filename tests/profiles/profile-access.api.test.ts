@@ -1,5 +1,5 @@
 /**
- * Who may read, upload and delete profiles (DESIGN section 5), and a profile
+ * Who may read, upload and delete profiles, and a profile
  * never serving another site (SECURITY.md: object-level checks).
  */
 import { beforeAll, describe, expect, it } from 'vitest';

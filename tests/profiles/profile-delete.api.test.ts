@@ -1,6 +1,6 @@
 /**
  * Deleting a profile: allowed while no plan rests on it, refused with the
- * reason (409) while a submitted or approved plan does (issue 5), and refused
+ * reason (409) while a submitted or approved plan does, and refused
  * while a draft plan refers to it (the plans table's foreign key).
  */
 import { randomUUID } from 'node:crypto';

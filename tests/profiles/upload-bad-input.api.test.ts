@@ -1,5 +1,5 @@
 /**
- * Every bad input of issue 5 through the real upload endpoint: the right status,
+ * Every bad upload input through the real upload endpoint: the right status,
  * the line, nothing stored, the server still answering. The files and their
  * expected lines are the hand-written ones in sample-data/broken (its README).
  */

@@ -32,7 +32,7 @@ describe('creating batteries', () => {
     expect(events[0]?.details.defaulted).toContain('efficiencyCharge');
   });
 
-  it('stores settings outside common practice but lists a warning for each (DESIGN section 8)', async () => {
+  it('stores settings outside common practice but lists a warning for each', async () => {
     const response = await create({
       name: 'Aggressive',
       energyKwh: 1000,

@@ -126,7 +126,7 @@ describe('editing sites', () => {
   });
 });
 
-describe('who may change sites (DESIGN section 5)', () => {
+describe('who may change sites', () => {
   it('lets planners and admins create and edit, and refuses viewers and approvers with 403', async () => {
     const site = await createSite(admin);
     expect((await admin.patch(`/api/sites/${site.id}`).send({ currency: 'USD' })).status).toBe(200);

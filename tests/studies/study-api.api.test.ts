@@ -1,7 +1,7 @@
 /**
  * Horizon studies through the API and a background job: results against an
  * independent LP solver, progress to the end, lists with status filters, and
- * the bad inputs of issue 6 refused with nothing stored.
+ * bad inputs refused with nothing stored.
  */
 import { beforeAll, describe, expect, it } from 'vitest';
 import type { Study, StudyCreated } from '@shared/schemas/study';

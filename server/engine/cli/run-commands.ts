@@ -1,5 +1,5 @@
 /**
- * The four commands of the command line (issue 4's contract). Each returns the
+ * The four commands of the command line (its contract). Each returns the
  * JSON document for stdout or throws CliInputError for bad input.
  */
 import { batteryWarningMessages } from '@shared/schemas/battery-warnings';

@@ -1,6 +1,6 @@
 /**
  * The single integration point between the LP path and the exact
- * dynamic-programming path (issue 9, `server/engine/dp/`). `auto` asks
+ * dynamic-programming path (`server/engine/dp/`). `auto` asks
  * canSolveWithDp first and uses the dynamic program only where it is exact.
  */
 import type { DispatchProblem, DispatchSolution } from '../types';

@@ -3,7 +3,7 @@
  * worth of energy carried past that instant into the rest of the cycle. Inside
  * the SoC window it is the dual of the SoC row (unique there). Where the SoC sits
  * at a bound the dual is not unique: any value between the two one-sided
- * derivatives of the cost is optimal (REFERENCES, degeneracy note), a solver
+ * derivatives of the cost is optimal (docs/sources.md: degeneracy), a solver
  * returns either, and the dual of slot t's own row also counts energy that slot t
  * could still discharge. So there we measure the one-sided value on the side the
  * SoC can move to, by re-solving the small steady LP with a little energy removed

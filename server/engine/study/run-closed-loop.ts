@@ -220,7 +220,7 @@ function dpLoopFor(inputs: AlignedInputs, req: ClosedLoopRequest, whole: Dispatc
 
 /**
  * The same closed loop on the exact dynamic program's warm receding-horizon
- * runner (issue 9): consecutive windows reuse value functions and decisions,
+ * runner: consecutive windows reuse value functions and decisions,
  * bit-identical to solving each window cold; figures as in the LP loop above.
  */
 function runClosedLoopOnDp(

@@ -1,4 +1,4 @@
-/** Slackwater's chart look (DESIGN section 7): ink structure, sea-glass battery and steady cycle, amber leaving arc. */
+/** Slackwater's chart look: ink structure, sea-glass battery and steady cycle, amber leaving arc. */
 import { buildChartTheme } from '@visx/xychart';
 
 export const colours = {

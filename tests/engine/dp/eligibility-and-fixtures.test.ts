@@ -71,7 +71,7 @@ describe('models the dynamic program cannot take', () => {
 });
 
 describe('worked fixtures', () => {
-  // [D] REFERENCES.md fixture A: charge 1 MW at 20, hold 0.9 MWh, discharge 0.81 MW at 100:
+  // [D] worked fixture A: charge 1 MW at 20, hold 0.9 MWh, discharge 0.81 MW at 100:
   // profit 0.81·100 − 1·20 = 61.
   it('earns 61 on two price levels 20 and 100 with 0.9 efficiencies, free or cyclic', () => {
     expect(solveDispatchDp(problem([20, 100])).cost).toBeCloseTo(-61, 9);

@@ -77,7 +77,7 @@ describe('closed-loop plans on the dynamic program', () => {
         horizonSteps: 2 + Math.floor(r() * 40),
         replanSteps: 1 + Math.floor(r() * 2),
         onPlan: (plan) => {
-          // [D] arcFigures (DESIGN section 2 words) recounts the whole plan from scratch.
+          // [D] arcFigures (docs/model.md) recounts the whole plan from scratch.
           const full = arcFigures(plan.socKwh.subarray(1), reference.slice(plan.startStep, plan.endStep), usable, band);
           const fig = sliding.update(plan.startStep, plan.endStep, plan.socKwh.subarray(1), plan.recomputedSteps);
           expect(fig.nearSteadyShare, `seed ${seed} window ${plan.startStep}`).toBe(full.nearSteadyShare);

@@ -45,7 +45,7 @@ describe('stored-energy value of the dynamic program', () => {
       for (let k = 0; k < 2; k++) {
         const t = Math.floor(r() * p.priceImport.length);
         const e = dp.socKwh[t + 1]!;
-        // [S: REFERENCES, degeneracy] duals are not unique at bounds: compare inside only.
+        // [S: docs/sources.md, degeneracy] duals are not unique at bounds: compare inside only.
         if (!(e > emin + margin && e < emax - margin)) continue;
         const lp = lpValueInterval(p, (d) => ({ inject: { step: t, deltaKwh: d } }), delta);
         if (!lp) continue;

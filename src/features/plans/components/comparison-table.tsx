@@ -75,7 +75,7 @@ export function ComparisonTable({ plans }: { plans: Plan[] }) {
                 </td>
                 <td className="px-2 py-1">{gap === null ? '–' : `${formatNumber(gap, 1)} %`}</td>
                 <td className="px-2 py-1">
-                  {/* Flagged plans stand out in amber (DESIGN section 7); the flags' words are on the plan page. */}
+                  {/* Flagged plans stand out in amber; the flags' words are on the plan page. */}
                   {r && r.turnpike.flags.length > 0 ? (
                     <span
                       className="rounded bg-amber-100 px-1.5 py-0.5 font-semibold text-amber-700"

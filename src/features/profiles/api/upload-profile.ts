@@ -13,7 +13,7 @@ export interface UploadProfileInput {
   fillGaps: boolean;
 }
 
-/** multipart/form-data with the field names of DESIGN section 6; a 422 carries `{issues:[{line,message}], hint}`. */
+/** multipart/form-data with the API's field names; a 422 carries `{issues:[{line,message}], hint}`. */
 export function uploadProfile(input: UploadProfileInput) {
   const form = new FormData();
   form.append('kind', input.kind);
