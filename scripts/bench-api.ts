@@ -1,5 +1,5 @@
 /**
- * Benchmark for issue 6 (figures, not a test). Prints JSON.
+ * API benchmark: plans and studies through the jobs (figures, not a test). Prints JSON.
  *   1. API p95 latency of GET /api/plans/:id while a year-long horizon study runs
  *      in the same process's default worker (the web server runs one by default),
  *      against the same requests with nothing running;

@@ -1,5 +1,5 @@
 /**
- * Benchmark for issue 5: parse and validate a year of 5-minute data (105 120
+ * Profile upload benchmark: parse and validate a year of 5-minute data (105 120
  * rows) with parseProfileCsv; the target is ≤ 2 s. The files are generated in
  * memory (invented values). Prints JSON figures. Run: npx tsx scripts/bench-parse.ts
  */

@@ -26,7 +26,7 @@ import { runClosedLoop } from '../server/engine/study/run-closed-loop';
 import { runClosedLoopParallel } from '../server/engine/study/parallel-closed-loop';
 import { runHorizonStudy } from '../server/engine/study/run-horizon-study';
 import type { BatteryParams } from '../server/engine/types';
-import { benchDp } from '../server/engine/dp/bench';
+import { benchDp } from './lib/bench-dp';
 import { benchCliCommand } from './lib/bench-cli';
 import { closedLoopWithLimits } from './bench-limits';
 
@@ -308,7 +308,7 @@ async function sixHorizonStudy() {
 }
 
 /**
- * Issue 9: the exact dynamic program (CPU ms) against this file's plain GLPK
+ * The exact dynamic program (CPU ms) against this file's plain GLPK
  * window in the same run; the six-horizon study, and the whole `cli study`
  * command on the sample data (target ≤ 3 s, process start included).
  */

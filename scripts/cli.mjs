@@ -1,4 +1,4 @@
-// `npm run cli -- <command> …`: the engine command line (issue 4's contract).
+// `npm run cli -- <command> …`: the engine command line (its contract).
 // Runs the prebuilt bundle in this process (see cli-bundle.mjs), rebuilding it
 // first when a source changed; without esbuild it runs the sources with tsx.
 // Either way stdout carries the command's JSON only and the exit code is the command's.

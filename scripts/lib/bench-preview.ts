@@ -1,5 +1,5 @@
 /**
- * Horizon preview latency for the API benchmark (issue 9): POST
+ * Horizon preview latency for the API benchmark: POST
  * /api/plans/:id/horizon-preview over real HTTP for a one-day delivery window at
  * several horizons, p50/p95 of the round trip and of the engine time the server
  * reports. Requests are paced under the per-user rate limit (5 a second), so every

@@ -3,7 +3,7 @@ import { check, doublePrecision, integer, pgTable, text, timestamp, uniqueIndex,
 import { sites } from '../sites/sites.schema';
 
 /**
- * Storage assets at a site, every parameter of DESIGN section 3 (units in the
+ * Storage assets at a site, every parameter of the model (docs/model.md) (units in the
  * column names). Plans copy these values into their inputs snapshot, so editing
  * a battery never changes a signed plan. `version` guards concurrent edits.
  */

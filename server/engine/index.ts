@@ -22,7 +22,6 @@ export { summarizePath, type PathSummary, type SeriesPoint } from './reference/p
 export { solvePlan, type Plan, type PlanRequest } from './plan/solve-plan';
 export { canSolveWithDp, type DpEligibility } from './dp';
 export type { PlanTurnpike } from './plan/plan-turnpike';
-export { settingWarnings } from './plan/plan-flags';
 export {
   arcFigures,
   commitWindowSteps,

@@ -107,8 +107,24 @@ export interface DispatchProblem {
 
 export type SolveStatus = 'optimal' | 'infeasible' | 'unbounded' | 'error';
 
+/** Battery and grid power per step, kW (length N): the four power series of every schedule. */
+export interface PowerSeries {
+  readonly chargeKw: readonly number[];
+  readonly dischargeKw: readonly number[];
+  readonly gridImportKw: readonly number[];
+  readonly gridExportKw: readonly number[];
+}
+
+/** The five series of a schedule: the power series and the energy stored, kWh (N + 1 entries, starting at e_0). */
+export interface ScheduleSeries extends PowerSeries {
+  readonly socKwh: readonly number[];
+}
+
+/** The same five series while they are being filled in. */
+export type ScheduleSeriesBuilder = { -readonly [K in keyof ScheduleSeries]: number[] };
+
 /** The solution of a DispatchProblem. Series have length N except socKwh (N + 1, starting at e_0). */
-export interface DispatchSolution {
+export interface DispatchSolution extends ScheduleSeries {
   readonly status: SolveStatus;
   /** Which algorithm produced it. */
   readonly method: 'dp' | 'lp';
@@ -118,11 +134,6 @@ export interface DispatchSolution {
   readonly objective: number;
   /** Money paid incl. degradation and demand charge, minus reserve revenue, excluding any terminal value (negative = earnings). */
   readonly cost: number;
-  readonly chargeKw: readonly number[];
-  readonly dischargeKw: readonly number[];
-  readonly gridImportKw: readonly number[];
-  readonly gridExportKw: readonly number[];
-  readonly socKwh: readonly number[];
   /** Value of one more MWh stored at the end of each step (dual of the SoC equation for e_{t+1}), currency/MWh. */
   readonly storedEnergyValue: readonly number[];
   readonly peakImportKw: number;

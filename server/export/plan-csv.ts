@@ -17,6 +17,7 @@
  */
 import { createZoneClock, formatInstant, type ZoneClock } from '@shared/profile-csv';
 import type { PlanStatus } from '@shared/schemas/sign-off';
+import type { PowerSeries } from '../engine/types';
 import { fixed, formatFixedCell, writeCsv, type CsvCell } from './csv-writer';
 
 /** The value as the file writes it. */
@@ -25,7 +26,8 @@ const written = (value: number, decimals: number) => Number(formatFixedCell(valu
 /** Decimals per unit: kW and kWh to the watt(-hour), money per MWh to the cent, % to a hundredth. */
 export const DECIMALS = { power: 3, energy: 3, price: 2, percent: 2 } as const;
 
-export interface ExportSchedule {
+/** The power series (one entry per delivery interval) are the engine's own. */
+export interface ExportSchedule extends PowerSeries {
   /** IANA zone of the site. */
   readonly timezone: string;
   /** ISO 4217 code of the site's currency, e.g. EUR. */
@@ -37,12 +39,8 @@ export interface ExportSchedule {
   readonly energyKwh: number;
   /** One entry per delivery interval. */
   readonly priceCurrencyPerMwh: readonly number[];
-  readonly chargeKw: readonly number[];
-  readonly dischargeKw: readonly number[];
   /** Energy stored at the end of each interval, kWh. */
   readonly socEndKwh: readonly number[];
-  readonly gridImportKw: readonly number[];
-  readonly gridExportKw: readonly number[];
   /** Stored-energy value at the end of each interval, currency/MWh. */
   readonly storedEnergyValue: readonly (number | null)[];
 }

@@ -1,6 +1,6 @@
 /**
  * Linear interpolation across missing intervals, used only when the user asks
- * for gap filling (DESIGN section 4). Each missing value lies on the straight
+ * for gap filling. Each missing value lies on the straight
  * line between the nearest given values before and after it.
  */
 

@@ -1,5 +1,5 @@
 /**
- * Parses an uploaded profile CSV (DESIGN section 4) into a regular series in the
+ * Parses an uploaded profile CSV into a regular series in the
  * canonical unit of its kind, or into every problem found, each with the
  * physical line of the file and how to fix it. Pure and browser-safe: the
  * browser preview and the server (the authority) run the same code.

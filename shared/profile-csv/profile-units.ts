@@ -1,6 +1,6 @@
 /**
  * Units accepted at profile upload and how each converts to the canonical unit
- * the engine works in (DESIGN section 3: prices in currency/MWh, power in kW).
+ * the engine works in (prices in currency/MWh, power in kW).
  * Plain data with no zod so the browser preview and the server share it cheaply.
  */
 

@@ -1,4 +1,4 @@
-/** Roles, what each may do (DESIGN section 5), and the sign-in and password requests. */
+/** Roles, what each may do, and the sign-in and password requests. */
 import { z } from 'zod';
 
 export const roles = ['admin', 'planner', 'approver', 'viewer'] as const;
@@ -6,7 +6,7 @@ export type Role = (typeof roles)[number];
 export const roleSchema = z.enum(roles, { error: `Choose one of the roles: ${roles.join(', ')}.` });
 
 /**
- * DESIGN section 5 as data. The server's route table and the client's hiding of
+ * The role table as data. The server's route table and the client's hiding of
  * buttons both read it, so the two cannot drift apart.
  */
 export const permissions = {

@@ -1,6 +1,6 @@
 /**
  * Defaults for a utility-scale lithium-ion battery, each with its source
- * (shared/REFERENCES.md; [S] published, [D] derived here, [M] from memory).
+ * (docs/sources.md; [S] published, [D] derived here, [M] from memory).
  */
 import type { BatteryCreateInput, BatteryFields } from './battery';
 

@@ -1,7 +1,8 @@
 /**
- * Settings outside common practice (DESIGN section 8): warnings, not errors.
- * Computed here so the form (while typing) and the API (in every battery
- * response) show the same list.
+ * The one rule set for battery settings outside common practice: warnings, not
+ * errors (docs/model.md, "Cautions"). The battery form (while typing), the API (in
+ * every battery response and a plan's inputs snapshot) and the engine's command
+ * line all call it, so they always show the same list. Sources: docs/sources.md.
  */
 import type { BatteryFields, BatteryWarning } from './battery';
 
@@ -12,20 +13,25 @@ export interface SiteLimits {
 }
 
 // Thresholds, with where each comes from:
-// SoC window: 10–90 % is common practice [M]; only a window reaching past 5/95 % is flagged.
+// SoC window: 10–90 % is common practice, no authoritative value found [M]. Only a window
+// reaching past 5 / 95 % is flagged, so the 0–100 % window the cautions name always is.
 const SOC_LOW_PCT = 5;
 const SOC_HIGH_PCT = 95;
-// Efficiency per direction above 0.98 is named as outside common practice in DESIGN section 8.
+// Efficiency per direction: 85 % round trip is representative for utility-scale lithium-ion
+// [S: NREL ATB 2020], about 0.92 per direction; above 0.98 (a round trip above 96 %) is
+// beyond what batteries achieve in practice [M].
 const MAX_EFFICIENCY = 0.98;
 // The US utility-scale fleet averaged 82 % round trip in 2019 [S: US EIA, reported 2021];
 // below 70 % is far under any fleet average [M] and usually a typing slip (e.g. 0.7 per direction = 49 %).
 const MIN_ROUND_TRIP = 0.7;
-// C-rate above 1 (duration under 1 h) [brief; ATB durations are 2–10 h, S: NREL ATB 2020 and 2023].
+// C-rate (power / energy) above 1, a duration under one hour: planning studies use 2–10 h
+// [S: NREL ATB 2020 and 2023] and arbitrage favours 1–4 h [S: Bradbury, Pratson and
+// Patiño-Echeverri 2014]; faster than that is above most stationary batteries' rating [M].
 const MAX_C_RATE = 1;
 // Li-ion self-discharge is a few % per month [S, secondary: battery reference tables]:
 // 0.1 %/h is about 70 % per month [D: 0.1 × 24 × 30 = 72].
 const MAX_SELF_DISCHARGE_PCT_PER_HOUR = 0.1;
-// Planning studies assume about one cycle per day [S: NREL ATB 2020].
+// Planning studies assume about one cycle per day [S: NREL ATB 2020]; twice that is the margin [M].
 const MAX_CYCLES_PER_DAY = 2;
 
 const fmt = (value: number, digits = 2) => String(Number(value.toFixed(digits)));
@@ -91,6 +97,7 @@ export function batteryWarnings(b: Omit<BatteryFields, 'name'>, site?: SiteLimit
       `${fmt(b.maxCyclesPerDay)} cycles per day is well above the one cycle per day planning studies assume; check the warranty.`,
     );
   }
+  // [D] the connection caps what the battery can draw from or send to the grid.
   if (site?.importLimitKw != null && b.powerChargeKw > site.importLimitKw) {
     add(
       'powerChargeKw',
@@ -104,4 +111,9 @@ export function batteryWarnings(b: Omit<BatteryFields, 'name'>, site?: SiteLimit
     );
   }
   return warnings;
+}
+
+/** The same warnings as plain sentences, as a plan's inputs and the command line's output carry them. */
+export function batteryWarningMessages(b: Omit<BatteryFields, 'name'>, site?: SiteLimits): string[] {
+  return batteryWarnings(b, site).map((w) => w.message);
 }

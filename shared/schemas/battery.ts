@@ -1,6 +1,6 @@
 /**
- * A battery at a site with every parameter of DESIGN section 3, under the same
- * keys as the engine's battery JSON (issue 4's command-line contract). Units:
+ * A battery at a site with every parameter of the model (docs/model.md), under the same
+ * keys as the engine's battery JSON (its contract). Units:
  * kW, kWh, % of nameplate energy, efficiencies as fractions, currency/MWh.
  */
 import { z } from 'zod';
@@ -90,7 +90,7 @@ export interface Battery extends BatteryFields {
   createdBy: string;
   createdAt: string;
   updatedAt: string;
-  /** Settings outside common practice (DESIGN section 8): allowed, but check them. */
+  /** Settings outside common practice (docs/model.md): allowed, but check them. */
   warnings: BatteryWarning[];
 }
 

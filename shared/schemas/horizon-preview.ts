@@ -1,5 +1,5 @@
 /**
- * The quick horizon preview of a plan (issue 9): `POST /api/plans/:id/horizon-preview
+ * The quick horizon preview of a plan: `POST /api/plans/:id/horizon-preview
  * {horizonHours}` re-solves the plan's own stored inputs with another horizon on the
  * exact fast path and writes nothing. The range a preview may take is computed from
  * the inputs snapshot alone, so the page and the server agree on it.

@@ -1,5 +1,5 @@
 /**
- * Plans (DESIGN sections 2 and 6): the request of `POST /api/plans`, the list
+ * Plans: the request of `POST /api/plans`, the list
  * filters, the inputs snapshot and the results the job stores. Units: kW, kWh,
  * hours, % of nameplate energy; money in the site's currency, prices per MWh.
  */
@@ -128,7 +128,7 @@ export interface PlanInputs {
   bandPct: number;
   /** Days the steady cycle averages; absent in plans made before the choice existed (then all). */
   steadyDays?: SteadyDays;
-  /** Cautions of DESIGN section 8 for settings outside common practice, at creation time. */
+  /** Warnings on settings outside common practice (docs/model.md), at creation time. */
   warnings: string[];
 }
 

@@ -1,6 +1,6 @@
 /**
- * Options sent with a profile upload (multipart fields beside `file`, DESIGN
- * section 6). Multipart fields arrive as strings, so the booleans accept
+ * Options sent with a profile upload (multipart fields beside `file`).
+ * Multipart fields arrive as strings, so the booleans accept
  * "true"/"false" (and zod's other stringbool words) as well as JSON booleans.
  * The unit must be one accepted for the chosen kind.
  */

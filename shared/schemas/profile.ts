@@ -1,5 +1,5 @@
 /**
- * Stored profiles (DESIGN sections 2 and 4): a regular series in the canonical
+ * Stored profiles: a regular series in the canonical
  * unit of its kind (currency/MWh or kW), with the original file kept beside it.
  * Upload options live in profile-upload.ts; this adds the name and the responses.
  */

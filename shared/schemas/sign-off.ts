@@ -1,5 +1,5 @@
 /**
- * The sign-off contract (DESIGN sections 2, 5, 6): request bodies of
+ * The sign-off contract: request bodies of
  * `POST /api/plans/:id/submit|approve|reject|copy`, the plan's sign-off
  * history and the "awaiting my sign-off" list. `status`, `approvedBy` and the
  * like are never read from a request body (SECURITY.md, ASVS 5.0 15.3.3).
@@ -94,9 +94,9 @@ export interface PendingSignOff {
 }
 
 /**
- * The cautions of DESIGN section 8, shown on the sign-off screen, written into
+ * The cautions (docs/model.md; the standards in docs/sources.md), shown on the sign-off screen, written into
  * every export and opening the README section on exports. Standards named after
- * REFERENCES.md "Cautions: standards to defer to".
+ * docs/sources.md, "Cautions: standards to defer to".
  */
 export const SIGN_OFF_CAUTIONS: readonly string[] = [
   'This schedule is decision support, not an instruction: qualified personnel decide dispatch.',

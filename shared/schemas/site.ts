@@ -1,6 +1,6 @@
 /**
  * A site: a grid connection point with a time zone, import/export limits and a
- * tariff (DESIGN sections 2 and 3). The same keys as the engine's site JSON
+ * tariff (docs/model.md). The same keys as the engine's site JSON
  * (`timezone, importLimitKw, exportLimitKw, demandChargePerKw`, null = none).
  */
 import { z } from 'zod';

@@ -1,8 +1,8 @@
-/** Steady-cycle days (DESIGN section 3), a choice of plans and horizon studies alike. */
+/** Steady-cycle days (docs/model.md), a choice of plans and horizon studies alike. */
 import { z } from 'zod';
 
 /**
- * Which local days the steady cycle averages (DESIGN section 3): every day, or only
+ * Which local days the steady cycle averages (docs/model.md): every day, or only
  * weekdays (Mon–Fri) or weekend days (Sat–Sun), when the two price shapes differ.
  */
 export const steadyDaysValues = ['all', 'weekday', 'weekend'] as const;

@@ -1,5 +1,5 @@
 /**
- * Horizon studies (DESIGN sections 2 and 6): receding-horizon runs over a
+ * Horizon studies: receding-horizon runs over a
  * period for several horizons and terminal rules, each compared with the
  * reference path over the same period from the same initial SoC.
  */

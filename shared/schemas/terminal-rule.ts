@@ -1,5 +1,5 @@
 /**
- * Terminal rules as text (DESIGN section 2): `free`, `cyclic` (end SoC = start
+ * Terminal rules as text (docs/model.md): `free`, `cyclic` (end SoC = start
  * SoC), `steady-value` (end energy valued at the steady cycle's stored-energy
  * value) and `target:<pct>` (end SoC at least pct % of nameplate energy).
  */

@@ -14,8 +14,8 @@ import { HomeRoute } from './routes/home';
 import { NotFoundRoute } from './routes/not-found';
 
 /**
- * Main navigation; each link shows only for roles that may do its action (DESIGN
- * section 5). The server refuses what a role may not do whether or not a link shows.
+ * Main navigation; each link shows only for roles that may do its action. The server
+ * refuses what a role may not do whether or not a link shows.
  */
 const nav: RoleNavItem[] = [
   { to: '/', label: 'Overview', action: 'data.read' },

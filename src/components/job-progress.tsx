@@ -10,7 +10,7 @@ const stateWords: Record<JobProgress['state'], string> = {
 };
 
 /**
- * A background job's progress bar (DESIGN section 7: progress bars for every
+ * A background job's progress bar (progress bars for every
  * background job): share done, time left, the worker's message, and the error
  * when an attempt failed.
  */

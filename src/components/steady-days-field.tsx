@@ -1,6 +1,6 @@
 /**
  * "Steady-cycle days": which local days the steady cycle averages, on the plan and
- * the study forms alike (DESIGN section 3).
+ * the study forms alike (docs/model.md).
  */
 import { steadyDaysLabels, steadyDaysSchema, steadyDaysValues, type SteadyDays } from '@shared/schemas/steady-days';
 import { FormField, describedBy, inputClass } from './form-field';

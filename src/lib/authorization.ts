@@ -21,7 +21,7 @@ export function useRole(): Role | null {
   return useSignedInUser()?.role ?? null;
 }
 
-/** True when the signed-in user's role may do `action` (DESIGN section 5). */
+/** True when the signed-in user's role may do `action`. */
 export function useCan(action: Action): boolean {
   return can(useRole(), action);
 }

@@ -1,7 +1,7 @@
 /**
  * The access-control matrix, generated from server/auth/access-table.ts (SECURITY.md test 1;
  * ASVS 5.0 8.2.1-8.3.1): anonymous and each role against every route in the table, with the
- * status DESIGN section 5 implies. A new line in the table is covered automatically, and a
+ * status the role table implies. A new line in the table is covered automatically, and a
  * route registered in Express without a line in the table fails this file.
  *
  * How "registered" is known: the test walks the Express router stack of the real app
@@ -149,7 +149,7 @@ describe.each(rules.map((rule) => [rule.key, rule] as const))('%s', (_key, rule)
     else expect(response.status, JSON.stringify(response.body)).toBe(401);
   });
 
-  it.each(roles.map((role) => [role]))('answers %s as DESIGN section 5 says', async (role) => {
+  it.each(roles.map((role) => [role]))('answers %s as the role table says', async (role) => {
     const allowed = rule.access === 'public' || rule.access.includes(role);
     const response = await send(await agentFor(role), rule.method, rule.path);
     if (allowed) expectAllowed(rule, role, response.status, response.body);

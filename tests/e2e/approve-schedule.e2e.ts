@@ -1,9 +1,9 @@
 /**
- * Journey 3 (issue 8): the planner submits a computed plan; the approver, in a browser
+ * Journey 3: the planner submits a computed plan; the approver, in a browser
  * context of their own, opens the link from the e-mail the fake SMTP server caught,
  * signs in, reviews the charts and cautions and signs off; the planner's open page shows
  * the new status; a viewer sees no sign-off buttons and the API refuses them (403,
- * DESIGN section 5: only approvers and admins approve or reject, only planners submit).
+ * the roles: only approvers and admins approve or reject, only planners submit).
  */
 import { describe, expect, inject, it } from 'vitest';
 import type { Page } from 'playwright-core';

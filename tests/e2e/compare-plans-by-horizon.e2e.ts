@@ -1,5 +1,5 @@
 /**
- * Journey 2 (issue 8): the planner makes a plan in the form, then from the comparison page
+ * Journey 2: the planner makes a plan in the form, then from the comparison page
  * plans for the same delivery window with three horizons and both terminal rules (`free`,
  * `steady-value`), reads the comparison, finds the flag on the short-horizon `free` plan,
  * tries another horizon with the plan page's slider (re-planned on the fast path, then the plan

@@ -1,5 +1,5 @@
 /**
- * Journey 4 (issue 8): the planner exports an approved plan as CSV from its page. The
+ * Journey 4: the planner exports an approved plan as CSV from its page. The
  * download is saved, parsed with an independent RFC 4180 reader (papaparse), and checked
  * against the schedule table the page shows (every delivery interval, values within the
  * page's rounding) and against the checksum the page shows.
@@ -122,7 +122,7 @@ describe('exporting a plan to CSV', () => {
           expect(row.plan_status).toBe('approved');
         });
 
-        // [D] DESIGN section 3: e_t = (1 − σΔt)·e_{t−1} + η_ch·c_t·Δt − d_t·Δt/η_dis from e_0 = initial SoC, so the
+        // [D] docs/model.md: e_t = (1 − σΔt)·e_{t−1} + η_ch·c_t·Δt − d_t·Δt/η_dis from e_0 = initial SoC, so the
         // exported SoC follows from the exported flows and the battery parameters the plan was made with.
         const plan = await apiGet<PlanInputs>(page, `/api/plans/${planId}`);
         const { energyKwh, efficiencyCharge, efficiencyDischarge, selfDischargePctPerHour } = plan.inputs.battery;

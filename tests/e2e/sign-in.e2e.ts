@@ -1,6 +1,6 @@
 /**
  * The demo accounts sign in through the browser, each sees only the navigation its role
- * may use (DESIGN section 5), and signs out again; the form is driven with the keyboard.
+ * may use, and signs out again; the form is driven with the keyboard.
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Browser, Page } from 'playwright-core';

@@ -1,8 +1,8 @@
 /**
- * Journey 1 (issue 8): a planner uploads a price CSV from sample-data/ through the
+ * Journey 1: a planner uploads a price CSV from sample-data/ through the
  * dropzone, checks the browser's preview, sends it and sees it charted; then drops a
  * broken file, reads the line-numbered errors from the preview and from the server,
- * and nothing was stored (DESIGN section 4: "A failed upload stores nothing").
+ * and nothing was stored ("A failed upload stores nothing").
  */
 import { readFileSync } from 'node:fs';
 import path from 'node:path';

@@ -1,5 +1,5 @@
 /**
- * Issue 5's "done when" in the browser: a planner creates a site and a battery
+ * Sites, batteries and profiles in the browser: a planner creates a site and a battery
  * (errors and common-practice warnings beside the fields), uploads a price CSV
  * and a load CSV after checking the in-browser preview, sees them charted and
  * paged, and reads a rejected file's problems by line. A viewer sees no upload.

@@ -1,6 +1,6 @@
 // Bad inputs get a status and a message naming the first offending parameter or
 // interval, never an exception and never a silent answer. The conditions are
-// [D] from the model of DESIGN section 3: a step whose net load exceeds the import
+// [D] from the model of docs/model.md: a step whose net load exceeds the import
 // limit plus the discharge power has no feasible site balance; an SoC window with
 // min ≥ max holds no energy; efficiencies must lie in (0, 1].
 import { describe, expect, it } from 'vitest';

@@ -1,4 +1,4 @@
-// The command line's contract (issue 4): one JSON document on stdout, exit 0;
+// The command line's contract: one JSON document on stdout, exit 0;
 // bad input → exit 2 with the message on stderr. Runs the real command on small
 // files written to a temporary folder; the commands run in parallel in beforeAll.
 import { join } from 'node:path';
@@ -112,7 +112,7 @@ describe('command line', () => {
   });
 
   it('reference on fixture A earns 61 (cost −61)', () => {
-    // [D] REFERENCES fixture A: prices [20, 100], 1 MW / 1 MWh, η = 0.9 each, start empty → profit 61.
+    // [D] worked fixture A: prices [20, 100], 1 MW / 1 MWh, η = 0.9 each, start empty → profit 61.
     const r = results.reference!;
     expect(r.code).toBe(0);
     const out = JSON.parse(r.stdout);

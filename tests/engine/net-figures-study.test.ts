@@ -9,8 +9,8 @@ import { steadyValueAt, solveSteadyCycle } from '../../server/engine/steady/solv
 import { minuteOfDayAt } from '../../server/engine/terminal/terminal-choice';
 import { demoInputs } from './support/demo-inputs';
 import { dailyPrice, TURNPIKE_BATTERY } from './support/periodic-inputs';
-import { seeded } from './support/random-dispatch';
-import { referenceLp, solveWithGlpkDirect } from './support/reference-lp';
+import { seededRandom as seeded } from '../support/seeded-random';
+import { referenceLp, solveLpWithGlpk } from '../support/reference-lp';
 
 /** Daily-shaped prices with weekend dips and seeded noise, so plans are near but not on the steady cycle. */
 function noisyDays(days: number): AlignedInputs {
@@ -35,7 +35,7 @@ describe('horizon study net figures', () => {
     // instants bounded independently of the horizon. So at long horizons the closed loop of each rule follows
     // the optimum of its own end: the free rule's run is the (free) reference path itself, and the
     // steady-value rule's run is the path that minimises net cost, found here by GLPK on the LP of
-    // tests/engine/support/reference-lp.ts with end energy valued at λ̄(τ_end).
+    // tests/support/reference-lp.ts with end energy valued at λ̄(τ_end).
     // [D] What remains is the end of the period. With e* the free reference's end energy, the
     // net-optimal path's net cost N* satisfies N* ≤ N_ref (it is optimal) and, comparing cash costs,
     // N_ref ≤ N* + λ̄(τ_end)·(e_end* − e*)/1000, so |gapValue| ≤ λ̄(τ_end)·usable energy/1000: a bound that
@@ -59,7 +59,7 @@ describe('horizon study net figures', () => {
       if (!steady.ok || steady.cycle.status !== 'optimal') throw new Error('steady cycle failed');
       const n = inputs.timesMs.length;
       const endValue = steadyValueAt(steady.cycle, minuteOfDayAt(inputs, n));
-      const lp = solveWithGlpkDirect(referenceLp(problemFor(inputs, 0, n, 0, { kind: 'steady-value', valuePerMwh: endValue })));
+      const lp = solveLpWithGlpk(referenceLp(problemFor(inputs, 0, n, 0, { kind: 'steady-value', valuePerMwh: endValue })));
       expect(lp.status).toBe('optimal');
       const tol = 1e-6 * Math.abs(study.referenceNetCost);
       expect(run(168, 'free').gapValue).toBeCloseTo(0, 6);

@@ -1,7 +1,7 @@
 // What a plan is worth (DESIGN section 3.1): cash cost, stored energy valued at
 // the steady cycle's λ̄, net cost, the site without a battery, battery value.
 // Checked against GLPK on the dispatch LP written out independently
-// (tests/engine/support/reference-lp.ts).
+// (tests/support/reference-lp.ts).
 import { describe, expect, it } from 'vitest';
 import { problemFor } from '../../server/engine/inputs/problem-for';
 import { solvePlan } from '../../server/engine/plan/solve-plan';
@@ -11,8 +11,8 @@ import { minuteOfDayAt } from '../../server/engine/terminal/terminal-choice';
 import type { AlignedInputs } from '../../server/engine/inputs/align-inputs';
 import type { TerminalChoice } from '../../server/engine/terminal/terminal-choice';
 import { randomDaysInputs } from './support/random-days';
-import { seeded } from './support/random-dispatch';
-import { referenceLp, solveWithGlpkDirect } from './support/reference-lp';
+import { seededRandom as seeded } from '../support/seeded-random';
+import { referenceLp, solveLpWithGlpk } from '../support/reference-lp';
 import { periodicInputs } from './support/periodic-inputs';
 
 function steadyOf(inputs: AlignedInputs): SteadyCycle {
@@ -29,7 +29,7 @@ function steadyOf(inputs: AlignedInputs): SteadyCycle {
 function leastNetCost(inputs: AlignedInputs, steady: SteadyCycle, from: number, to: number, e0: number): number {
   const endValue = steadyValueAt(steady, minuteOfDayAt(inputs, to));
   const startValue = steadyValueAt(steady, minuteOfDayAt(inputs, from));
-  const lp = solveWithGlpkDirect(referenceLp(problemFor(inputs, from, to, e0, { kind: 'steady-value', valuePerMwh: endValue })));
+  const lp = solveLpWithGlpk(referenceLp(problemFor(inputs, from, to, e0, { kind: 'steady-value', valuePerMwh: endValue })));
   if (lp.status !== 'optimal') throw new Error('reference LP failed');
   return lp.objective + (startValue * e0) / 1000;
 }
@@ -38,7 +38,7 @@ function leastNetCost(inputs: AlignedInputs, steady: SteadyCycle, from: number, 
 function noBatteryLp(inputs: AlignedInputs, from: number, to: number): number {
   const battery = { ...inputs.battery, powerChargeKw: 0, powerDischargeKw: 0, selfDischargePctPerHour: 0 };
   const e = inputs.battery.energyKwh * (inputs.battery.socMinPct / 100);
-  const lp = solveWithGlpkDirect(referenceLp({ ...problemFor(inputs, from, to, e, { kind: 'free' }), battery }));
+  const lp = solveLpWithGlpk(referenceLp({ ...problemFor(inputs, from, to, e, { kind: 'free' }), battery }));
   if (lp.status !== 'optimal') throw new Error('no-battery LP failed');
   return lp.objective;
 }

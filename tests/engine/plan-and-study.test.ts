@@ -15,7 +15,7 @@ const t0 = inputs.timesMs[0]!;
 
 describe('plans', () => {
   it('flags a leaving arc inside the delivery window when the free rule meets a horizon as short as the window', () => {
-    // [S] Trélat & Zuazua 2015; Faulwasser & Grüne 2020 (REFERENCES): a plan with no terminal value ends with
+    // [S] Trélat & Zuazua 2015; Faulwasser & Grüne 2020 (docs/sources.md): a plan with no terminal value ends with
     // a leaving arc that empties the battery. [D] Delivery 00:00–14:00 with a 14 h horizon ends at 14:00,
     // when the steady cycle is still full, so the free plan sells early and leaves the band inside the window.
     const result = solvePlan(inputs, {
@@ -32,7 +32,7 @@ describe('plans', () => {
   });
 
   it('has no leaving arc in the window with the steady-value rule, and a commit window covering the delivery day', () => {
-    // [D] DESIGN section 1 (adjoint turnpike): valuing end energy at the steady value removes the leaving arc;
+    // [D] docs/model.md (steady-value rule): valuing end energy at the steady value removes the leaving arc;
     // a 36 h plan then agrees with a much longer plan over the 24 h delivery day.
     const result = solvePlan(inputs, {
       startMs: t0 + day,
@@ -78,7 +78,7 @@ describe('horizon study', () => {
 
 describe('closed loop on two cores', () => {
   it('gives the same run when a later stretch starts from a guessed state and meets the exact one', async () => {
-    // [S] Turnpike property (Grüne & Guglielmi 2018; Faulwasser & Grüne 2020, REFERENCES): receding-horizon
+    // [S] Turnpike property (Grüne & Guglielmi 2018; Faulwasser & Grüne 2020, docs/sources.md): receding-horizon
     // trajectories from different states meet the same regime, so a stretch started from a guess joins the
     // exact run; [D] from the meeting step on each window sees the same state and prices, so the rest matches.
     const inputs20 = periodicInputs(20);

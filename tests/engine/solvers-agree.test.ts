@@ -1,14 +1,14 @@
 // The engine's LP path against two independent LP solvers from the npm registry
 // (javascript-lp-solver 1.0.3 and glpk.js 5.0.0) on a second, independently
-// written formulation of DESIGN section 3 (tests/engine/support/reference-lp.ts):
+// written formulation of docs/model.md (tests/support/reference-lp.ts):
 // optimal costs must agree within 1e-6 relative on 50 seeded random instances of
 // every model variant, for both of the engine's backends, and no schedule may
 // break a limit. [D] An LP has one optimal value even when several schedules reach it
 // (so every correct solver must report the same cost).
 import { describe, expect, it } from 'vitest';
 import { solveDispatch } from '../../server/engine/dispatch/solve-dispatch';
-import { MODEL_VARIANTS, randomDispatchProblem } from './support/random-dispatch';
-import { referenceLp, solveWithGlpkDirect, solveWithJsLpSolver } from './support/reference-lp';
+import { referenceLp, solveLpWithGlpk, solveLpWithJsLpSolver } from '../support/reference-lp';
+import { MODEL_VARIANTS, randomDispatchProblem } from './support/random-problems';
 import { brokenLimits } from './support/limit-check';
 
 const INSTANCES = 50;
@@ -19,8 +19,8 @@ describe.each(MODEL_VARIANTS)('variant: %s', (variant) => {
     for (let seed = 1; seed <= INSTANCES; seed++) {
       const problem = randomDispatchProblem(variant, seed);
       const lp = referenceLp(problem);
-      const jsLp = solveWithJsLpSolver(lp);
-      const direct = solveWithGlpkDirect(lp);
+      const jsLp = solveLpWithJsLpSolver(lp);
+      const direct = solveLpWithGlpk(lp, { presolve: true });
       expect(direct.status, `glpk.js, seed ${seed}`).toBe('optimal');
       expect(jsLp.status, `javascript-lp-solver, seed ${seed}`).toBe('optimal');
       for (const backend of ['highs', 'glpk'] as const) {

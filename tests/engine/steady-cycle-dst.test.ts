@@ -1,4 +1,4 @@
-// The representative day by local clock slot (DESIGN section 3) from a profile that
+// The representative day by local clock slot (docs/model.md) from a profile that
 // spans both daylight-saving changes of Europe/Berlin, and the steady cycle on it.
 // Local hours are computed here with Intl (the runtime's zone data), not with the
 // engine's own zone code.
@@ -39,7 +39,7 @@ describe('representative day across both DST changes', () => {
       { date: '2026-03-29', hours: 23 },
       { date: '2026-10-25', hours: 25 },
     ]);
-    // [S] REFERENCES: the autumn day repeats the local 02:00 hour, the spring day skips it.
+    // [S] Directive 2000/84/EC (docs/sources.md): the autumn day repeats the local 02:00 hour, the spring day skips it.
     expect(day.day.samples[2]).toBe(365);
     expect(day.day.notes.join(' ')).toContain('2 daylight-saving days mapped by local clock');
   });

@@ -10,8 +10,8 @@ import { solveSteadyCycle, steadyValueAt, type SteadyCycle } from '../../server/
 import { minuteOfDayAt } from '../../server/engine/terminal/terminal-choice';
 import { battery } from './support/problem-builder';
 import { randomSteadyCase, type SteadyCaseOptions } from './support/random-steady';
-import { referenceLp, solveWithGlpkDirect } from './support/reference-lp';
-import { seeded } from './support/random-dispatch';
+import { referenceLp, solveLpWithGlpk } from '../support/reference-lp';
+import { seededRandom as seeded } from '../support/seeded-random';
 import type { AlignedInputs } from '../../server/engine/inputs/align-inputs';
 
 function steadyOf(inputs: AlignedInputs): SteadyCycle {
@@ -94,18 +94,18 @@ describe('steady cycle stored-energy values', () => {
       // right side of the SoC row of e_{j+1}) is convex and piecewise linear, so the secants over +h and −h
       // enclose every optimal value, −1000·(z(h) − z)/h ≤ λ̄_j ≤ 1000·(z(−h) − z)/h, and where both secants
       // agree the derivative is unique and λ̄_j must equal it. z comes from GLPK on the LP written out in
-      // tests/engine/support/reference-lp.ts, not from the engine's model builder.
+      // tests/support/reference-lp.ts, not from the engine's model builder.
       let unique = 0;
       for (let seed = 1; seed <= count; seed++) {
         const { inputs, problem } = randomSteadyCase(8100 + seed, options);
         const cycle = steadyOf(inputs);
-        const base = solveWithGlpkDirect(referenceLp(problem));
+        const base = solveLpWithGlpk(referenceLp(problem));
         expect(base.status).toBe('optimal');
         expect(cycle.costPerDay).toBeCloseTo(base.objective, 6);
         const h = 1e-3 * inputs.battery.energyKwh;
         cycle.slots.forEach((slot, j) => {
-          const up = solveWithGlpkDirect(referenceLp(problem, { inject: { step: j, kwh: h } }));
-          const down = solveWithGlpkDirect(referenceLp(problem, { inject: { step: j, kwh: -h } }));
+          const up = solveLpWithGlpk(referenceLp(problem, { inject: { step: j, deltaKwh: h } }));
+          const down = solveLpWithGlpk(referenceLp(problem, { inject: { step: j, deltaKwh: -h } }));
           if (up.status !== 'optimal' || down.status !== 'optimal') return;
           const right = (-1000 * (up.objective - base.objective)) / h;
           const left = (1000 * (down.objective - base.objective)) / h;
@@ -161,7 +161,7 @@ describe('steady cycle stored-energy values', () => {
   it('make steady-value plans that an independent LP with end energy valued at the checked λ̄ reproduces', () => {
     // [D] A plan with the steady-value rule minimises cost − λ̄(τ_N)·e_N/1000 (DESIGN section 3). Its λ̄(τ_N)
     // is first checked against the KKT bounds of the slot ending at τ_N, then handed to GLPK on the LP of
-    // tests/engine/support/reference-lp.ts; both the LP and the dynamic-program paths must match it.
+    // tests/support/reference-lp.ts; both the LP and the dynamic-program paths must match it.
     let checked = 0;
     for (let seed = 1; seed <= 16; seed++) {
       const r = seeded(9300 + seed);
@@ -186,7 +186,7 @@ describe('steady cycle stored-energy values', () => {
       expect(lambda).toBeGreaterThanOrEqual(low - 1e-6 * (1 + Math.abs(lambda)));
       expect(lambda).toBeLessThanOrEqual(high + 1e-6 * (1 + Math.abs(lambda)));
       const e0 = inputs.battery.energyKwh * 0.5;
-      const reference = solveWithGlpkDirect(
+      const reference = solveLpWithGlpk(
         referenceLp(problemFor(inputs, from, end, e0, { kind: 'steady-value', valuePerMwh: lambda })),
       );
       expect(reference.status).toBe('optimal');

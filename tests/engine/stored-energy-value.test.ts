@@ -1,9 +1,9 @@
-// The stored-energy value (dual of the SoC equation, DESIGN section 3) checked
+// The stored-energy value (dual of the SoC equation, docs/model.md) checked
 // against things outside the engine.
 import { describe, expect, it } from 'vitest';
 import { solveDispatch } from '../../server/engine/dispatch/solve-dispatch';
 import type { DispatchProblem } from '../../server/engine/types';
-import { MODEL_VARIANTS, randomDispatchProblem } from './support/random-dispatch';
+import { MODEL_VARIANTS, randomDispatchProblem } from './support/random-problems';
 
 const backends = ['highs', 'glpk'] as const;
 const interior = (p: DispatchProblem, e: number) => {
@@ -44,7 +44,7 @@ describe.each(backends)('stored-energy value on %s', (backend) => {
   });
 
   it('follows the KKT threshold rule where the battery charges or discharges below full power inside its window', () => {
-    // [D] REFERENCES "KKT threshold rule": at an SoC strictly inside its window, charging below full power
+    // [D] the KKT threshold rule (docs/model.md): at an SoC strictly inside its window, charging below full power
     // implies λ_t = p_t/η_ch and discharging below full power implies λ_t = p_t·η_dis (pure arbitrage, no
     // degradation, no self-discharge: then c_t and d_t have reduced costs p_t·Δt/1000 − η_ch·Δt·λ_t/1000 and
     // −p_t·Δt/1000 + Δt·λ_t/(1000·η_dis), which vanish for a column strictly between its bounds).

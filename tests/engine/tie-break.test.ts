@@ -16,7 +16,7 @@ describe.each(['highs', 'glpk'] as const)('tie-break on %s', (backend) => {
   });
 
   it('keeps the SoC mid-window in a steady cycle at flat prices', () => {
-    // [D] With a free start, cyclic end and flat prices every constant SoC is optimal (DESIGN: the steady
+    // [D] With a free start, cyclic end and flat prices every constant SoC is optimal (docs/model.md: the steady
     // cycle reduces to the optimal steady state); the rule picks the middle of the 10–90 % window.
     const b = battery({ socMinPct: 10, socMaxPct: 90, socInitialPct: 50, efficiencyCharge: 0.9, efficiencyDischarge: 0.9 });
     const s = solve({ ...problem([50, 50, 50, 50], { battery: b, terminal: { kind: 'cyclic' } }), freeInitialEnergy: true });
@@ -25,7 +25,7 @@ describe.each(['highs', 'glpk'] as const)('tie-break on %s', (backend) => {
   });
 
   it('reports simultaneous charge and discharge when negative prices make it pay', () => {
-    // [S] Morales 2025 / Prat, Lusby & Pinson 2025 (REFERENCES): the LP relaxation charges and discharges
+    // [S] Morales 2025 / Prat, Lusby & Pinson 2025 (docs/sources.md): the LP relaxation charges and discharges
     // at once when prices are negative. [D] At −100 /MWh with η = 0.8 each, a full battery earns by running
     // both at full power: the grid pays for 1 MW in, and discharging 1 MW returns only 0.8·0.8 of it stored.
     const b = battery({ efficiencyCharge: 0.8, efficiencyDischarge: 0.8, socInitialPct: 100 });

@@ -1,5 +1,5 @@
 // Turnpike behaviour of the LP path on exactly daily-periodic prices, whose
-// optimal regime is the steady cycle (REFERENCES: Zanon, Grüne & Diehl 2017, the
+// optimal regime is the steady cycle (docs/sources.md: Zanon, Grüne & Diehl 2017, the
 // turnpike of periodic optimal operation is a periodic orbit).
 import { describe, expect, it } from 'vitest';
 import { solveReferencePath } from '../../server/engine/reference/solve-reference-path';
@@ -15,7 +15,7 @@ describe('turnpike behaviour', () => {
   it('keeps the number of steps outside the band bounded as the horizon grows', () => {
     // [S] Grüne & Guglielmi, SIAM J. Control Optim. 56(2) 2018; Damm, Grüne, Stieler & Worthmann, SIAM J.
     // Control Optim. 52(3) 2014: optimal trajectories stay near the optimal regime except at a number of
-    // instants bounded independently of the horizon. REFERENCES' check values [D]: 7 such hours for 3, 5 and
+    // instants bounded independently of the horizon. The check values of docs/sources.md [D]: 7 such hours for 3, 5 and
     // 8 days with this battery. Here the plans start full at midnight (an entry arc) and end at noon with
     // the free rule (a leaving arc: the steady cycle is full then). We require the count to stay within a
     // day and not to grow by more than 2.
@@ -40,7 +40,7 @@ describe('turnpike behaviour', () => {
 
   it('gives a closed-loop gap that does not grow with the horizon and reaches zero', async () => {
     // [S] Grüne, Automatica 49 (2013): economic MPC without terminal constraints is near-optimal under turnpike
-    // conditions, with an error that shrinks as the horizon grows (the shrinking term: [M]). REFERENCES [D]:
+    // conditions, with an error that shrinks as the horizon grows (the shrinking term: [M]). docs/sources.md [D]:
     // with daily-periodic prices the MPC profit equalled the periodic optimum from H = 12 h.
     const study = await runHorizonStudy(periodicInputs(6), {
       horizonsHours: [3, 6, 12, 24, 48],
@@ -58,7 +58,7 @@ describe('turnpike behaviour', () => {
   });
 
   it('with a short horizon, the steady-value terminal rule does at least as well as the free rule', async () => {
-    // [S] Trélat & Zuazua, J. Differential Equations 258 (2015), and DESIGN section 1 (adjoint turnpike): the
+    // [S] Trélat & Zuazua, J. Differential Equations 258 (2015), and the adjoint turnpike (docs/sources.md): the
     // free rule's leaving arc empties the battery at every window's end; valuing end energy at the steady
     // stored-energy value removes most of it, so short horizons behave like long ones.
     const study = await runHorizonStudy(periodicInputs(6), {

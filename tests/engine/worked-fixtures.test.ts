@@ -1,4 +1,4 @@
-// Worked fixtures of REFERENCES.md ("Worked fixtures [D]", checked there with an
+// Worked fixtures of docs/sources.md ("Worked fixtures [D]", checked there with an
 // independent LP solver) and a closed-form case derived below, on both backends.
 import { describe, expect, it } from 'vitest';
 import { solveDispatch } from '../../server/engine/dispatch/solve-dispatch';
@@ -11,7 +11,7 @@ describe.each(backends)('worked fixtures on %s', (backend) => {
   const eta09 = battery({ efficiencyCharge: 0.9, efficiencyDischarge: 0.9 });
 
   it('fixture A: charges 1 MW at 20 and discharges 0.81 MW at 100 for a profit of 61, free or cyclic', () => {
-    // [D] REFERENCES fixture A: 1 MWh bought at 20 stores 0.9 MWh, which delivers 0.81 MWh at 100: 81 − 20 = 61.
+    // [D] worked fixture A: 1 MWh bought at 20 stores 0.9 MWh, which delivers 0.81 MWh at 100: 81 − 20 = 61.
     const free = solve(problem([20, 100], { battery: eta09 }));
     expect(free.cost).toBeCloseTo(-61, 9);
     expect(free.chargeKw[0]).toBeCloseTo(1000, 6);
@@ -20,7 +20,7 @@ describe.each(backends)('worked fixtures on %s', (backend) => {
   });
 
   it('fixture B: does not trade when the spread does not cover the round-trip loss', () => {
-    // [D] REFERENCES fixture B: 55 · 0.85 < 50, so every trade loses money.
+    // [D] worked fixture B: 55 · 0.85 < 50, so every trade loses money.
     const b = battery({ efficiencyCharge: Math.sqrt(0.85), efficiencyDischarge: Math.sqrt(0.85) });
     const s = solve(problem([50, 55], { battery: b }));
     expect(s.cost).toBeCloseTo(0, 9);
@@ -28,13 +28,13 @@ describe.each(backends)('worked fixtures on %s', (backend) => {
   });
 
   it('fixture C: two cycles earn 80 without losses and 61 with 0.9 efficiencies (cyclic)', () => {
-    // [D] REFERENCES fixture C: 2 · (50 − 10) = 80; 2 · (50 · 0.81 − 10) = 61.
+    // [D] worked fixture C: 2 · (50 − 10) = 80; 2 · (50 · 0.81 − 10) = 61.
     expect(solve(problem([10, 50, 10, 50], { terminal: { kind: 'cyclic' } })).cost).toBeCloseTo(-80, 9);
     expect(solve(problem([10, 50, 10, 50], { battery: eta09, terminal: { kind: 'cyclic' } })).cost).toBeCloseTo(-61, 9);
   });
 
   it('demand charge fixture: shaves the 10 MW peak to 8 MW at 100 per MW and does not shave at 10 per MW', () => {
-    // [D] REFERENCES demand-charge fixture: load [5, 5, 10, 5] MW, flat 50 /MWh, 2 MW / 4 MWh, η = 0.9 each,
+    // [D] worked demand-charge fixture: load [5, 5, 10, 5] MW, flat 50 /MWh, 2 MW / 4 MWh, η = 0.9 each,
     // cyclic. D is per kW in the engine: 100 /MW = 0.1 /kW.
     const b = battery({
       powerChargeKw: 2000,

@@ -5,19 +5,14 @@
  * carry the engine's schedule unchanged and upload back as a price profile.
  */
 import Papa from 'papaparse';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Plan, PlanCreated } from '@shared/schemas/plan';
-import type { JobWorker } from '../../server/jobs/job-worker';
-import { createTestApp } from '../support/test-app';
+import { beforeAll, describe, expect, it } from 'vitest';
+import type { Plan } from '@shared/schemas/plan';
 import { signInAs, type SignedInAgent } from '../support/auth';
-import { createPlace, dailyPrices, startTestWorker, stopTestWorker, useOwnJobQueues, waitUntilFinished } from '../jobs/support';
+import { computePlan, createPlace, dailyPrices, useJobsTestFile } from '../support/jobs';
 
-useOwnJobQueues('export_computed');
-const app = createTestApp();
-let planner: SignedInAgent;
+const jobs = useJobsTestFile('export_computed');
 let approver: SignedInAgent;
 let viewer: SignedInAgent;
-let worker: JobWorker | null = null;
 
 // [S: Directive 2000/84/EC, Art. 3] summer time ends at 01:00 UTC on the last Sunday of October:
 // 2026-10-25, local midnight is 2026-10-24T22:00Z (+02:00) and the next one 2026-10-25T23:00Z (+01:00).
@@ -27,13 +22,12 @@ let plan: Plan;
 let exported: string;
 
 beforeAll(async () => {
-  [planner, approver, viewer] = await Promise.all([signInAs(app, 'planner'), signInAs(app, 'approver'), signInAs(app, 'viewer')]);
-  worker = await startTestWorker();
-  const place = await createPlace(planner, {
+  [approver, viewer] = await Promise.all([signInAs(jobs.app, 'approver'), signInAs(jobs.app, 'viewer')]);
+  const place = await createPlace(jobs.planner, {
     prices: { values: prices, startMs: profileStart, stepMinutes: 15 },
     site: { timezone: 'Europe/Berlin' },
   });
-  const created = await planner.post('/api/plans').send({
+  plan = await computePlan(jobs.planner, {
     batteryId: place.batteryId,
     priceProfileId: place.priceProfileId,
     deliveryStart: '2026-10-25T00:00:00+02:00',
@@ -42,10 +36,8 @@ beforeAll(async () => {
     terminalRule: 'cyclic',
     initialSocPct: 50,
   });
-  expect(created.status, JSON.stringify(created.body)).toBe(202);
-  plan = await waitUntilFinished<Plan>(planner, `/api/plans/${(created.body as PlanCreated).plan.id}`);
   expect(plan.job?.state, plan.errorMessage ?? '').toBe('completed');
-  expect((await planner.post(`/api/plans/${plan.id}/submit`).send({ version: plan.version })).status).toBe(200);
+  expect((await jobs.planner.post(`/api/plans/${plan.id}/submit`).send({ version: plan.version })).status).toBe(200);
   const approved = await approver.post(`/api/plans/${plan.id}/approve`).send({ version: plan.version + 1 });
   expect(approved.status, JSON.stringify(approved.body)).toBe(200);
   const response = await viewer
@@ -61,7 +53,6 @@ beforeAll(async () => {
   expect(response.headers['x-slackwater-checksum']).toBe(`sha256=${approved.body.checksum}`);
   exported = response.body as string;
 });
-afterAll(async () => stopTestWorker(worker));
 
 const rows = () => Papa.parse<Record<string, string>>(exported, { header: true, newline: '\r\n', skipEmptyLines: true }).data;
 
@@ -78,7 +69,7 @@ describe('the export of a computed, approved plan', () => {
   });
 
   it("carries the engine's delivery steps unchanged, net power and SoC % derived from them", async () => {
-    const detail = (await planner.get(`/api/plans/${plan.id}`)).body as Plan;
+    const detail = (await jobs.planner.get(`/api/plans/${plan.id}`)).body as Plan;
     const steps = detail.results!.steps.filter((s) => s.delivery);
     expect(steps).toHaveLength(100);
     rows().forEach((row, t) => {
@@ -103,13 +94,13 @@ describe('the export of a computed, approved plan', () => {
   });
 
   it('uploads back unedited as the same 100 prices the profile held for that day', async () => {
-    const upload = await planner
+    const upload = await jobs.planner
       .post(`/api/sites/${plan.siteId}/profiles`)
       .field('kind', 'price')
       .field('unit', 'currency/MWh')
       .attach('file', Buffer.from(exported, 'utf8'), 'export.csv');
     expect(upload.status, JSON.stringify(upload.body)).toBe(201);
-    const profile = await planner.get(`/api/profiles/${upload.body.id}`);
+    const profile = await jobs.planner.get(`/api/profiles/${upload.body.id}`);
     expect(profile.body).toMatchObject({
       stepMinutes: 15,
       valueCount: 100,

@@ -11,7 +11,8 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { createTestApp } from '../support/test-app';
 import { createUser, signInAs, type SignedInAgent } from '../support/auth';
 import { testDatabaseUrl } from '../support/database-url';
-import { createPlace, HOUR_MS, insertDraftPlan, sqlQuery, type Place } from '../sign-off/support';
+import { createPlace, insertDraftPlan, type Place } from '../sign-off/support';
+import { HOUR_MS, sqlRows } from '../support/api-fixtures';
 
 const app = createTestApp();
 let planner: SignedInAgent;
@@ -101,7 +102,7 @@ describe('exporting an approved plan', () => {
 
   it("states the approval time with the site's offset and the plan's facts on the first row", async () => {
     const [first] = rowsOf(text);
-    const stored = await sqlQuery<{ approved_at: Date; battery_id: string }>(
+    const stored = await sqlRows<{ approved_at: Date; battery_id: string }>(
       'select approved_at, battery_id from plans where id = $1',
       [plan.id],
     );
@@ -126,7 +127,7 @@ describe('exporting an approved plan', () => {
     expect(second?.notice).toBe('');
   });
 
-  it('carries the cautions of DESIGN section 8 in the file itself', () => {
+  it('carries the cautions in the file itself', () => {
     const notice = rowsOf(text)[0]?.notice ?? '';
     expect(notice).toMatch(/interconnection agreement/);
     expect(notice).toMatch(/grid code/);
@@ -136,7 +137,7 @@ describe('exporting an approved plan', () => {
   });
 
   it('is recorded in the audit trail', async () => {
-    const events = await sqlQuery<{ action: string; actor_id: string }>(
+    const events = await sqlRows<{ action: string; actor_id: string }>(
       "select action, actor_id from audit_events where entity_id = $1 and action = 'plan.exported'",
       [plan.id],
     );
@@ -237,7 +238,7 @@ describe("a plan changed behind the application's back", () => {
     expect(response.status).toBe(500);
     expect(response.headers['content-type']).toMatch(/application\/json/);
     expect(response.body.error).toMatch(/no longer matches the checksum taken when it was approved/);
-    const audit = await sqlQuery<{ action: string }>(
+    const audit = await sqlRows<{ action: string }>(
       "select action from audit_events where entity_id = $1 and action = 'plan.checksum_mismatch'",
       [plan.id],
     );

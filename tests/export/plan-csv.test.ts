@@ -1,6 +1,6 @@
 /**
  * The plan export's rows, columns and markings, and its round trip through our
- * own profile parser (the upload rules of DESIGN section 4). Expected instants
+ * own profile parser (its upload rules). Expected instants
  * are RFC 3339 literals read with Date.parse, independent of the exporter.
  */
 import Papa from 'papaparse';

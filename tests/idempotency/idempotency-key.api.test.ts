@@ -9,8 +9,8 @@ import { getPool } from '../../server/db/client';
 import { createTestApp } from '../support/test-app';
 import { signInAs, type SignedInAgent } from '../support/auth';
 import { bearer, createToken } from '../support/tokens';
-import { createSite, uniqueName } from '../sites/support';
-import { sample, upload } from '../profiles/support';
+import { createSite, uniqueName, upload } from '../support/api-fixtures';
+import { sample } from '../profiles/support';
 
 const app = createTestApp();
 let planner: SignedInAgent;

@@ -10,8 +10,8 @@ import { getPool } from '../../server/db/client';
 import { createTestApp } from '../support/test-app';
 import { signInAs, type SignedInAgent } from '../support/auth';
 import { bearer, createToken } from '../support/tokens';
-import { createSite } from '../sites/support';
-import { sample, upload } from '../profiles/support';
+import { createSite, upload } from '../support/api-fixtures';
+import { sample } from '../profiles/support';
 
 const app = createTestApp();
 const WEEK = 'prices-week-2026-05-04-15min.csv';

@@ -6,33 +6,28 @@
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Plan, PlanCreated } from '@shared/schemas/plan';
-import { createTestApp } from '../support/test-app';
-import { signInAs, type SignedInAgent } from '../support/auth';
-import { createPlace, dailyPrices, HOUR_MS, sqlRows, stopTestWorker, useOwnJobQueues, waitUntilFinished } from './support';
+import { HOUR_MS, sqlRows } from '../support/api-fixtures';
+import { createPlace, dailyPrices, useJobsTestFile, waitUntilFinished } from '../support/jobs';
 import { WorkerProcesses } from './worker-processes';
 
 const schema = 'pgboss_t_dead_letter';
-useOwnJobQueues('dead_letter', { JOB_RETRY_LIMIT: '0' });
-const app = createTestApp();
+const jobs = useJobsTestFile('dead_letter', { env: { JOB_RETRY_LIMIT: '0' }, worker: false });
 const workers = new WorkerProcesses(schema, { JOB_RETRY_LIMIT: '0' });
-let planner: SignedInAgent;
 
 beforeAll(async () => {
-  planner = await signInAs(app, 'planner');
   await workers.clearQueues();
 });
 afterAll(async () => {
   workers.stopAll();
-  await stopTestWorker(null);
 });
 
 describe('a plan job out of attempts', () => {
   it('moves to the dead-letter queue and the plan fails with the reason, storing nothing', async () => {
     const start = Date.parse('2026-03-02T00:00:00Z');
-    const place = await createPlace(planner, { prices: { values: dailyPrices(3), startMs: start, stepMinutes: 60 } });
+    const place = await createPlace(jobs.planner, { prices: { values: dailyPrices(3), startMs: start, stepMinutes: 60 } });
     workers.hold();
     const first = await workers.start({ holding: true });
-    const created = await planner.post('/api/plans').send({
+    const created = await jobs.planner.post('/api/plans').send({
       batteryId: place.batteryId,
       priceProfileId: place.priceProfileId,
       deliveryStart: new Date(start).toISOString(),
@@ -46,7 +41,7 @@ describe('a plan job out of attempts', () => {
     workers.release();
     await workers.start({ holding: false });
 
-    const failed = await waitUntilFinished<Plan>(planner, `/api/plans/${plan.id}`, 120_000);
+    const failed = await waitUntilFinished<Plan>(jobs.planner, `/api/plans/${plan.id}`, 120_000);
     expect(failed.job!.state).toBe('failed');
     expect(failed.results).toBeNull();
     expect(failed.errorMessage).toMatch(

@@ -8,34 +8,29 @@
  */
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Study, StudyCreated } from '@shared/schemas/study';
-import { createTestApp } from '../support/test-app';
-import { signInAs, type SignedInAgent } from '../support/auth';
-import { createPlace, dailyPrices, HOUR_MS, sqlRows, stopTestWorker, useOwnJobQueues, waitUntilFinished } from './support';
+import { HOUR_MS, sqlRows } from '../support/api-fixtures';
+import { createPlace, dailyPrices, useJobsTestFile, waitUntilFinished } from '../support/jobs';
 import { WorkerProcesses } from './worker-processes';
 
 const schema = 'pgboss_t_worker_killed';
-useOwnJobQueues('worker_killed');
-const app = createTestApp();
+const jobs = useJobsTestFile('worker_killed', { worker: false });
 const workers = new WorkerProcesses(schema);
-let planner: SignedInAgent;
 
 beforeAll(async () => {
-  planner = await signInAs(app, 'planner');
   await workers.clearQueues();
 });
 afterAll(async () => {
   workers.stopAll();
-  await stopTestWorker(null);
 });
 
 describe('a worker process killed in the middle of a horizon study', () => {
   it('has its job retried by another worker process, completed once, with results stored once', async () => {
     const start = Date.parse('2026-03-02T00:00:00Z');
-    const place = await createPlace(planner, { prices: { values: dailyPrices(3), startMs: start, stepMinutes: 60 } });
+    const place = await createPlace(jobs.planner, { prices: { values: dailyPrices(3), startMs: start, stepMinutes: 60 } });
     workers.hold();
     const first = await workers.start({ holding: true });
 
-    const created = await planner.post('/api/studies').send({
+    const created = await jobs.planner.post('/api/studies').send({
       batteryId: place.batteryId,
       priceProfileId: place.priceProfileId,
       start: new Date(start).toISOString(),
@@ -54,7 +49,7 @@ describe('a worker process killed in the middle of a horizon study', () => {
 
     workers.release();
     const second = await workers.start({ holding: false });
-    const finished = await waitUntilFinished<Study>(planner, `/api/studies/${study.id}`, 120_000);
+    const finished = await waitUntilFinished<Study>(jobs.planner, `/api/studies/${study.id}`, 120_000);
 
     expect(finished.status, finished.errorMessage ?? '').toBe('completed');
     expect(finished.job!.attempt).toBe(2);

@@ -9,7 +9,7 @@ import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { testDatabaseUrl } from '../support/database-url';
-import { sqlRows } from './support';
+import { sqlRows } from '../support/api-fixtures';
 
 export class WorkerProcesses {
   private readonly children: ChildProcess[] = [];

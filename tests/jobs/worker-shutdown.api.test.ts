@@ -12,7 +12,8 @@ import type { Plan, PlanCreated } from '@shared/schemas/plan';
 import type { Study, StudyCreated } from '@shared/schemas/study';
 import { createTestApp } from '../support/test-app';
 import { signInAs, type SignedInAgent } from '../support/auth';
-import { createPlace, dailyPrices, HOUR_MS, sqlRows, stopTestWorker, useOwnJobQueues, waitUntilFinished } from './support';
+import { createPlace, dailyPrices, stopTestWorker, useOwnJobQueues, waitUntilFinished } from '../support/jobs';
+import { HOUR_MS, sqlRows } from '../support/api-fixtures';
 import { pollUntil, WorkerProcesses } from './worker-processes';
 
 const schema = 'pgboss_t_worker_shutdown';

@@ -16,15 +16,14 @@ import { expectMatchesOpenApi } from '../support/openapi-check';
 import {
   createPlace,
   dailyPrices,
-  HOUR_MS,
   startTestWorker,
   stopTestWorker,
   useOwnJobQueues,
   waitUntilFinished,
   type Place,
-} from '../jobs/support';
+} from '../support/jobs';
 import { sample } from '../profiles/support';
-import { uniqueName } from '../sites/support';
+import { HOUR_MS, uniqueName } from '../support/api-fixtures';
 
 useOwnJobQueues('openapi_walk');
 const app = createTestApp();

@@ -1,56 +1,28 @@
 /**
- * The horizon preview solves on its own worker thread (issue 6: the API stays
+ * The horizon preview solves on its own worker thread (the API stays
  * responsive while computations run): other requests are answered while a slow
  * preview computes, a preview that fails in the thread is answered with a clear
  * error and the next one works, a full queue is refused with 503 and Retry-After,
- * and a thread that ended is replaced by the next preview. Real app, real test database.
+ * and a thread that ended is replaced by the next preview. Real jobs.app, real test database.
  */
-import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
+import { beforeAll, describe, expect, it, vi } from 'vitest';
 import type { HorizonPreview } from '@shared/schemas/horizon-preview';
-import type { Plan, PlanCreated } from '@shared/schemas/plan';
+import type { Plan } from '@shared/schemas/plan';
 import { getDb } from '../../server/db/client';
-import type { JobWorker } from '../../server/jobs/job-worker';
 import { findPlanForPreview } from '../../server/plans/plans.repo';
 import { previewThread } from '../../server/horizon-preview/preview-thread-client';
-import { createTestApp } from '../support/test-app';
-import { signInAs, type SignedInAgent } from '../support/auth';
-import {
-  createPlace,
-  dailyPrices,
-  HOUR_MS,
-  sqlRows,
-  startTestWorker,
-  stopTestWorker,
-  useOwnJobQueues,
-  waitUntilFinished,
-  type Place,
-} from '../jobs/support';
+import { HOUR_MS, iso, sqlRows } from '../support/api-fixtures';
+import { computePlan, createPlace, dailyPrices, exactPathBattery, type Place, useJobsTestFile } from '../support/jobs';
 
-useOwnJobQueues('horizon_preview_thread');
-const app = createTestApp();
-let planner: SignedInAgent;
-let worker: JobWorker | null = null;
+const jobs = useJobsTestFile('horizon_preview_thread');
 
 const start = Date.parse('2026-03-02T00:00:00Z');
-const iso = (ms: number) => new Date(ms).toISOString();
-const battery = {
-  energyKwh: 2000,
-  powerChargeKw: 1000,
-  powerDischargeKw: 1000,
-  efficiencyCharge: 0.95,
-  efficiencyDischarge: 0.92,
-  socMinPct: 10,
-  socMaxPct: 90,
-  socInitialPct: 50,
-  selfDischargePctPerHour: 0,
-  degradationCostPerMwh: 0,
-  maxCyclesPerDay: null,
-};
+const battery = exactPathBattery();
 let hourly: Place;
 let fiveMinute: Place;
 
 async function makePlan(p: Place): Promise<Plan> {
-  const created = await planner.post('/api/plans').send({
+  const plan = await computePlan(jobs.planner, {
     batteryId: p.batteryId,
     priceProfileId: p.priceProfileId,
     deliveryStart: iso(start + 24 * HOUR_MS),
@@ -59,14 +31,12 @@ async function makePlan(p: Place): Promise<Plan> {
     terminalRule: 'steady-value',
     initialSocPct: 50,
   });
-  expect(created.status, JSON.stringify(created.body)).toBe(202);
-  const plan = await waitUntilFinished<Plan>(planner, `/api/plans/${(created.body as PlanCreated).plan.id}`);
   expect(plan.job?.state, plan.errorMessage ?? '').toBe('completed');
   return plan;
 }
 
 const preview = (planId: string, horizonHours: number) =>
-  planner.post(`/api/plans/${planId}/horizon-preview`).send({ horizonHours });
+  jobs.planner.post(`/api/plans/${planId}/horizon-preview`).send({ horizonHours });
 
 /** A job for the thread whose profile values arrive only when the test says: it holds a place in the queue until then. */
 function heldJob(key: string, inputs: Awaited<ReturnType<typeof findPlanForPreview>> & object) {
@@ -85,13 +55,13 @@ function heldJob(key: string, inputs: Awaited<ReturnType<typeof findPlanForPrevi
 }
 
 beforeAll(async () => {
-  planner = await signInAs(app, 'planner');
-  worker = await startTestWorker();
-  hourly = await createPlace(planner, { prices: { values: dailyPrices(4), startMs: start, stepMinutes: 60 }, battery });
+  hourly = await createPlace(jobs.planner, { prices: { values: dailyPrices(4), startMs: start, stepMinutes: 60 }, battery });
   // Ten days of 5-minute prices (invented): a week-long preview is the step cap (2016 steps), the slowest one there is.
-  fiveMinute = await createPlace(planner, { prices: { values: dailyPrices(10, 5), startMs: start, stepMinutes: 5 }, battery });
+  fiveMinute = await createPlace(jobs.planner, {
+    prices: { values: dailyPrices(10, 5), startMs: start, stepMinutes: 5 },
+    battery,
+  });
 });
-afterAll(async () => stopTestWorker(worker));
 
 describe('the horizon preview thread', () => {
   it('lets GET /api/health answer while a preview of 5-minute data at the step cap is computing', async () => {
@@ -100,7 +70,7 @@ describe('the horizon preview thread', () => {
     // The plan's first preview: its profiles are aligned and its steady cycle solved on the thread, then a week is re-planned.
     const slow = preview(plan.id, 168).then((r) => (order.push('preview'), r));
     await vi.waitFor(() => expect(previewThread.pending).toBe(1), { timeout: 10_000, interval: 5 });
-    const health = await planner.get('/api/health');
+    const health = await jobs.planner.get('/api/health');
     order.push('health');
     expect(health.status).toBe(200);
     expect(health.body).toEqual({ ok: true, db: 'up' });

@@ -1,60 +1,33 @@
 /**
- * The quick horizon preview, POST /api/plans/:id/horizon-preview (issue 9), against the
+ * The quick horizon preview, POST /api/plans/:id/horizon-preview, against the
  * real test database: it agrees with a full plan made with the same horizon through the
  * job, its schedule is optimal by an independent LP solver, bad horizons and models the
  * exact path cannot take are refused with what to do, viewers may use it, and it writes
  * nothing.
  */
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
 import request from 'supertest';
 import type { HorizonPreview } from '@shared/schemas/horizon-preview';
-import type { Plan, PlanCreated } from '@shared/schemas/plan';
-import { createTestApp, testOrigin } from '../support/test-app';
+import type { Plan } from '@shared/schemas/plan';
+import { testOrigin } from '../support/test-app';
 import { signInAs, type SignedInAgent } from '../support/auth';
-import type { JobWorker } from '../../server/jobs/job-worker';
 import { PREVIEW_LIMIT, previewLimitStore } from '../../server/horizon-preview/horizon-preview.routes';
-import { optimalArbitrageProfit } from '../jobs/independent-lp';
-import {
-  createPlace,
-  dailyPrices,
-  HOUR_MS,
-  sqlRows,
-  startTestWorker,
-  stopTestWorker,
-  useOwnJobQueues,
-  waitUntilFinished,
-  type Place,
-} from '../jobs/support';
+import { optimalArbitrageProfit } from '../support/reference-lp';
+import { HOUR_MS, iso, sqlRows } from '../support/api-fixtures';
+import { computePlan, createPlace, dailyPrices, exactPathBattery, type Place, useJobsTestFile } from '../support/jobs';
 
-useOwnJobQueues('horizon_preview');
-const app = createTestApp();
-let planner: SignedInAgent;
-let worker: JobWorker | null = null;
+const jobs = useJobsTestFile('horizon_preview');
 
 const start = Date.parse('2026-03-02T00:00:00Z');
-const iso = (ms: number) => new Date(ms).toISOString();
 // Four days of hourly prices (invented daily shape with an uneven ripple); the delivery window is the second day.
 const prices = dailyPrices(4).map((p, i) => p + ((i * 37) % 11) - 5);
 const deliveryStart = start + 24 * HOUR_MS;
 const deliveryEnd = start + 48 * HOUR_MS;
-// No daily cycle cap (the lithium-ion default has one): the exact fast path takes this battery.
-const battery = {
-  energyKwh: 2000,
-  powerChargeKw: 1000,
-  powerDischargeKw: 1000,
-  efficiencyCharge: 0.95,
-  efficiencyDischarge: 0.92,
-  socMinPct: 10,
-  socMaxPct: 90,
-  socInitialPct: 50,
-  selfDischargePctPerHour: 0,
-  degradationCostPerMwh: 0,
-  maxCyclesPerDay: null,
-};
+const battery = exactPathBattery();
 let place: Place;
 
 async function makePlan(p: Place, horizonHours: number, terminalRule: string): Promise<Plan> {
-  const created = await planner.post('/api/plans').send({
+  const plan = await computePlan(jobs.planner, {
     batteryId: p.batteryId,
     priceProfileId: p.priceProfileId,
     deliveryStart: iso(deliveryStart),
@@ -63,8 +36,6 @@ async function makePlan(p: Place, horizonHours: number, terminalRule: string): P
     terminalRule,
     initialSocPct: 50,
   });
-  expect(created.status, JSON.stringify(created.body)).toBe(202);
-  const plan = await waitUntilFinished<Plan>(planner, `/api/plans/${(created.body as PlanCreated).plan.id}`);
   expect(plan.job?.state, plan.errorMessage ?? '').toBe('completed');
   return plan;
 }
@@ -73,7 +44,7 @@ const preview = (agent: SignedInAgent, planId: string, horizonHours: unknown) =>
   agent.post(`/api/plans/${planId}/horizon-preview`).send({ horizonHours });
 
 async function okPreview(planId: string, horizonHours: number): Promise<HorizonPreview> {
-  const response = await preview(planner, planId, horizonHours);
+  const response = await preview(jobs.planner, planId, horizonHours);
   expect(response.status, JSON.stringify(response.body)).toBe(200);
   return response.body as HorizonPreview;
 }
@@ -81,11 +52,8 @@ async function okPreview(planId: string, horizonHours: number): Promise<HorizonP
 const relClose = (a: number, b: number, rel = 1e-9) => Math.abs(a - b) <= rel * Math.max(1, Math.abs(b));
 
 beforeAll(async () => {
-  planner = await signInAs(app, 'planner');
-  worker = await startTestWorker();
-  place = await createPlace(planner, { prices: { values: prices, startMs: start, stepMinutes: 60 }, battery });
+  place = await createPlace(jobs.planner, { prices: { values: prices, startMs: start, stepMinutes: 60 }, battery });
 });
-afterAll(async () => stopTestWorker(worker));
 
 describe('a horizon preview', () => {
   it('costs what a full plan made with that horizon through the job costs, for free and steady-value ends', async () => {
@@ -136,7 +104,7 @@ describe('a horizon preview', () => {
         e = next;
       });
       expect(p.cost).toBeCloseTo(paidDelivery, 6);
-      // [S] javascript-lp-solver 1.0.3 (npm), on the LP of DESIGN section 3 written out in tests/jobs/independent-lp.ts
+      // [S] javascript-lp-solver 1.0.3 (npm), on the LP of docs/model.md written out in tests/support/reference-lp.ts
       // [S: Hashmi et al. 2019, arXiv 1905.00418]: the best profit over the lookahead with a free end.
       const best = optimalArbitrageProfit({
         prices: prices.slice(24, 24 + horizonHours),
@@ -164,20 +132,20 @@ describe('a horizon preview', () => {
       [0, /longer than 0 hours/],
     ];
     for (const [horizonHours, message] of cases) {
-      const response = await preview(planner, plan.id, horizonHours);
+      const response = await preview(jobs.planner, plan.id, horizonHours);
       expect(response.status, JSON.stringify(response.body)).toBe(422);
       expect(response.body.issues[0].path).toBe('horizonHours');
       expect(response.body.issues[0].message).toMatch(message);
     }
-    expect((await preview(planner, '00000000-0000-4000-8000-000000000000', 24)).status).toBe(404);
+    expect((await preview(jobs.planner, '00000000-0000-4000-8000-000000000000', 24)).status).toBe(404);
   });
 
   it('refuses models only the LP solves, saying why and that a full plan can take the horizon', async () => {
-    const capped = await createPlace(planner, {
+    const capped = await createPlace(jobs.planner, {
       prices: { values: prices, startMs: start, stepMinutes: 60 },
       battery: { ...battery, maxCyclesPerDay: 1 },
     });
-    const charged = await createPlace(planner, {
+    const charged = await createPlace(jobs.planner, {
       prices: { values: prices, startMs: start, stepMinutes: 60 },
       battery,
       site: { demandChargePerKw: 8, importLimitKw: 5000 },
@@ -187,7 +155,7 @@ describe('a horizon preview', () => {
       [capped, /daily throughput cap \(1 cycles per day\)/],
       [charged, /demand charge \(8 per kW\)/],
     ] as const) {
-      const created = await planner.post('/api/plans').send({
+      const plan = await computePlan(jobs.planner, {
         batteryId: p.batteryId,
         priceProfileId: p.priceProfileId,
         loadProfileId: p.loadProfileId,
@@ -197,10 +165,8 @@ describe('a horizon preview', () => {
         terminalRule: 'free',
         initialSocPct: 50,
       });
-      expect(created.status, JSON.stringify(created.body)).toBe(202);
-      const plan = await waitUntilFinished<Plan>(planner, `/api/plans/${(created.body as PlanCreated).plan.id}`);
       expect(plan.method).toBe('lp');
-      const response = await preview(planner, plan.id, 48);
+      const response = await preview(jobs.planner, plan.id, 48);
       expect(response.status, JSON.stringify(response.body)).toBe(422);
       expect(response.body.previewAvailable).toBe(false);
       expect(response.body.error).toMatch(/needs the exact fast path/);
@@ -212,11 +178,11 @@ describe('a horizon preview', () => {
 
   it('is open to a viewer and answers 401 to an anonymous caller', async () => {
     const plan = await makePlan(place, 24, 'free');
-    const viewer = await signInAs(app, 'viewer');
+    const viewer = await signInAs(jobs.app, 'viewer');
     const seen = await preview(viewer, plan.id, 30);
     expect(seen.status, JSON.stringify(seen.body)).toBe(200);
     expect((seen.body as HorizonPreview).steps).toHaveLength(30);
-    const anonymous = await request(app)
+    const anonymous = await request(jobs.app)
       .post(`/api/plans/${plan.id}/horizon-preview`)
       .set('Origin', testOrigin)
       .send({ horizonHours: 30 });
@@ -225,7 +191,7 @@ describe('a horizon preview', () => {
 
   it('writes nothing: no plan, job, audit event or plan event appears, and the plan row stays as it was', async () => {
     const plan = await makePlan(place, 24, 'steady-value');
-    // Other test files share the database: count what this planner and this battery could have caused, and the plan row itself.
+    // Other test files share the database: count what this jobs.planner and this battery could have caused, and the plan row itself.
     const snapshot = () =>
       sqlRows<{ plans: string; jobs: string; audit: string; events: string; studies: string; row: string }>(
         `select (select count(*) from plans where created_by = $2::text) as plans,
@@ -234,11 +200,11 @@ describe('a horizon preview', () => {
                 (select count(*) from plan_events where plan_id = $1::uuid) as events,
                 (select count(*) from horizon_studies where battery_id = $3::uuid) as studies,
                 (select md5(p::text) from plans p where id = $1::uuid) as row`,
-        [plan.id, planner.user.id, place.batteryId],
+        [plan.id, jobs.planner.user.id, place.batteryId],
       );
     const before = await snapshot();
     for (const h of [24, 36, 48, 72]) await okPreview(plan.id, h);
-    expect((await preview(planner, plan.id, 12)).status).toBe(422);
+    expect((await preview(jobs.planner, plan.id, 12)).status).toBe(422);
     expect(await snapshot()).toEqual(before);
   });
 });
@@ -246,13 +212,13 @@ describe('a horizon preview', () => {
 describe('the horizon preview rate limit', () => {
   it('answers 429 with Retry-After once a user has used up the burst, and only for that user', async () => {
     const plan = await makePlan(place, 24, 'free');
-    const eager = await signInAs(app, 'viewer');
+    const eager = await signInAs(jobs.app, 'viewer');
     // Use up the allowance in the store the route counts in, so the test never races the window's end.
     for (let i = 0; i < PREVIEW_LIMIT.limit; i++) await previewLimitStore.increment(eager.user.id);
     const refused = await preview(eager, plan.id, 30);
     expect(refused.status).toBe(429);
     expect(Number(refused.headers['retry-after'])).toBeGreaterThanOrEqual(1);
     expect(refused.body.error).toMatch(/Too many previews/);
-    expect((await preview(planner, plan.id, 30)).status).toBe(200);
+    expect((await preview(jobs.planner, plan.id, 30)).status).toBe(200);
   });
 });

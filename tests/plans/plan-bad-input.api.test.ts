@@ -1,40 +1,23 @@
 /**
- * Every bad input of issue 6 for plans gets a clear 422 (what, where, how to
+ * Every bad input for plans gets a clear 422 (what, where, how to
  * fix) and stores nothing; a battery edited while its plan waits in the queue
  * does not change the plan; an infeasible model ends the job with the
  * engine's message on the plan.
  */
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
 import type { Plan, PlanCreated } from '@shared/schemas/plan';
-import { createTestApp } from '../support/test-app';
-import { anonymousAgent, signInAs, type SignedInAgent } from '../support/auth';
-import type { JobWorker } from '../../server/jobs/job-worker';
-import {
-  createPlace,
-  dailyPrices,
-  HOUR_MS,
-  sqlRows,
-  startTestWorker,
-  stopTestWorker,
-  useOwnJobQueues,
-  waitUntilFinished,
-  type Place,
-} from '../jobs/support';
+import { anonymousAgent, signInAs } from '../support/auth';
+import { HOUR_MS, iso, sqlRows } from '../support/api-fixtures';
+import { computePlan, createPlace, dailyPrices, type Place, useJobsTestFile, waitUntilFinished } from '../support/jobs';
 
-useOwnJobQueues('plan_bad_input');
-const app = createTestApp();
-let planner: SignedInAgent;
+const jobs = useJobsTestFile('plan_bad_input', { worker: false });
 let place: Place;
-let worker: JobWorker | null = null;
 
 const start = Date.parse('2026-03-02T00:00:00Z');
-const iso = (ms: number) => new Date(ms).toISOString();
 
 beforeAll(async () => {
-  planner = await signInAs(app, 'planner');
-  place = await createPlace(planner, { prices: { values: dailyPrices(3), startMs: start, stepMinutes: 60 } });
+  place = await createPlace(jobs.planner, { prices: { values: dailyPrices(3), startMs: start, stepMinutes: 60 } });
 });
-afterAll(async () => stopTestWorker(worker));
 
 const validBody = (over: Record<string, unknown> = {}) => ({
   batteryId: place.batteryId,
@@ -51,7 +34,7 @@ const storedPlans = async (batteryId: string) =>
 
 async function expectRefused(body: Record<string, unknown>, path: string, message: RegExp) {
   const before = await storedPlans(place.batteryId);
-  const response = await planner.post('/api/plans').send(body);
+  const response = await jobs.planner.post('/api/plans').send(body);
   expect(response.status, JSON.stringify(response.body)).toBe(422);
   expect(response.body.error).toEqual(expect.any(String));
   const issue = (response.body.issues as { path: string; message: string }[]).find((i) => i.path === path);
@@ -75,7 +58,7 @@ describe('POST /api/plans with bad input', () => {
   });
 
   it('refuses a profile from another site, naming both sites', async () => {
-    const other = await createPlace(planner, { prices: { values: dailyPrices(3), startMs: start, stepMinutes: 60 } });
+    const other = await createPlace(jobs.planner, { prices: { values: dailyPrices(3), startMs: start, stepMinutes: 60 } });
     await expectRefused(
       validBody({ priceProfileId: other.priceProfileId }),
       'priceProfileId',
@@ -104,39 +87,45 @@ describe('POST /api/plans with bad input', () => {
   });
 
   it('refuses an initial SoC outside the battery’s window and a target above its maximum', async () => {
-    const battery = (await planner.get(`/api/batteries/${place.batteryId}`)).body as { socMinPct: number; socMaxPct: number };
+    const battery = (await jobs.planner.get(`/api/batteries/${place.batteryId}`)).body as {
+      socMinPct: number;
+      socMaxPct: number;
+    };
     await expectRefused(validBody({ initialSocPct: battery.socMinPct - 1 }), 'initialSocPct', /outside the SoC window/);
     await expectRefused(validBody({ terminalRule: `target:${battery.socMaxPct + 1}` }), 'terminalRule', /above the maximum SoC/);
   });
 
   it('refuses an unknown terminal rule and a body with fields it does not know (no mass assignment)', async () => {
     await expectRefused(validBody({ terminalRule: 'empty' }), 'terminalRule', /free, cyclic, steady-value or target/);
-    const response = await planner.post('/api/plans').send(validBody({ status: 'approved' }));
+    const response = await jobs.planner.post('/api/plans').send(validBody({ status: 'approved' }));
     expect(response.status).toBe(422);
   });
 
   it('refuses a viewer (403) and nobody signed in (401)', async () => {
-    const viewer = await signInAs(app, 'viewer');
+    const viewer = await signInAs(jobs.app, 'viewer');
     expect((await viewer.post('/api/plans').send(validBody())).status).toBe(403);
-    expect((await anonymousAgent(app).post('/api/plans').send(validBody())).status).toBe(401);
+    expect((await anonymousAgent(jobs.app).post('/api/plans').send(validBody())).status).toBe(401);
   });
 });
 
 describe('a plan waiting in the queue', () => {
   it('keeps the battery parameters of its snapshot when the battery is edited before a worker takes it', async () => {
     // No worker is running yet: the plan waits while the battery changes.
-    const created = await planner.post('/api/plans').send(validBody({ horizonHours: 48, initialSocPct: 50 }));
+    const created = await jobs.planner.post('/api/plans').send(validBody({ horizonHours: 48, initialSocPct: 50 }));
     expect(created.status, JSON.stringify(created.body)).toBe(202);
     const planId = (created.body as PlanCreated).plan.id;
-    const battery = (await planner.get(`/api/batteries/${place.batteryId}`)).body as { version: number; powerChargeKw: number };
+    const battery = (await jobs.planner.get(`/api/batteries/${place.batteryId}`)).body as {
+      version: number;
+      powerChargeKw: number;
+    };
     expect(battery.powerChargeKw).toBe(1000);
-    const edit = await planner
+    const edit = await jobs.planner
       .patch(`/api/batteries/${place.batteryId}`)
       .send({ version: battery.version, powerChargeKw: 200, powerDischargeKw: 200 });
     expect(edit.status, JSON.stringify(edit.body)).toBe(200);
 
-    worker = await startTestWorker();
-    const plan = await waitUntilFinished<Plan>(planner, `/api/plans/${planId}`);
+    await jobs.startWorker();
+    const plan = await waitUntilFinished<Plan>(jobs.planner, `/api/plans/${planId}`);
     expect(plan.job?.state, plan.errorMessage ?? '').toBe('completed');
     expect(plan.inputs!.battery.powerChargeKw).toBe(1000);
     expect(plan.inputs!.battery.version).toBe(battery.version);
@@ -149,20 +138,18 @@ describe('a plan waiting in the queue', () => {
 
   it('ends with the engine’s message on the plan when the model is infeasible', async () => {
     // [D] Load 2000 kW against an import limit of 100 kW and 1000 kW of discharge: no schedule balances the site.
-    const infeasible = await createPlace(planner, {
+    const infeasible = await createPlace(jobs.planner, {
       prices: { values: dailyPrices(3), startMs: start, stepMinutes: 60 },
       load: { values: Array.from({ length: 72 }, () => 2000), startMs: start, stepMinutes: 60 },
       site: { importLimitKw: 100, exportLimitKw: 100 },
     });
-    worker ??= await startTestWorker();
-    const created = await planner.post('/api/plans').send({
+    await jobs.startWorker();
+    const plan = await computePlan(jobs.planner, {
       ...validBody(),
       batteryId: infeasible.batteryId,
       priceProfileId: infeasible.priceProfileId,
       loadProfileId: infeasible.loadProfileId,
     });
-    expect(created.status, JSON.stringify(created.body)).toBe(202);
-    const plan = await waitUntilFinished<Plan>(planner, `/api/plans/${(created.body as PlanCreated).plan.id}`);
     expect(plan.job?.state).toBe('failed');
     expect(plan.results).toBeNull();
     expect(plan.errorMessage).toMatch(/^The plan could not be computed: .{10,}/);

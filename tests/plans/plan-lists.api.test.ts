@@ -4,48 +4,34 @@
  * the plan form's defaults: the initial SoC comes from the battery until a
  * plan is approved, then from that plan's end SoC.
  */
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
 import type { Plan, PlanCreated, PlanDefaults } from '@shared/schemas/plan';
 import type { JobListItem } from '@shared/schemas/job';
-import { createTestApp } from '../support/test-app';
 import { signInAs, type SignedInAgent } from '../support/auth';
-import type { JobWorker } from '../../server/jobs/job-worker';
-import {
-  createPlace,
-  dailyPrices,
-  HOUR_MS,
-  startTestWorker,
-  stopTestWorker,
-  useOwnJobQueues,
-  waitUntilFinished,
-  type Place,
-} from '../jobs/support';
+import { HOUR_MS, iso } from '../support/api-fixtures';
+import { computePlan, createPlace, dailyPrices, type Place, useJobsTestFile } from '../support/jobs';
 
-useOwnJobQueues('plan_lists');
-const app = createTestApp();
-let planner: SignedInAgent;
+const jobs = useJobsTestFile('plan_lists');
 let approver: SignedInAgent;
 let viewer: SignedInAgent;
 let place: Place;
-let worker: JobWorker | null = null;
 const start = Date.parse('2026-03-02T00:00:00Z');
-const iso = (ms: number) => new Date(ms).toISOString();
 const window1 = { deliveryStart: iso(start), deliveryEnd: iso(start + 24 * HOUR_MS) };
 
 async function makePlan(horizonHours: number, terminalRule: string, window = window1): Promise<Plan> {
-  const created = await planner
-    .post('/api/plans')
-    .send({ batteryId: place.batteryId, priceProfileId: place.priceProfileId, ...window, horizonHours, terminalRule });
-  expect(created.status, JSON.stringify(created.body)).toBe(202);
-  return waitUntilFinished<Plan>(planner, `/api/plans/${(created.body as PlanCreated).plan.id}`);
+  return computePlan(jobs.planner, {
+    batteryId: place.batteryId,
+    priceProfileId: place.priceProfileId,
+    ...window,
+    horizonHours,
+    terminalRule,
+  });
 }
 
 beforeAll(async () => {
-  [planner, approver, viewer] = await Promise.all([signInAs(app, 'planner'), signInAs(app, 'approver'), signInAs(app, 'viewer')]);
-  place = await createPlace(planner, { prices: { values: dailyPrices(5), startMs: start, stepMinutes: 60 } });
-  worker = await startTestWorker();
+  [approver, viewer] = await Promise.all([signInAs(jobs.app, 'approver'), signInAs(jobs.app, 'viewer')]);
+  place = await createPlace(jobs.planner, { prices: { values: dailyPrices(5), startMs: start, stepMinutes: 60 } });
 });
-afterAll(async () => stopTestWorker(worker));
 
 describe('plan lists', () => {
   it('lists the plans of one delivery window by horizon for the comparison, without their series', async () => {
@@ -88,29 +74,30 @@ describe('plan lists', () => {
 
 describe('the plan form’s initial SoC', () => {
   it('is the battery’s own until a plan is approved, then the approved plan’s end SoC', async () => {
-    const battery = (await planner.get(`/api/batteries/${place.batteryId}`)).body as { socInitialPct: number };
+    const battery = (await jobs.planner.get(`/api/batteries/${place.batteryId}`)).body as { socInitialPct: number };
     const next = iso(start + 24 * HOUR_MS);
     const before = (
-      await planner.get(`/api/batteries/${place.batteryId}/plan-defaults?deliveryStart=${encodeURIComponent(next)}`)
+      await jobs.planner.get(`/api/batteries/${place.batteryId}/plan-defaults?deliveryStart=${encodeURIComponent(next)}`)
     ).body as PlanDefaults;
     expect(before).toMatchObject({ initialSocPct: battery.socInitialPct, initialSocSource: 'battery', initialSocPlanId: null });
 
     // A cyclic plan ends where it starts; a free one sells off: use a target to know the end SoC.
     const plan = await makePlan(24, 'target:70');
     expect(plan.results!.summary.endSocPct).toBeGreaterThanOrEqual(70 - 1e-6);
-    const submitted = await planner.post(`/api/plans/${plan.id}/submit`).send({ version: plan.version });
+    const submitted = await jobs.planner.post(`/api/plans/${plan.id}/submit`).send({ version: plan.version });
     expect(submitted.status, JSON.stringify(submitted.body)).toBe(200);
     const approved = await approver.post(`/api/plans/${plan.id}/approve`).send({ version: submitted.body.version });
     expect(approved.status, JSON.stringify(approved.body)).toBe(200);
 
-    const after = (await planner.get(`/api/batteries/${place.batteryId}/plan-defaults?deliveryStart=${encodeURIComponent(next)}`))
-      .body as PlanDefaults;
+    const after = (
+      await jobs.planner.get(`/api/batteries/${place.batteryId}/plan-defaults?deliveryStart=${encodeURIComponent(next)}`)
+    ).body as PlanDefaults;
     expect(after.initialSocSource).toBe('last-approved-plan');
     expect(after.initialSocPlanId).toBe(plan.id);
     expect(after.initialSocPct).toBeCloseTo(plan.results!.summary.endSocPct, 9);
 
     // A new plan for the next day without an initial SoC starts there, and says so in its snapshot.
-    const created = await planner.post('/api/plans').send({
+    const created = await jobs.planner.post('/api/plans').send({
       batteryId: place.batteryId,
       priceProfileId: place.priceProfileId,
       deliveryStart: next,
@@ -120,12 +107,12 @@ describe('the plan form’s initial SoC', () => {
     });
     const made = (created.body as PlanCreated).plan;
     expect(made.initialSocPct).toBeCloseTo(plan.results!.summary.endSocPct, 9);
-    const detail = (await planner.get(`/api/plans/${made.id}`)).body as Plan;
+    const detail = (await jobs.planner.get(`/api/plans/${made.id}`)).body as Plan;
     expect(detail.inputs?.initialSocSource).toBe('last-approved-plan');
     expect(detail.inputs?.initialSocPlanId).toBe(plan.id);
   });
 
   it('answers 404 for a battery that does not exist', async () => {
-    expect((await planner.get('/api/batteries/00000000-0000-4000-8000-000000000000/plan-defaults')).status).toBe(404);
+    expect((await jobs.planner.get('/api/batteries/00000000-0000-4000-8000-000000000000/plan-defaults')).status).toBe(404);
   });
 });

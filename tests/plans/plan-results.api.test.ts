@@ -3,36 +3,15 @@
  * results stored once → GET /api/plans/:id, against the real test database.
  * Checked against a published worked example and an independent LP solver.
  */
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import type { Plan, PlanCreated } from '@shared/schemas/plan';
-import { createTestApp } from '../support/test-app';
-import { signInAs, type SignedInAgent } from '../support/auth';
-import type { JobWorker } from '../../server/jobs/job-worker';
-import { optimalArbitrageProfit } from '../jobs/independent-lp';
-import {
-  createPlace,
-  dailyPrices,
-  HOUR_MS,
-  sqlRows,
-  startTestWorker,
-  stopTestWorker,
-  useOwnJobQueues,
-  waitUntilFinished,
-} from '../jobs/support';
+import { optimalArbitrageProfit } from '../support/reference-lp';
+import { HOUR_MS, iso, sqlRows } from '../support/api-fixtures';
+import { computePlan, createPlace, dailyPrices, useJobsTestFile, waitUntilFinished } from '../support/jobs';
 
-useOwnJobQueues('plan_results');
-const app = createTestApp();
-let planner: SignedInAgent;
-let worker: JobWorker | null = null;
-
-beforeAll(async () => {
-  planner = await signInAs(app, 'planner');
-  worker = await startTestWorker();
-});
-afterAll(async () => stopTestWorker(worker));
+const jobs = useJobsTestFile('plan_results');
 
 const start = Date.parse('2026-03-02T00:00:00Z');
-const iso = (ms: number) => new Date(ms).toISOString();
 // A battery exactly as in the worked fixtures: 1 MW / 1 MWh, η = 0.9 each way, SoC window 0–100 %.
 const fixtureBattery = {
   energyKwh: 1000,
@@ -50,14 +29,14 @@ const fixtureBattery = {
 
 describe('a plan computed by a background job', () => {
   it('earns 61 on prices [20, 100] with a 1 MW / 1 MWh battery starting empty', async () => {
-    // [S] REFERENCES.md worked fixture A (checked with an independent LP solver): charge 1 MW at 20,
+    // [S] worked fixture A (checked with an independent LP solver): charge 1 MW at 20,
     // discharge 0.81 MW at 100: 0.81·100 − 1·20 = 61. The profile repeats [20, 100] for two days.
     const prices = Array.from({ length: 48 }, (_, i) => (i % 2 === 0 ? 20 : 100));
-    const place = await createPlace(planner, {
+    const place = await createPlace(jobs.planner, {
       prices: { values: prices, startMs: start, stepMinutes: 60 },
       battery: fixtureBattery,
     });
-    const created = await planner.post('/api/plans').send({
+    const created = await jobs.planner.post('/api/plans').send({
       batteryId: place.batteryId,
       priceProfileId: place.priceProfileId,
       deliveryStart: iso(start),
@@ -71,7 +50,7 @@ describe('a plan computed by a background job', () => {
     expect(body.job.state).toBe('queued');
     expect(body.plan.status).toBe('draft');
 
-    const plan = await waitUntilFinished<Plan>(planner, `/api/plans/${body.plan.id}`);
+    const plan = await waitUntilFinished<Plan>(jobs.planner, `/api/plans/${body.plan.id}`);
     expect(plan.job?.state, plan.errorMessage ?? '').toBe('completed');
     expect(plan.job?.shareDone).toBe(1);
     const results = plan.results!;
@@ -94,8 +73,8 @@ describe('a plan computed by a background job', () => {
       efficiencyCharge: 0.95,
       efficiencyDischarge: 0.92,
     };
-    const place = await createPlace(planner, { prices: { values: prices, startMs: start, stepMinutes: 60 }, battery });
-    const created = await planner.post('/api/plans').send({
+    const place = await createPlace(jobs.planner, { prices: { values: prices, startMs: start, stepMinutes: 60 }, battery });
+    const plan = await computePlan(jobs.planner, {
       batteryId: place.batteryId,
       priceProfileId: place.priceProfileId,
       deliveryStart: iso(start + 24 * HOUR_MS),
@@ -104,8 +83,6 @@ describe('a plan computed by a background job', () => {
       terminalRule: 'free',
       initialSocPct: 50,
     });
-    expect(created.status, JSON.stringify(created.body)).toBe(202);
-    const plan = await waitUntilFinished<Plan>(planner, `/api/plans/${(created.body as PlanCreated).plan.id}`);
     expect(plan.job?.state, plan.errorMessage ?? '').toBe('completed');
     const steps = plan.results!.steps;
     expect(steps).toHaveLength(36);
@@ -152,8 +129,8 @@ describe('a plan computed by a background job', () => {
 
   it('stores the results once with one audit event, and records who created the plan', async () => {
     const prices = dailyPrices(3);
-    const place = await createPlace(planner, { prices: { values: prices, startMs: start, stepMinutes: 60 } });
-    const created = await planner.post('/api/plans').send({
+    const place = await createPlace(jobs.planner, { prices: { values: prices, startMs: start, stepMinutes: 60 } });
+    const created = await jobs.planner.post('/api/plans').send({
       batteryId: place.batteryId,
       priceProfileId: place.priceProfileId,
       deliveryStart: iso(start),
@@ -163,20 +140,20 @@ describe('a plan computed by a background job', () => {
     });
     expect(created.status, JSON.stringify(created.body)).toBe(202);
     const id = (created.body as PlanCreated).plan.id;
-    await waitUntilFinished<Plan>(planner, `/api/plans/${id}`);
+    await waitUntilFinished<Plan>(jobs.planner, `/api/plans/${id}`);
     const events = await sqlRows<{ action: string; actor_id: string | null }>(
       'select action, actor_id from audit_events where entity_id = $1 order by id',
       [id],
     );
     expect(events.map((e) => e.action)).toEqual(['plan.created', 'plan.computed']);
-    expect(events[0]!.actor_id).toBe(planner.user.id);
+    expect(events[0]!.actor_id).toBe(jobs.planner.user.id);
     const [row] = await sqlRows<{ results_input_version: number; initial_soc_pct: number }>(
       'select results_input_version, initial_soc_pct from plans where id = $1',
       [id],
     );
     expect(row!.results_input_version).toBe(1);
     // No SoC in the request and no approved plan yet: the battery's own initial SoC (the lithium-ion default).
-    const battery = await planner.get(`/api/batteries/${place.batteryId}`);
+    const battery = await jobs.planner.get(`/api/batteries/${place.batteryId}`);
     expect(row!.initial_soc_pct).toBe(battery.body.socInitialPct);
   });
 });

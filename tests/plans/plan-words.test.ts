@@ -1,6 +1,6 @@
 /**
  * The turnpike figures in plain words. The wording is the product's contract:
- * issue 6 gives the example "stays near the steady cycle 86 % of the time; the
+ * the example "stays near the steady cycle 86 % of the time; the
  * last 5 h leave it: energy is sold off because nothing values it after the horizon".
  */
 import { describe, expect, it } from 'vitest';
@@ -19,7 +19,7 @@ const figures = {
 };
 
 describe('the turnpike sentence', () => {
-  it('reads like the example of issue 6 for a free end with 15-minute steps', () => {
+  it('reads like the example for a free end with 15-minute steps', () => {
     // [D] 20 steps of 15 minutes = 5 h.
     expect(turnpikeSentence(figures, 15, 'free')).toBe(
       'Stays near the steady cycle 86 % of the time (within 5 % of usable energy); the last 5 h leave it: energy is sold off because nothing values it after the horizon.',

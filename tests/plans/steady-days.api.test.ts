@@ -1,55 +1,29 @@
 /**
- * The steady cycle from weekdays or weekend days only (DESIGN section 3: "Offer
+ * The steady cycle from weekdays or weekend days only ("Offer
  * weekday/weekend representative days as an option"), through POST /api/plans and
  * POST /api/studies, the jobs and the stored results.
  */
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { Plan, PlanCreated } from '@shared/schemas/plan';
-import type { Study, StudyCreated } from '@shared/schemas/study';
-import type { JobWorker } from '../../server/jobs/job-worker';
-import { createTestApp } from '../support/test-app';
-import { signInAs, type SignedInAgent } from '../support/auth';
-import {
-  createPlace,
-  HOUR_MS,
-  startTestWorker,
-  stopTestWorker,
-  useOwnJobQueues,
-  waitUntilFinished,
-  type Place,
-} from '../jobs/support';
+import { beforeAll, describe, expect, it } from 'vitest';
+import type { Plan } from '@shared/schemas/plan';
+import type { Study } from '@shared/schemas/study';
+import { HOUR_MS, iso } from '../support/api-fixtures';
+import { computePlan, computeStudy, createPlace, exactPathBattery, type Place, useJobsTestFile } from '../support/jobs';
 
-useOwnJobQueues('steady_days');
-const app = createTestApp();
-let planner: SignedInAgent;
-let worker: JobWorker | null = null;
+const jobs = useJobsTestFile('steady_days');
 
 const monday = Date.parse('2026-03-02T00:00:00Z'); // a Monday; the test sites keep UTC
-const iso = (ms: number) => new Date(ms).toISOString();
 // Invented shapes: weekdays peak in the evening, weekends are flat with a midday dip.
 const weekdayDay = Array.from({ length: 24 }, (_, h) => (h < 6 ? 30 : h >= 17 && h < 21 ? 120 : 60));
 const weekendDay = Array.from({ length: 24 }, (_, h) => (h >= 11 && h < 15 ? 20 : 45));
 const days = (count: number, pick: (day: number) => number[]) => Array.from({ length: count }, (_, d) => pick(d)).flat();
 const isWeekend = (day: number) => day % 7 >= 5;
-const battery = {
-  energyKwh: 2000,
-  powerChargeKw: 1000,
-  powerDischargeKw: 1000,
-  efficiencyCharge: 0.95,
-  efficiencyDischarge: 0.95,
-  socMinPct: 10,
-  socMaxPct: 90,
-  socInitialPct: 50,
-  selfDischargePctPerHour: 0,
-  degradationCostPerMwh: 0,
-  maxCyclesPerDay: null,
-};
+const battery = exactPathBattery({ efficiencyCharge: 0.95, efficiencyDischarge: 0.95 });
 
 let mixed: Place;
 let weekdaysOnly: Place;
 
 async function plan(place: Place, extra: Record<string, unknown>): Promise<Plan> {
-  const created = await planner.post('/api/plans').send({
+  return computePlan(jobs.planner, {
     batteryId: place.batteryId,
     priceProfileId: place.priceProfileId,
     // Tuesday 3 March (a weekday) until noon: the steady-value end prices the energy kept for the evening.
@@ -60,25 +34,20 @@ async function plan(place: Place, extra: Record<string, unknown>): Promise<Plan>
     initialSocPct: 50,
     ...extra,
   });
-  expect(created.status, JSON.stringify(created.body)).toBe(202);
-  return waitUntilFinished<Plan>(planner, `/api/plans/${(created.body as PlanCreated).plan.id}`);
 }
 
 const steadySoc = (p: Plan) => p.results!.steps.map((s) => s.steadySocKwh);
 
 beforeAll(async () => {
-  planner = await signInAs(app, 'planner');
-  worker = await startTestWorker();
-  mixed = await createPlace(planner, {
+  mixed = await createPlace(jobs.planner, {
     prices: { values: days(14, (d) => (isWeekend(d) ? weekendDay : weekdayDay)), startMs: monday, stepMinutes: 60 },
     battery,
   });
-  weekdaysOnly = await createPlace(planner, {
+  weekdaysOnly = await createPlace(jobs.planner, {
     prices: { values: days(14, () => weekdayDay), startMs: monday, stepMinutes: 60 },
     battery,
   });
 });
-afterAll(async () => stopTestWorker(worker));
 
 describe('the steady cycle of a plan', () => {
   it('from weekdays only is the steady cycle of the weekday shape alone; from every day it differs', async () => {
@@ -103,13 +72,13 @@ describe('the steady cycle of a plan', () => {
     // The horizon preview re-solves with the plan's own steady cycle: at the plan's horizon it
     // gives the plan's cost, which the every-day cycle's steady-value end would not.
     expect(Math.abs(everyDay.results!.summary.cost - weekday.results!.summary.cost)).toBeGreaterThan(1);
-    const preview = await planner.post(`/api/plans/${weekday.id}/horizon-preview`).send({ horizonHours: 12 });
+    const preview = await jobs.planner.post(`/api/plans/${weekday.id}/horizon-preview`).send({ horizonHours: 12 });
     expect(preview.status, JSON.stringify(preview.body)).toBe(200);
     expect(preview.body.cost).toBeCloseTo(weekday.results!.summary.cost, 9);
   });
 
   it('from weekend days fails with the engine’s reason when the data hold no whole weekend day', async () => {
-    const friday = await createPlace(planner, {
+    const friday = await createPlace(jobs.planner, {
       prices: { values: days(5, () => weekdayDay), startMs: monday, stepMinutes: 60 },
       battery,
     });
@@ -122,7 +91,7 @@ describe('the steady cycle of a plan', () => {
   });
 
   it('refuses an unknown choice with 422, naming the field and the choices', async () => {
-    const response = await planner.post('/api/plans').send({
+    const response = await jobs.planner.post('/api/plans').send({
       batteryId: mixed.batteryId,
       priceProfileId: mixed.priceProfileId,
       deliveryStart: iso(monday + 24 * HOUR_MS),
@@ -144,7 +113,7 @@ describe('the steady cycle of a plan', () => {
     // Tuesday and Wednesday, re-planned hourly with lookaheads of 1 to 6 h: every window ends on a weekday, and
     // with short lookaheads the value of the energy at the end decides what is done now.
     const study = async (place: Place, extra: Record<string, unknown>) => {
-      const created = await planner.post('/api/studies').send({
+      const done = await computeStudy(jobs.planner, {
         batteryId: place.batteryId,
         priceProfileId: place.priceProfileId,
         start: iso(monday + 24 * HOUR_MS),
@@ -155,8 +124,6 @@ describe('the steady cycle of a plan', () => {
         initialSocPct: 50,
         ...extra,
       });
-      expect(created.status, JSON.stringify(created.body)).toBe(202);
-      const done = await waitUntilFinished<Study>(planner, `/api/studies/${(created.body as StudyCreated).study.id}`);
       expect(done.job?.state, done.errorMessage ?? '').toBe('completed');
       return done;
     };

@@ -1,5 +1,5 @@
 /**
- * Every bad upload named in DESIGN section 4 and issue 5 is rejected with the
+ * Every bad upload the upload rules name is rejected with the
  * physical line of the file, a message saying what is wrong and how to fix it,
  * and the general hint. Line numbers below are counted by hand from the
  * literal files [D: line 1 is the header unless stated].
@@ -211,7 +211,7 @@ describe('rejects local times that daylight saving makes missing or ambiguous', 
   });
 
   it('rejects both occurrences of the repeated hour on the autumn day in Europe/Berlin', () => {
-    // The repeated hour appears twice, in chronological order [S: REFERENCES.md, time series conventions].
+    // The repeated hour appears twice, in chronological order [S: time series conventions, docs/sources.md].
     const text = csv('time,price', '2026-10-25T01:00,10', '2026-10-25T02:00,11', '2026-10-25T02:00,12', '2026-10-25T03:00,13');
     const ambiguous =
       /2026-10-25T02:00 happens twice in Europe\/Berlin.*2026-10-25T02:00\+02:00 for the first and 2026-10-25T02:00\+01:00 for the second/;

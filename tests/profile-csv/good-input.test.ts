@@ -61,7 +61,7 @@ describe('reads RFC 3339 times as exact instants', () => {
 });
 
 describe('reads both DST days of Europe/Berlin as 23 and 25 hour days', () => {
-  // Days have 23 or 25 hours (92 or 100 quarter-hours) [S: REFERENCES.md, time series conventions].
+  // Days have 23 or 25 hours (92 or 100 quarter-hours) [S: time series conventions, docs/sources.md].
   it('reads the spring day 2026-03-29 as 23 hourly intervals', () => {
     // Local midnight 2026-03-29 is 23:00Z the day before (UTC+1); the next midnight is 22:00Z (UTC+2) [D].
     const rows = berlinRows('2026-03-28T23:00:00Z', '2026-03-29T22:00:00Z', 60, (i) => String(i));
@@ -120,7 +120,7 @@ describe('reads European spreadsheet exports and interval-ending labels', () => 
   });
 
   it('shifts interval-ending labels back one step, reading 24:00 as the end of the day', () => {
-    // Hour-ending labels 01:00..24:00 cover the day from 00:00 [S: REFERENCES.md, FIX hour-ending labels; ISO 8601 24:00].
+    // Hour-ending labels 01:00..24:00 cover the day from 00:00 [S: FIX hour-ending labels; ISO 8601 24:00, docs/sources.md].
     const rows = Array.from({ length: 24 }, (_, h) => `2026-01-15T${String(h + 1).padStart(2, '0')}:00:00+01:00,${h}`);
     const profile = accepted(csv('interval end,price', ...rows), { intervalEnding: true });
     expect(profile.startMs).toBe(at('2026-01-15T00:00:00+01:00'));

@@ -64,7 +64,7 @@ describe('gives the offset in force at an instant', () => {
   });
 
   it('formats the repeated Berlin hour with its two offsets, in chronological order', () => {
-    // [S: REFERENCES.md time series conventions] the repeated hour appears twice with different offsets.
+    // [S: time series conventions, docs/sources.md] the repeated hour appears twice with different offsets.
     const clock = clockOf('Europe/Berlin');
     expect([formatInstant(at('2026-10-25T00:30:00Z'), clock), formatInstant(at('2026-10-25T01:30:00Z'), clock)]).toEqual([
       '2026-10-25T02:30:00+02:00',

@@ -1,5 +1,5 @@
 /**
- * Who may read, upload and delete profiles (DESIGN section 5), and a profile
+ * Who may read, upload and delete profiles, and a profile
  * never serving another site (SECURITY.md: object-level checks).
  */
 import { beforeAll, describe, expect, it } from 'vitest';
@@ -7,8 +7,9 @@ import request from 'supertest';
 import { requireSiteProfile } from '../../server/profiles/profiles.service';
 import { createTestApp } from '../support/test-app';
 import { signInAs, type SignedInAgent } from '../support/auth';
-import { createSite, storedForSite, type CreatedSite } from '../sites/support';
-import { sample, upload } from './support';
+import { storedForSite } from '../sites/support';
+import { sample } from './support';
+import { type CreatedSite, createSite, upload } from '../support/api-fixtures';
 
 const app = createTestApp();
 let planner: SignedInAgent;

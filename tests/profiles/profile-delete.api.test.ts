@@ -1,6 +1,6 @@
 /**
  * Deleting a profile: allowed while no plan rests on it, refused with the
- * reason (409) while a submitted or approved plan does (issue 5), and refused
+ * reason (409) while a submitted or approved plan does, and refused
  * while a draft plan refers to it (the plans table's foreign key).
  */
 import { randomUUID } from 'node:crypto';
@@ -8,8 +8,9 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { getPool } from '../../server/db/client';
 import { createTestApp } from '../support/test-app';
 import { signInAs, type SignedInAgent } from '../support/auth';
-import { auditEvents, createSite, type CreatedSite } from '../sites/support';
-import { sample, upload } from './support';
+import { auditEvents } from '../sites/support';
+import { sample } from './support';
+import { type CreatedSite, createSite, upload } from '../support/api-fixtures';
 
 const app = createTestApp();
 let planner: SignedInAgent;

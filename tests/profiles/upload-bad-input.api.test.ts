@@ -1,5 +1,5 @@
 /**
- * Every bad input of issue 5 through the real upload endpoint: the right status,
+ * Every bad upload input through the real upload endpoint: the right status,
  * the line, nothing stored, the server still answering. The files and their
  * expected lines are the hand-written ones in sample-data/broken (its README).
  */
@@ -9,8 +9,9 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import request from 'supertest';
 import { createTestApp } from '../support/test-app';
 import { signInAs, type SignedInAgent } from '../support/auth';
-import { createSite, storedForSite, type CreatedSite } from '../sites/support';
-import { sample, sampleDir, upload } from './support';
+import { storedForSite } from '../sites/support';
+import { sample, sampleDir } from './support';
+import { type CreatedSite, createSite, upload } from '../support/api-fixtures';
 
 interface ExpectedCase {
   file: string;

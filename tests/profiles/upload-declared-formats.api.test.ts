@@ -6,8 +6,8 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { createTestApp } from '../support/test-app';
 import { signInAs, type SignedInAgent } from '../support/auth';
-import { createSite, type CreatedSite } from '../sites/support';
-import { upload } from './support';
+import { createSite, type CreatedSite } from '../support/api-fixtures';
+import { upload } from '../support/api-fixtures';
 
 const app = createTestApp();
 let planner: SignedInAgent;

@@ -9,8 +9,8 @@ import request from 'supertest';
 import { MAX_PROFILE_UPLOAD_BYTES } from '@shared/schemas/profile';
 import { createTestApp } from '../support/test-app';
 import { signInAs, type SignedInAgent } from '../support/auth';
-import { createSite, storedForSite, type CreatedSite } from '../sites/support';
-import { upload } from './support';
+import { storedForSite } from '../sites/support';
+import { type CreatedSite, createSite, upload } from '../support/api-fixtures';
 
 const app = createTestApp();
 let planner: SignedInAgent;

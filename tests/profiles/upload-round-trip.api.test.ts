@@ -9,8 +9,9 @@ import path from 'node:path';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { createTestApp } from '../support/test-app';
 import { signInAs, type SignedInAgent } from '../support/auth';
-import { auditEvents, createSite, type CreatedSite } from '../sites/support';
-import { readColumn, sample, sampleDir, upload } from './support';
+import { auditEvents } from '../sites/support';
+import { readColumn, sample, sampleDir } from './support';
+import { type CreatedSite, createSite, upload } from '../support/api-fixtures';
 
 const app = createTestApp();
 let planner: SignedInAgent;

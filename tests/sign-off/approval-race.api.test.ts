@@ -10,7 +10,8 @@ import { signInAs, type SignedInAgent } from '../support/auth';
 import { getDb } from '../../server/db/client';
 import { findPlanForSignOff as findPlan, markApproved } from '../../server/plans/plans.repo';
 import { planChecksum } from '../../server/sign-off/plan-checksum';
-import { createPlace, insertDraftPlan, sqlQuery, type Place } from './support';
+import { createPlace, insertDraftPlan, type Place } from './support';
+import { sqlRows } from '../support/api-fixtures';
 
 const app = createTestApp();
 let planner: SignedInAgent;
@@ -45,7 +46,7 @@ describe('20 parallel approvals of one plan', () => {
     expect(statuses.filter((s) => s === 409)).toHaveLength(19);
 
     const winner = responses.find((r) => r.status === 200);
-    const [row] = await sqlQuery<{ status: string; version: number; approval_comment: string; approved_by: string }>(
+    const [row] = await sqlRows<{ status: string; version: number; approval_comment: string; approved_by: string }>(
       'select status, version, approval_comment, approved_by from plans where id = $1',
       [plan.id],
     );
@@ -55,12 +56,12 @@ describe('20 parallel approvals of one plan', () => {
       approval_comment: winner?.body.approved.comment,
       approved_by: winner?.body.approved.id,
     });
-    const events = await sqlQuery<{ action: string }>(
+    const events = await sqlRows<{ action: string }>(
       "select action from plan_events where plan_id = $1 and action = 'approved'",
       [plan.id],
     );
     expect(events).toHaveLength(1);
-    const audit = await sqlQuery<{ action: string }>(
+    const audit = await sqlRows<{ action: string }>(
       "select action from audit_events where entity_id = $1 and action = 'plan.approved'",
       [plan.id],
     );
@@ -102,7 +103,7 @@ describe('the approving statement on its own', () => {
     const before = await findPlan(getDb(), plan.id);
     const base = { id: plan.id, version: 2, comment: null, checksum: 'c'.repeat(64), fingerprint: before?.fingerprint ?? '' };
     expect(await markApproved(getDb(), { ...base, userId: planner.user.id })).toBeNull();
-    await sqlQuery(`update plans set results = jsonb_set(results, '{steps,0,chargeKw}', '1') where id = $1`, [plan.id]);
+    await sqlRows(`update plans set results = jsonb_set(results, '{steps,0,chargeKw}', '1') where id = $1`, [plan.id]);
     expect(await markApproved(getDb(), { ...base, userId: (approvers[0] as SignedInAgent).user.id })).toBeNull();
   });
 });

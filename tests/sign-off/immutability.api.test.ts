@@ -9,7 +9,8 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { createTestApp } from '../support/test-app';
 import { signInAs, type SignedInAgent } from '../support/auth';
-import { createPlace, insertDraftPlan, sqlQuery, type Place } from './support';
+import { createPlace, insertDraftPlan, type Place } from './support';
+import { sqlRows } from '../support/api-fixtures';
 
 const app = createTestApp();
 let planner: SignedInAgent;
@@ -42,22 +43,22 @@ describe('the database refuses changes to an approved plan', () => {
     ['its status back to draft', `update plans set status = 'draft' where id = $1`],
     ['only its updated_at', `update plans set updated_at = now() where id = $1`],
   ])('UPDATE of %s', async (_what, statement) => {
-    await expect(sqlQuery(statement, [approvedId])).rejects.toThrow(refused);
+    await expect(sqlRows(statement, [approvedId])).rejects.toThrow(refused);
   });
 
   it('DELETE', async () => {
-    await expect(sqlQuery('delete from plans where id = $1', [approvedId])).rejects.toThrow(refused);
-    expect(await sqlQuery('select 1 from plans where id = $1', [approvedId])).toHaveLength(1);
+    await expect(sqlRows('delete from plans where id = $1', [approvedId])).rejects.toThrow(refused);
+    expect(await sqlRows('select 1 from plans where id = $1', [approvedId])).toHaveLength(1);
   });
 
   it('TRUNCATE while signed-off plans exist', async () => {
-    await expect(sqlQuery('truncate plans cascade')).rejects.toThrow(/holds signed-off plans/);
+    await expect(sqlRows('truncate plans cascade')).rejects.toThrow(/holds signed-off plans/);
   });
 
   it('marking it superseded without an approved successor of the same battery and window', async () => {
     const draft = await insertDraftPlan(place, planner.user.id, { fromHour: 0, hours: 6 });
     await expect(
-      sqlQuery(
+      sqlRows(
         "update plans set status = 'superseded', superseded_by = $2, superseded_at = now(), version = version + 1 where id = $1",
         [approvedId, draft.id],
       ),
@@ -71,10 +72,10 @@ describe('the database refuses changes to an approved plan', () => {
 
 describe('the sign-off history is append-only', () => {
   it('refuses UPDATE and DELETE of plan events', async () => {
-    await expect(sqlQuery("update plan_events set comment = 'rewritten' where plan_id = $1", [approvedId])).rejects.toThrow(
+    await expect(sqlRows("update plan_events set comment = 'rewritten' where plan_id = $1", [approvedId])).rejects.toThrow(
       /append-only/,
     );
-    await expect(sqlQuery('delete from plan_events where plan_id = $1', [approvedId])).rejects.toThrow(/append-only/);
+    await expect(sqlRows('delete from plan_events where plan_id = $1', [approvedId])).rejects.toThrow(/append-only/);
   });
 });
 
@@ -91,7 +92,7 @@ describe('superseding', () => {
     expect(response.status).toBe(200);
     expect(response.body.supersededPlanIds).toEqual([older]);
 
-    const rows = await sqlQuery<{ id: string; status: string; superseded_by: string | null }>(
+    const rows = await sqlRows<{ id: string; status: string; superseded_by: string | null }>(
       'select id, status, superseded_by from plans where id = any($1)',
       [[older, separate, otherBattery, newer.id]],
     );
@@ -104,24 +105,24 @@ describe('superseding', () => {
     const history = await planner.get(`/api/plans/${older}/sign-off`);
     expect(history.body.events.map((e: { action: string }) => e.action)).toEqual(['submitted', 'approved', 'superseded']);
     expect(history.body).toMatchObject({ status: 'superseded', superseded: { byPlanId: newer.id }, checksumVerified: true });
-    const audit = await sqlQuery<{ action: string }>('select action from audit_events where entity_id = $1 order by id', [older]);
+    const audit = await sqlRows<{ action: string }>('select action from audit_events where entity_id = $1 order by id', [older]);
     expect(audit.map((a) => a.action)).toEqual(['plan.submitted', 'plan.approved', 'plan.superseded']);
   });
 
   it('keeps a superseded plan final: no UPDATE or DELETE', async () => {
-    const [row] = await sqlQuery<{ id: string }>("select id from plans where status = 'superseded' and battery_id = $1 limit 1", [
+    const [row] = await sqlRows<{ id: string }>("select id from plans where status = 'superseded' and battery_id = $1 limit 1", [
       place.batteryId,
     ]);
     expect(row).toBeDefined();
-    await expect(sqlQuery("update plans set status = 'approved' where id = $1", [row?.id])).rejects.toThrow(refused);
-    await expect(sqlQuery('delete from plans where id = $1', [row?.id])).rejects.toThrow(refused);
+    await expect(sqlRows("update plans set status = 'approved' where id = $1", [row?.id])).rejects.toThrow(refused);
+    await expect(sqlRows('delete from plans where id = $1', [row?.id])).rejects.toThrow(refused);
   });
 
   it('does not supersede a plan that only touches the window end to end', async () => {
     // Windows are half-open [start, end): 12..18 after 6..12 shares no interval.
     const first = await approve({ fromHour: 6, hours: 6 });
     const second = await approve({ fromHour: 12, hours: 6 });
-    const rows = await sqlQuery<{ id: string; status: string }>('select id, status from plans where id = any($1)', [
+    const rows = await sqlRows<{ id: string; status: string }>('select id, status from plans where id = any($1)', [
       [first, second],
     ]);
     expect(rows.map((r) => r.status)).toEqual(['approved', 'approved']);

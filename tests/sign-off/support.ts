@@ -6,12 +6,10 @@
  */
 import { randomUUID } from 'node:crypto';
 import type TestAgent from 'supertest/lib/agent';
-import { expect } from 'vitest';
 import type { PlanInputs, PlanResults, PlanStep } from '@shared/schemas/plan';
-import { getDb, getPool } from '../../server/db/client';
+import { getDb } from '../../server/db/client';
 import { plans } from '../../server/plans/plans.schema';
-
-export const HOUR_MS = 3_600_000;
+import { createBattery, createSite, HOUR_MS, uploadSeries } from '../support/api-fixtures';
 
 export interface Place {
   siteId: string;
@@ -35,35 +33,18 @@ export function inventedPrices(): number[] {
 
 /** A site (name with a formula start, to exercise the export guard), a 1 MW / 2 MWh battery and a price profile. */
 export async function createPlace(planner: TestAgent, siteName = `=Harbour ${randomUUID().slice(0, 8)}`): Promise<Place> {
-  const site = await planner
-    .post('/api/sites')
-    .send({ name: siteName, timezone: 'Europe/Berlin', importLimitKw: 5000, exportLimitKw: 4000, currency: 'EUR' });
-  expect(site.status, JSON.stringify(site.body)).toBe(201);
-  const battery = await planner
-    .post(`/api/sites/${site.body.id}/batteries`)
-    .send({ name: 'Unit 1', energyKwh: 2000, powerChargeKw: 1000, powerDischargeKw: 1000 });
-  expect(battery.status, JSON.stringify(battery.body)).toBe(201);
+  const site = await createSite(planner, { name: siteName });
+  const batteryId = await createBattery(planner, site.id);
   const prices = inventedPrices();
   const pricesStartMs = Date.parse('2026-03-29T00:00:00+01:00');
-  const lines = ['time,price'];
-  // Times written in UTC: the parser accepts any consistent offset.
-  prices.forEach((p, i) => lines.push(`${new Date(pricesStartMs + i * HOUR_MS).toISOString()},${p}`));
-  const profile = await planner
-    .post(`/api/sites/${site.body.id}/profiles`)
-    .field('kind', 'price')
-    .field('unit', 'currency/MWh')
-    .field('name', 'Invented prices')
-    .attach('file', Buffer.from(`${lines.join('\n')}\n`), 'prices.csv');
-  expect(profile.status, JSON.stringify(profile.body)).toBe(201);
-  return {
-    siteId: site.body.id,
-    siteName,
-    timezone: 'Europe/Berlin',
-    batteryId: battery.body.id,
-    profileId: profile.body.id,
-    prices,
-    pricesStartMs,
-  };
+  const profileId = await uploadSeries(
+    planner,
+    site.id,
+    'price',
+    { values: prices, startMs: pricesStartMs, stepMinutes: 60 },
+    'Invented prices',
+  );
+  return { siteId: site.id, siteName, timezone: 'Europe/Berlin', batteryId, profileId, prices, pricesStartMs };
 }
 
 /**
@@ -225,9 +206,4 @@ export async function insertDraftPlan(
     .returning();
   if (!row) throw new Error('no plan row');
   return { id: row.id, version: row.version, deliveryStart: start, deliveryEnd: end };
-}
-
-/** Raw SQL against the test database, outside the application. */
-export async function sqlQuery<T extends Record<string, unknown>>(text: string, params: unknown[] = []): Promise<T[]> {
-  return (await getPool().query<T>(text, params)).rows;
 }

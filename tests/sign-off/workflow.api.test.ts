@@ -11,7 +11,8 @@ import canonicalize from 'canonicalize';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { createTestApp, testOrigin } from '../support/test-app';
 import { createUser, signInAs, waitForMail, type SignedInAgent } from '../support/auth';
-import { createPlace, insertDraftPlan, sqlQuery, type Place } from './support';
+import { createPlace, insertDraftPlan, type Place } from './support';
+import { sqlRows } from '../support/api-fixtures';
 
 const app = createTestApp();
 let planner: SignedInAgent;
@@ -26,7 +27,7 @@ beforeAll(async () => {
 
 const auditActions = async (planId: string) =>
   (
-    await sqlQuery<{ action: string; actor_id: string }>(
+    await sqlRows<{ action: string; actor_id: string }>(
       'select action, actor_id from audit_events where entity_id = $1 order by id',
       [planId],
     )
@@ -34,9 +35,7 @@ const auditActions = async (planId: string) =>
 
 /** SHA-256 of RFC 8785 JSON of {planId, inputs, results} as stored, computed without the app's code. */
 async function independentChecksum(planId: string): Promise<string> {
-  const [row] = await sqlQuery<{ inputs: unknown; results: unknown }>('select inputs, results from plans where id = $1', [
-    planId,
-  ]);
+  const [row] = await sqlRows<{ inputs: unknown; results: unknown }>('select inputs, results from plans where id = $1', [planId]);
   return createHash('sha256')
     .update(canonicalize({ planId, inputs: row?.inputs, results: row?.results }) ?? '', 'utf8')
     .digest('hex');
@@ -49,7 +48,7 @@ describe('a plan going from draft to approved', () => {
   it('is submitted by a planner, with the version they looked at', async () => {
     const plan = await insertDraftPlan(place, planner.user.id);
     planId = plan.id;
-    const [{ max } = { max: 0 }] = await sqlQuery<{ max: number }>('select coalesce(max(id), 0)::int as max from mail_outbox');
+    const [{ max } = { max: 0 }] = await sqlRows<{ max: number }>('select coalesce(max(id), 0)::int as max from mail_outbox');
     lastMailId = max;
     const response = await planner
       .post(`/api/plans/${planId}/submit`)
@@ -108,7 +107,7 @@ describe('a plan going from draft to approved', () => {
       checksumVerified: true,
     });
     expect(response.body.checksum).toBe(await independentChecksum(planId));
-    const [row] = await sqlQuery<{ approved_by: string; approved_at: Date; approval_comment: string }>(
+    const [row] = await sqlRows<{ approved_by: string; approved_at: Date; approval_comment: string }>(
       'select approved_by, approved_at, approval_comment from plans where id = $1',
       [planId],
     );
@@ -169,7 +168,7 @@ describe('segregation of duties', () => {
     expect(approve.status).toBe(403);
     expect(approve.body.error).toMatch(/You submitted this plan/);
     expect((await admin.post(`/api/plans/${plan.id}/reject`).send({ version: 2, comment: 'no' })).status).toBe(403);
-    const [row] = await sqlQuery<{ status: string }>('select status from plans where id = $1', [plan.id]);
+    const [row] = await sqlRows<{ status: string }>('select status from plans where id = $1', [plan.id]);
     expect(row?.status).toBe('submitted');
     // Refused authorisations are audited (SECURITY.md "Logging and audit").
     expect(await auditActions(plan.id)).toEqual([
@@ -183,12 +182,12 @@ describe('segregation of duties', () => {
     const plan = await insertDraftPlan(place, planner.user.id);
     await planner.post(`/api/plans/${plan.id}/submit`).send({ version: 1 });
     await expect(
-      sqlQuery(
+      sqlRows(
         "update plans set status = 'approved', approved_by = submitted_by, approved_at = now(), checksum = repeat('a', 64) where id = $1",
         [plan.id],
       ),
     ).rejects.toThrow(/plans_approver_not_submitter/);
-    await expect(sqlQuery('update plans set rejected_by = submitted_by where id = $1', [plan.id])).rejects.toThrow(
+    await expect(sqlRows('update plans set rejected_by = submitted_by where id = $1', [plan.id])).rejects.toThrow(
       /plans_rejecter_not_submitter/,
     );
   });
@@ -199,7 +198,7 @@ describe('segregation of duties', () => {
       .post(`/api/plans/${plan.id}/submit`)
       .send({ version: 1, status: 'approved', approvedBy: approver.user.id });
     expect(response.status).toBe(422);
-    const [row] = await sqlQuery<{ status: string }>('select status from plans where id = $1', [plan.id]);
+    const [row] = await sqlRows<{ status: string }>('select status from plans where id = $1', [plan.id]);
     expect(row?.status).toBe('draft');
   });
 });
@@ -217,7 +216,7 @@ describe('a rejected plan', () => {
   });
 
   it('is rejected with the comment, and the submitter is told why', async () => {
-    const [{ max } = { max: 0 }] = await sqlQuery<{ max: number }>('select coalesce(max(id), 0)::int as max from mail_outbox');
+    const [{ max } = { max: 0 }] = await sqlRows<{ max: number }>('select coalesce(max(id), 0)::int as max from mail_outbox');
     const response = await approver
       .post(`/api/plans/${planId}/reject`)
       .send({ version: 2, comment: 'SoC floor too low for the evening peak.' });
@@ -244,7 +243,7 @@ describe('a rejected plan', () => {
       [planId, copyId].map(
         async (id) =>
           (
-            await sqlQuery<{ inputs: unknown; results: unknown; status: string }>(
+            await sqlRows<{ inputs: unknown; results: unknown; status: string }>(
               'select inputs, results, status from plans where id = $1',
               [id],
             )
@@ -293,10 +292,10 @@ describe('bad requests', () => {
     const disabled = await createUser('approver', { disabled: true });
     const invited = await createUser('approver', { invited: true });
     const plan = await insertDraftPlan(place, planner.user.id);
-    const [{ max } = { max: 0 }] = await sqlQuery<{ max: number }>('select coalesce(max(id), 0)::int as max from mail_outbox');
+    const [{ max } = { max: 0 }] = await sqlRows<{ max: number }>('select coalesce(max(id), 0)::int as max from mail_outbox');
     await planner.post(`/api/plans/${plan.id}/submit`).send({ version: 1 });
     await waitForMail(approver.user.email, { sinceId: max });
-    const sent = await sqlQuery<{ to: string }>('select "to" from mail_outbox where id > $1', [max]);
+    const sent = await sqlRows<{ to: string }>('select "to" from mail_outbox where id > $1', [max]);
     expect(sent.map((m) => m.to).join(' ')).not.toMatch(new RegExp(`${disabled.email}|${invited.email}`));
   });
 });

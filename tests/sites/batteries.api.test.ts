@@ -1,7 +1,8 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { createTestApp } from '../support/test-app';
 import { signInAs, type SignedInAgent } from '../support/auth';
-import { auditEvents, createSite, storedForSite, type CreatedSite } from './support';
+import { auditEvents, storedForSite } from './support';
+import { type CreatedSite, createSite } from '../support/api-fixtures';
 
 const app = createTestApp();
 let planner: SignedInAgent;
@@ -31,7 +32,7 @@ describe('creating batteries', () => {
     expect(events[0]?.details.defaulted).toContain('efficiencyCharge');
   });
 
-  it('stores settings outside common practice but lists a warning for each (DESIGN section 8)', async () => {
+  it('stores settings outside common practice but lists a warning for each', async () => {
     const response = await create({
       name: 'Aggressive',
       energyKwh: 1000,

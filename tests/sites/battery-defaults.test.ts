@@ -7,7 +7,7 @@ describe('lithium-ion battery defaults', () => {
   const defaults = lithiumIonDefaults(4000);
 
   it('gives a round trip of 85 % split evenly between charging and discharging', () => {
-    // [S: NREL ATB 2020] round trip 0.85, split √0.85 per direction (REFERENCES.md);
+    // [S: NREL ATB 2020] round trip 0.85, split √0.85 per direction (docs/sources.md);
     // [D] rounding each direction to 3 decimals moves the product by under 1e-4.
     expect(defaults.efficiencyCharge).toBe(defaults.efficiencyDischarge);
     expect(defaults.efficiencyCharge * defaults.efficiencyDischarge).toBeCloseTo(0.85, 3);
@@ -61,7 +61,7 @@ describe('battery validation and warnings', () => {
   });
 
   it('warns, without refusing, on a 0–100 % window, efficiencies above 0.98 and C-rates above 1', () => {
-    // DESIGN section 8 names these three as outside common practice.
+    // The cautions name these three as outside common practice (docs/model.md).
     const risky = {
       ...base,
       socMinPct: 0,

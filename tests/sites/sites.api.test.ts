@@ -2,7 +2,8 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import request from 'supertest';
 import { createTestApp } from '../support/test-app';
 import { signInAs, type SignedInAgent } from '../support/auth';
-import { auditEvents, createSite, uniqueName } from './support';
+import { auditEvents } from './support';
+import { createSite, uniqueName } from '../support/api-fixtures';
 
 const app = createTestApp();
 let planner: SignedInAgent;
@@ -125,7 +126,7 @@ describe('editing sites', () => {
   });
 });
 
-describe('who may change sites (DESIGN section 5)', () => {
+describe('who may change sites', () => {
   it('lets planners and admins create and edit, and refuses viewers and approvers with 403', async () => {
     const site = await createSite(admin);
     expect((await admin.patch(`/api/sites/${site.id}`).send({ currency: 'USD' })).status).toBe(200);

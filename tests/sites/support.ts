@@ -1,30 +1,5 @@
-/** Helpers for the site, battery and profile API tests (real app, real test database). */
-import { randomUUID } from 'node:crypto';
-import type TestAgent from 'supertest/lib/agent';
-import { expect } from 'vitest';
+/** What the site, battery and profile API tests read back from the real test database. */
 import { getPool } from '../../server/db/client';
-
-/** A site name no other test (or earlier run) uses, so tests never collide on the unique name. */
-export const uniqueName = (prefix: string) => `${prefix} ${randomUUID().slice(0, 8)}`;
-
-export interface CreatedSite {
-  id: string;
-  name: string;
-  timezone: string;
-}
-
-export async function createSite(agent: TestAgent, fields: Record<string, unknown> = {}): Promise<CreatedSite> {
-  const response = await agent.post('/api/sites').send({
-    name: uniqueName('Test site'),
-    timezone: 'Europe/Berlin',
-    importLimitKw: 5000,
-    exportLimitKw: 4000,
-    currency: 'EUR',
-    ...fields,
-  });
-  expect(response.status, JSON.stringify(response.body)).toBe(201);
-  return response.body as CreatedSite;
-}
 
 /** Rows stored for a site: profiles, and audit events naming the site (uploads, deletes, battery changes). */
 export async function storedForSite(siteId: string) {

@@ -1,54 +1,23 @@
 /**
  * Horizon studies through the API and a background job: results against an
  * independent LP solver, progress to the end, lists with status filters, and
- * the bad inputs of issue 6 refused with nothing stored.
+ * bad inputs refused with nothing stored.
  */
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { beforeAll, describe, expect, it } from 'vitest';
 import type { Study, StudyCreated } from '@shared/schemas/study';
-import { createTestApp } from '../support/test-app';
-import { signInAs, type SignedInAgent } from '../support/auth';
-import type { JobWorker } from '../../server/jobs/job-worker';
-import { optimalArbitrageProfit } from '../jobs/independent-lp';
-import {
-  createPlace,
-  dailyPrices,
-  HOUR_MS,
-  sqlRows,
-  startTestWorker,
-  stopTestWorker,
-  useOwnJobQueues,
-  waitUntilFinished,
-  type Place,
-} from '../jobs/support';
+import { optimalArbitrageProfit } from '../support/reference-lp';
+import { HOUR_MS, iso, sqlRows } from '../support/api-fixtures';
+import { createPlace, dailyPrices, exactPathBattery, type Place, useJobsTestFile, waitUntilFinished } from '../support/jobs';
 
-useOwnJobQueues('study_api');
-const app = createTestApp();
-let planner: SignedInAgent;
+const jobs = useJobsTestFile('study_api');
 let place: Place;
-let worker: JobWorker | null = null;
 const start = Date.parse('2026-03-02T00:00:00Z');
-const iso = (ms: number) => new Date(ms).toISOString();
 const prices = dailyPrices(4).map((p, i) => p + ((i * 29) % 13) - 6);
-const battery = {
-  energyKwh: 2000,
-  powerChargeKw: 1000,
-  powerDischargeKw: 1000,
-  efficiencyCharge: 0.93,
-  efficiencyDischarge: 0.93,
-  socMinPct: 10,
-  socMaxPct: 90,
-  socInitialPct: 50,
-  selfDischargePctPerHour: 0,
-  degradationCostPerMwh: 0,
-  maxCyclesPerDay: null,
-};
+const battery = exactPathBattery({ efficiencyCharge: 0.93, efficiencyDischarge: 0.93 });
 
 beforeAll(async () => {
-  planner = await signInAs(app, 'planner');
-  place = await createPlace(planner, { prices: { values: prices, startMs: start, stepMinutes: 60 }, battery });
-  worker = await startTestWorker();
+  place = await createPlace(jobs.planner, { prices: { values: prices, startMs: start, stepMinutes: 60 }, battery });
 });
-afterAll(async () => stopTestWorker(worker));
 
 const body = (over: Record<string, unknown> = {}) => ({
   batteryId: place.batteryId,
@@ -68,12 +37,12 @@ describe('a horizon study computed by a background job', () => {
   let study: Study;
 
   beforeAll(async () => {
-    const created = await planner.post('/api/studies').send(body());
+    const created = await jobs.planner.post('/api/studies').send(body());
     expect(created.status, JSON.stringify(created.body)).toBe(202);
     const { study: queued, job } = created.body as StudyCreated;
     expect(job.state).toBe('queued');
     expect(queued.status).toBe('queued');
-    study = await waitUntilFinished<Study>(planner, `/api/studies/${queued.id}`);
+    study = await waitUntilFinished<Study>(jobs.planner, `/api/studies/${queued.id}`);
   });
 
   it('finishes with every run and progress at 100 %', () => {
@@ -118,14 +87,14 @@ describe('a horizon study computed by a background job', () => {
   });
 
   it('is listed for its site, with status filters and the recommendation but no runs', async () => {
-    const list = await planner.get(`/api/studies?siteId=${place.siteId}`);
+    const list = await jobs.planner.get(`/api/studies?siteId=${place.siteId}`);
     expect(list.status).toBe(200);
     const item = (list.body as Study[]).find((s) => s.id === study.id)!;
     expect(item.recommendation?.horizonHours).toBe(study.results!.recommendation!.horizonHours);
     expect(item.results).toBeUndefined();
-    const failed = await planner.get(`/api/studies?siteId=${place.siteId}&status=failed`);
+    const failed = await jobs.planner.get(`/api/studies?siteId=${place.siteId}&status=failed`);
     expect((failed.body as Study[]).some((s) => s.id === study.id)).toBe(false);
-    expect((await planner.get('/api/studies?status=lost')).status).toBe(422);
+    expect((await jobs.planner.get('/api/studies?status=lost')).status).toBe(422);
   });
 
   it('records one study.created and one study.computed audit event', async () => {
@@ -139,7 +108,7 @@ describe('a horizon study computed by a background job', () => {
 describe('POST /api/studies with bad input', () => {
   async function expectRefused(over: Record<string, unknown>, path: string, message: RegExp) {
     const before = await storedStudies();
-    const response = await planner.post('/api/studies').send(body(over));
+    const response = await jobs.planner.post('/api/studies').send(body(over));
     expect(response.status, JSON.stringify(response.body)).toBe(422);
     const issue = (response.body.issues as { path: string; message: string }[]).find((i) => i.path === path);
     expect(issue, JSON.stringify(response.body.issues)).toBeDefined();
@@ -160,7 +129,7 @@ describe('POST /api/studies with bad input', () => {
   });
 
   it('refuses a profile from another site', async () => {
-    const other = await createPlace(planner, { prices: { values: prices, startMs: start, stepMinutes: 60 } });
+    const other = await createPlace(jobs.planner, { prices: { values: prices, startMs: start, stepMinutes: 60 } });
     await expectRefused({ priceProfileId: other.priceProfileId }, 'priceProfileId', /belongs to another site/);
   });
 

@@ -9,7 +9,7 @@ import { lockActiveAdmins } from '../../server/users/users.repo';
 import { createTestApp } from '../support/test-app';
 import { anonymousAgent, signInAs } from '../support/auth';
 import { bearer } from '../support/tokens';
-import { uniqueName } from '../sites/support';
+import { uniqueName } from '../support/api-fixtures';
 
 const app = createTestApp();
 

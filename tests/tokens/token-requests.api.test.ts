@@ -11,7 +11,7 @@ import { logger } from '../../server/logger';
 import { createTestApp, testOrigin } from '../support/test-app';
 import { anonymousAgent, signInAs } from '../support/auth';
 import { bearer, createToken, expireToken, secretOf } from '../support/tokens';
-import { uniqueName } from '../sites/support';
+import { uniqueName } from '../support/api-fixtures';
 
 const app = createTestApp();
 

@@ -1,6 +1,6 @@
 /**
  * Reads a command's inputs: battery and site JSON, CSV profiles through the shared
- * profile reader (DESIGN section 4 rules), aligned on one grid. Every problem
+ * profile reader (the same upload rules), aligned on one grid. Every problem
  * becomes a CliInputError that names the file and line.
  */
 import { readFileSync } from 'node:fs';

@@ -1,5 +1,5 @@
 /**
- * Battery and site JSON files of the command line (issue 4's keys), checked key
+ * Battery and site JSON files of the command line (the same keys), checked key
  * by key so a missing or mistyped key is named.
  */
 import { readFileSync } from 'node:fs';

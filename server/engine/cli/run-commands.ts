@@ -1,7 +1,8 @@
 /**
- * The four commands of the command line (issue 4's contract). Each returns the
+ * The four commands of the command line (its contract). Each returns the
  * JSON document for stdout or throws CliInputError for bad input.
  */
+import { batteryWarningMessages } from '@shared/schemas/battery-warnings';
 import type { AlignedInputs } from '../inputs/align-inputs';
 import { stepIndexOf } from '../inputs/problem-for';
 import { solveSteadyCycle } from '../steady/solve-steady-cycle';
@@ -9,7 +10,6 @@ import type { DaySelection } from '../steady/representative-day';
 import { solveReferencePath } from '../reference/solve-reference-path';
 import { summarizePath } from '../reference/path-summary';
 import { solvePlan } from '../plan/solve-plan';
-import { settingWarnings } from '../plan/plan-flags';
 import { runHorizonStudy } from '../study/run-horizon-study';
 import { parseTerminal, terminalLabel, type TerminalChoice } from '../terminal/terminal-choice';
 import { steadyCyclingCheck } from '../plan/cycling-check';
@@ -84,7 +84,7 @@ export function steadyCommand(inputs: AlignedInputs, args: ParsedArgs) {
     days: c.days,
     dstDays: c.dstDays,
     notes: c.notes,
-    warnings: [...settingWarnings(inputs.battery), ...(cycling.message ? [cycling.message] : [])],
+    warnings: [...batteryWarningMessages(inputs.battery, inputs.site), ...(cycling.message ? [cycling.message] : [])],
     cycling,
     slots: c.slots.map(({ time, chargeKw, dischargeKw, socKwh, storedEnergyValue, storedEnergyValueRange, priceImport }) => ({
       time,
@@ -123,7 +123,7 @@ export function referenceCommand(inputs: AlignedInputs, args: ParsedArgs) {
     ...summarizePath(inputs, solution, start),
     ...netKeys(netFigures),
     simultaneousSteps: solution.simultaneousSteps ?? [],
-    warnings: [...settingWarnings(inputs.battery), ...limitWarnings(inputs)],
+    warnings: [...batteryWarningMessages(inputs.battery, inputs.site), ...limitWarnings(inputs)],
     ...limitOutput(inputs, {
       from: start,
       to: end,

@@ -1,6 +1,6 @@
 /**
  * The single integration point between the LP path and the exact
- * dynamic-programming path (issue 9, `server/engine/dp/`). `auto` asks
+ * dynamic-programming path (`server/engine/dp/`). `auto` asks
  * canSolveWithDp first and uses the dynamic program only where it is exact.
  * Reserves, a ramp rate and a switching cost are refused here before the DP is
  * asked, since it models none of them; availability alone stays on the DP.

@@ -7,7 +7,7 @@
  * right-hand side, i.e. per kWh handed to the battery for free at the end of
  * step t, so −y_t is the value of stored energy per kWh, ×1000 per MWh.
  */
-import type { DispatchProblem, DispatchSolution } from '../types';
+import type { DispatchProblem, DispatchSolution, PowerSeries, ScheduleSeriesBuilder } from '../types';
 import type { LpResult } from '../lp/lp-model';
 import type { DispatchModel } from '../model/build-dispatch-model';
 import { scheduleCost } from './schedule-cost';
@@ -15,18 +15,10 @@ import { readLimits } from '../limits/read-limits';
 
 const clip = (v: number, lo: number, hi: number) => (v < lo ? lo : v > hi ? hi : v);
 
-export interface SolutionSeries {
-  chargeKw: number[];
-  dischargeKw: number[];
-  gridImportKw: number[];
-  gridExportKw: number[];
-  socKwh: number[];
-}
-
-export function readSeries(problem: DispatchProblem, model: DispatchModel, x: Float64Array): SolutionSeries {
+export function readSeries(problem: DispatchProblem, model: DispatchModel, x: Float64Array): ScheduleSeriesBuilder {
   const { layout, lp } = model;
   const n = layout.steps;
-  const out: SolutionSeries = {
+  const out: ScheduleSeriesBuilder = {
     chargeKw: new Array<number>(n),
     dischargeKw: new Array<number>(n),
     gridImportKw: new Array<number>(n),
@@ -73,7 +65,7 @@ export function storedEnergyValues(model: DispatchModel, rowDual: Float64Array):
 }
 
 /** Steps with both charge and discharge above 1e-6 of the power rating. */
-export function simultaneousSteps(problem: DispatchProblem, series: SolutionSeries): number[] {
+export function simultaneousSteps(problem: DispatchProblem, series: PowerSeries): number[] {
   const tol = 1e-6 * Math.max(1, problem.battery.powerChargeKw, problem.battery.powerDischargeKw);
   const steps: number[] = [];
   for (let t = 0; t < series.chargeKw.length; t++) {

@@ -1,5 +1,5 @@
 /**
- * Money paid for a schedule, as DESIGN section 3 defines it (terminal value
+ * Money paid for a schedule, as docs/model.md defines it (terminal value
  * excluded): Σ (π_imp·m − π_exp·x)·Δt/1000 + c_deg·Σ d·Δt/1000 + D·max m.
  * Used for plans and for the realised cost of closed-loop runs alike, so both are
  * measured with the same rule.

@@ -64,11 +64,11 @@ export interface DpClosedLoop {
 }
 
 /**
- * Prepares receding-horizon runs on the exact dynamic program (DESIGN
- * section 1: re-plan every `replanSteps` over `horizonSteps`, apply only the
- * first steps). Build it once per problem and call `run` for each horizon and
- * terminal rule; warm reuse between consecutive windows makes a run cost
- * roughly the decision horizon per window instead of the full lookahead.
+ * Prepares receding-horizon runs on the exact dynamic program (re-plan every
+ * `replanSteps` over `horizonSteps`, apply only the first steps). Build it
+ * once per problem and call `run` for each horizon and terminal rule; warm
+ * reuse between consecutive windows makes a run cost roughly the decision
+ * horizon per window instead of the full lookahead.
  *
  * @example
  *   const loop = createDpClosedLoop(problem);

@@ -30,7 +30,7 @@ export function makeContext(problem: DispatchProblem, stages?: StageTable): DpCo
 }
 
 /**
- * Writes the terminal value function V_N into `slot` (DESIGN section 2):
+ * Writes the terminal value function V_N into `slot` (docs/model.md):
  * `free` is 0 on the window, `steady-value` is −λ̄·e/1000, `target` is 0 on
  * [max(E_min, target), E_max], `cyclic` is the single point e_0 of the window.
  * Returns false when the rule leaves no admissible end energy.

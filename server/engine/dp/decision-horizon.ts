@@ -21,7 +21,7 @@ export type DecisionHorizon =
   | { readonly ok: false; readonly error: string };
 
 /**
- * The decision horizon (issue 9): for the plan's first `steps` decisions, the
+ * The decision horizon: for the plan's first `steps` decisions, the
  * backward depth after which V stops changing, i.e. how far ahead prices and
  * loads actually matter. For every truncation D′ from the end down, a backward
  * pass from the problem's terminal rule at D′ runs until its V_t equals the

@@ -1,5 +1,5 @@
 /**
- * The exact dynamic-programming path of the dispatch engine (DESIGN section 3):
+ * The exact dynamic-programming path of the dispatch engine (docs/model.md):
  * for one battery whose steps are coupled only through the SoC, the cost-to-go
  * is convex piecewise linear in the stored energy and a backward pass of
  * sorted-slope merges solves the LP exactly, with the stored-energy value at

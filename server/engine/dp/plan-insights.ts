@@ -3,7 +3,7 @@ import { decisionHorizon } from './decision-horizon';
 import { solveDispatchDp } from './solve';
 import { valueCurves } from './value-curves';
 
-/** What the exact DP adds to a plan (issue 9): the decision horizon and value curves. */
+/** What the exact DP adds to a plan: the decision horizon and value curves. */
 export interface DpPlanInsights {
   /**
    * Lookahead from the delivery start (hours) after which no price or load

@@ -46,7 +46,7 @@ export function emptyDpSolution(status: SolveStatus, message: string): DpSolutio
 
 /**
  * Solves the dispatch problem exactly by dynamic programming on convex
- * piecewise-linear value functions (DESIGN section 3). Same series and
+ * piecewise-linear value functions (docs/model.md). Same series and
  * meanings as the LP: cost includes degradation and excludes the terminal
  * value; storedEnergyValue[t] is the value (currency/MWh) of one more MWh at
  * the end of step t, chosen inside the set of optimal LP duals. Models it

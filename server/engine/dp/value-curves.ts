@@ -14,8 +14,8 @@ export type ValueCurveSource = DpValueFunctions | (DispatchSolution & { readonly
 
 /**
  * Value curves: −1000·V_t′(e), the value of one more MWh held at time t as a
- * function of the SoC, for each requested time (DESIGN section 2, stored-energy
- * value; issue 9). `times` must be step starts of the problem or its end.
+ * function of the SoC, for each requested time (the stored-energy
+ * value, docs/model.md). `times` must be step starts of the problem or its end.
  * Without value functions in `source`, the problem is solved again to get them.
  * Returns an error message instead when a time is off the grid or the problem
  * has no DP solution.

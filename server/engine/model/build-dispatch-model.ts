@@ -1,5 +1,5 @@
 /**
- * The dispatch LP of DESIGN section 3 as plain data. Units: kW, kWh, hours; the
+ * The dispatch LP of docs/model.md as plain data. Units: kW, kWh, hours; the
  * objective is in currency (price per MWh × kW × h / 1000).
  *
  * Per step t: charge c_t, discharge d_t, [grid import m_t, export x_t], energy e_{t+1}.

@@ -1,8 +1,9 @@
 /**
  * Flags a planner can act on, in plain words, from a plan's turnpike figures and
- * schedule, plus warnings on settings outside common practice (DESIGN section 8).
+ * schedule. Warnings on the battery's settings come from the one shared rule set
+ * (shared/schemas/battery-warnings.ts).
  */
-import type { BatteryParams, DispatchSolution } from '../types';
+import type { DispatchSolution } from '../types';
 import type { PlanTurnpike } from './plan-turnpike';
 
 export interface FlagContext {
@@ -54,25 +55,4 @@ export function planFlags(tp: PlanTurnpike, plan: DispatchSolution, ctx: FlagCon
     );
   }
   return flags;
-}
-
-export function settingWarnings(b: BatteryParams): string[] {
-  const warnings: string[] = [];
-  if (b.socMinPct <= 0 && b.socMaxPct >= 100) {
-    warnings.push(
-      "The SoC window 0–100 % is outside common practice (10–90 % is common); check the battery maker's operating limits.",
-    );
-  }
-  if (b.efficiencyCharge > 0.98 || b.efficiencyDischarge > 0.98) {
-    warnings.push(
-      'An efficiency above 0.98 is unusually high for a battery (85 % round trip is representative for lithium-ion); check the parameters.',
-    );
-  }
-  const rate = Math.max(b.powerChargeKw, b.powerDischargeKw) / b.energyKwh;
-  if (rate > 4) {
-    warnings.push(
-      `A C-rate of ${rate.toFixed(1)} (power / energy) is above what stationary batteries are usually rated for; check the battery's rating.`,
-    );
-  }
-  return warnings;
 }

@@ -3,7 +3,7 @@
  * cycle repeated by local time of day, and the commit window against a plan of a
  * much longer lookahead from the same state. Stored-energy values are compared
  * only where both SoCs are strictly inside the window, because the dual is not
- * unique at a bound (REFERENCES: degeneracy note).
+ * unique at a bound (docs/sources.md: degeneracy).
  */
 import type { DispatchSolution } from '../types';
 import type { AlignedInputs } from '../inputs/align-inputs';

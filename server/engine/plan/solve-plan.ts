@@ -15,7 +15,8 @@ import { solveSteadyCycle, type SteadyCycle } from '../steady/solve-steady-cycle
 import type { DaySelection } from '../steady/representative-day';
 import { terminalRuleFor, type TerminalChoice } from '../terminal/terminal-choice';
 import { DEFAULT_BAND_FRACTION } from '../turnpike/turnpike-figures';
-import { planFlags, settingWarnings } from './plan-flags';
+import { batteryWarningMessages } from '@shared/schemas/battery-warnings';
+import { planFlags } from './plan-flags';
 import { planTurnpike, type PlanTurnpike } from './plan-turnpike';
 import { planInsights, type DpPlanInsights } from '../dp';
 import { localTimeLabel } from '../time/zone-offsets';
@@ -169,8 +170,8 @@ export function solvePlan(inputs: AlignedInputs, request: PlanRequest): PlanResu
       solution: main.solution,
       steady,
       turnpike: tp,
-      // Heavy cycling is a caution about the battery (DESIGN section 8), beside the settings outside common practice.
-      warnings: [...settingWarnings(inputs.battery), ...(cycling.message ? [cycling.message] : [])],
+      // Heavy cycling is a caution about the battery (docs/model.md), beside the settings outside common practice.
+      warnings: [...batteryWarningMessages(inputs.battery, inputs.site), ...(cycling.message ? [cycling.message] : [])],
       dpInsights,
       netFigures: net,
       cycling,

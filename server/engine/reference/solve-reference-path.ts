@@ -1,6 +1,6 @@
 /**
  * The reference path: one LP over a whole period [from, to) from a given initial
- * SoC with a chosen terminal rule (DESIGN section 2: the longest horizon we can
+ * SoC with a chosen terminal rule (the longest horizon we can
  * solve). Horizon studies compare their closed-loop runs with it.
  */
 import type { DispatchSolution, TerminalRule } from '../types';

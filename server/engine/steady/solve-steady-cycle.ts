@@ -1,6 +1,6 @@
 /**
  * The steady cycle: the optimal periodic day for the representative day, solved
- * with e_N = e_0 and e_0 free (DESIGN section 3). With flat prices it reduces to
+ * with e_N = e_0 and e_0 free (docs/model.md). With flat prices it reduces to
  * the optimal steady state (no trade, SoC mid-window by the tie-break rule).
  * A demand charge applies to the period's peak, so one representative day
  * carries 1/days of it.

@@ -12,6 +12,7 @@
  * (no demand charge, no throughput cap, no ramp rate or switching cost) and that
  * earn nothing beside the schedule (no reserves).
  */
+import type { ScheduleSeries, ScheduleSeriesBuilder } from '../types';
 import type { AlignedInputs } from '../inputs/align-inputs';
 import { usableEnergyKwh } from '../inputs/problem-for';
 import { scheduleCost } from '../dispatch/schedule-cost';
@@ -32,18 +33,11 @@ export function canRunInParallel(inputs: AlignedInputs, steps: number, overlap: 
   );
 }
 
-interface Stitched {
-  chargeKw: number[];
-  dischargeKw: number[];
-  gridImportKw: number[];
-  gridExportKw: number[];
-  socKwh: number[];
+interface Stitched extends ScheduleSeriesBuilder {
   plans: PlanLog;
 }
 
-type SeriesOf = Pick<ClosedLoopRun, 'chargeKw' | 'dischargeKw' | 'gridImportKw' | 'gridExportKw' | 'socKwh'> & {
-  readonly plans: PlanLog;
-};
+type SeriesOf = ScheduleSeries & { readonly plans: PlanLog };
 
 /** A copy of steps [runFrom, at) of `run` (which starts at grid step `runFrom`). */
 function cut(run: SeriesOf, runFrom: number, at: number): Stitched {

@@ -6,7 +6,7 @@
  * charge sees the peak reached so far and a throughput cap the energy already
  * discharged that day, so each window prices only what it can still change.
  */
-import type { DispatchProblem, DispatchSolution } from '../types';
+import type { DispatchProblem, DispatchSolution, PowerSeries, ScheduleSeries } from '../types';
 import { createDpClosedLoop, type DpClosedLoop, type DpWindowPlan } from '../dp';
 import type { AlignedInputs } from '../inputs/align-inputs';
 import type { LpBasis } from '../lp/lp-model';
@@ -49,7 +49,8 @@ export interface PlanLog {
   readonly intoCommitted: number[];
 }
 
-export interface ClosedLoopRun {
+/** The applied schedule over [from, to) and the run's figures. */
+export interface ClosedLoopRun extends ScheduleSeries {
   readonly status: DispatchSolution['status'];
   readonly message?: string;
   /** Realised money paid over [from, to), same rule as the reference path. */
@@ -57,11 +58,6 @@ export interface ClosedLoopRun {
   readonly equivalentCycles: number;
   readonly solves: number;
   readonly seconds: number;
-  readonly chargeKw: readonly number[];
-  readonly dischargeKw: readonly number[];
-  readonly gridImportKw: readonly number[];
-  readonly gridExportKw: readonly number[];
-  readonly socKwh: readonly number[];
   /** Mean over open-loop plans of the share of steps within the band of the reference. */
   readonly nearSteadyShare: number;
   readonly meanLeavingArcSteps: number;
@@ -108,11 +104,11 @@ export function runClosedLoop(inputs: AlignedInputs, req: ClosedLoopRequest): Cl
   const band = req.bandFraction ?? DEFAULT_BAND_FRACTION;
   if (req.method !== 'lp' && checkDp(whole).ok) return runClosedLoopOnDp(inputs, req, whole, usable, band, elapsed);
   const session = new HighsSession();
-  const applied = {
-    chargeKw: [] as number[],
-    dischargeKw: [] as number[],
-    gridImportKw: [] as number[],
-    gridExportKw: [] as number[],
+  const applied: { -readonly [K in keyof PowerSeries]: number[] } = {
+    chargeKw: [],
+    dischargeKw: [],
+    gridImportKw: [],
+    gridExportKw: [],
   };
   const socKwh = [req.initialEnergyKwh];
   let basis: LpBasis | undefined;
@@ -230,7 +226,7 @@ function dpLoopFor(inputs: AlignedInputs, req: ClosedLoopRequest, whole: Dispatc
 
 /**
  * The same closed loop on the exact dynamic program's warm receding-horizon
- * runner (issue 9): consecutive windows reuse value functions and decisions,
+ * runner: consecutive windows reuse value functions and decisions,
  * bit-identical to solving each window cold; figures as in the LP loop above.
  */
 function runClosedLoopOnDp(

@@ -1,14 +1,14 @@
 /**
  * Turnpike figures of a plan against a reference trajectory (the steady cycle
  * repeated by time of day, or a reference path / longer plan over the same steps).
- * Words as in DESIGN section 2: distance per step, band, near-steady share, entry
+ * Words and definitions as in docs/model.md: distance per step, band, near-steady share, entry
  * arc (steps before first entering the band), leaving arc (steps after last
  * leaving it), commit window (leading steps within the band of a longer plan).
  * [S] Trélat & Zuazua 2015; Faulwasser & Grüne 2020 (entry arc, middle arc near
  * the turnpike, leaving arc); Zanon, Grüne & Diehl 2017 (periodic turnpike).
  */
 
-/** Default band: 5 % of usable energy for SoC (DESIGN section 2). */
+/** Default band: 5 % of usable energy for SoC (docs/model.md). */
 export const DEFAULT_BAND_FRACTION = 0.05;
 
 export interface ArcFigures {

@@ -1,8 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import { createDpClosedLoop, type DpWindowPlan } from '../../../server/engine/dp';
 import type { DispatchProblem, TerminalRule } from '../../../server/engine/types';
-import { solveWithGlpk } from './glpk-reference';
-import { randomProblem, rng, VARIANTS } from './random-problems';
+import { solveWithGlpk } from '../../support/reference-lp';
+import { seededRandom } from '../../support/seeded-random';
+import { windowOf } from '../support/problem-builder';
+import { randomProblem, VARIANTS } from '../support/random-problems';
 
 interface Snapshot {
   start: number;
@@ -12,7 +14,7 @@ interface Snapshot {
 }
 
 function windowRules(seed: number): (s: number, end: number) => TerminalRule {
-  const r = rng(seed);
+  const r = seededRandom(seed);
   const kind = Math.floor(r() * 4);
   const base = 20 + 80 * r();
   return (_s, end) => {
@@ -25,18 +27,7 @@ function windowRules(seed: number): (s: number, end: number) => TerminalRule {
 }
 
 function windowProblem(p: DispatchProblem, plan: DpWindowPlan, e0: number): DispatchProblem {
-  const cut = <T>(xs: readonly T[]): T[] => xs.slice(plan.startStep, plan.endStep);
-  return {
-    ...p,
-    timesMs: cut(p.timesMs),
-    priceImport: cut(p.priceImport),
-    priceExport: cut(p.priceExport),
-    loadKw: cut(p.loadKw),
-    generationKw: cut(p.generationKw),
-    dayIndex: cut(p.dayIndex),
-    initialEnergyKwh: e0,
-    terminal: plan.terminal,
-  };
+  return windowOf(p, plan.startStep, plan.endStep, { initialEnergyKwh: e0, terminal: plan.terminal });
 }
 
 describe('closed-loop receding-horizon runs on the dynamic program', () => {
@@ -44,7 +35,7 @@ describe('closed-loop receding-horizon runs on the dynamic program', () => {
     let reused = 0;
     for (let i = 0; i < 60; i++) {
       const seed = 5_000 + i;
-      const r = rng(seed);
+      const r = seededRandom(seed);
       const p = randomProblem(VARIANTS[i % VARIANTS.length]!, seed, 40 + Math.floor(r() * 160));
       const horizonSteps = 2 + Math.floor(r() * 47);
       const replanSteps = 1 + Math.floor(r() * Math.min(horizonSteps, 6));
@@ -94,7 +85,7 @@ describe('closed-loop receding-horizon runs on the dynamic program', () => {
     let windows = 0;
     for (let i = 0; i < 14; i++) {
       const seed = 6_000 + i;
-      const r = rng(seed);
+      const r = seededRandom(seed);
       const p = randomProblem(VARIANTS[i % VARIANTS.length]!, seed, 30 + Math.floor(r() * 30));
       const horizonSteps = 4 + Math.floor(r() * 20);
       const plans: { problem: DispatchProblem; soc: number[] }[] = [];

@@ -1,21 +1,12 @@
 import { describe, expect, it } from 'vitest';
 import { decisionHorizon, solveDispatchDp } from '../../../server/engine/dp';
 import type { DispatchProblem, TerminalRule } from '../../../server/engine/types';
-import { solveWithGlpk } from './glpk-reference';
-import { randomProblem, rng, VARIANTS } from './random-problems';
+import { solveWithGlpk } from '../../support/reference-lp';
+import { seededRandom } from '../../support/seeded-random';
+import { windowOf } from '../support/problem-builder';
+import { randomProblem, VARIANTS } from '../support/random-problems';
 
-function truncate(p: DispatchProblem, steps: number): DispatchProblem {
-  const cut = <T>(xs: readonly T[]): T[] => xs.slice(0, steps);
-  return {
-    ...p,
-    timesMs: cut(p.timesMs),
-    priceImport: cut(p.priceImport),
-    priceExport: cut(p.priceExport),
-    loadKw: cut(p.loadKw),
-    generationKw: cut(p.generationKw),
-    dayIndex: cut(p.dayIndex),
-  };
-}
+const truncate = (p: DispatchProblem, steps: number): DispatchProblem => windowOf(p, 0, steps);
 
 /**
  * The certificate checked at one lookahead: the DP with that lookahead takes the same first decisions,
@@ -36,7 +27,7 @@ describe('decision horizon', () => {
     let shorter = 0;
     for (let i = 0; i < 40; i++) {
       const seed = 8_000 + i;
-      const r = rng(seed);
+      const r = seededRandom(seed);
       const p = randomProblem(VARIANTS[i % VARIANTS.length]!, seed, 30 + Math.floor(r() * 50));
       const n = p.priceImport.length;
       const steps = 1 + Math.floor(r() * 5);
@@ -65,7 +56,7 @@ describe('decision horizon', () => {
     let checked = 0;
     for (let i = 0; i < 24; i++) {
       const seed = 9_100 + i;
-      const r = rng(seed);
+      const r = seededRandom(seed);
       const random = randomProblem('asymmetric powers and efficiencies', seed, 40 + Math.floor(r() * 40));
       // Nearly flat prices: then the end value decides whether energy is bought now and held
       // to the end, so it reaches far back (with wide price swings it hardly matters).

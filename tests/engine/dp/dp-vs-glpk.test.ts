@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { solveDispatchDp } from '../../../server/engine/dp';
-import { brokenLimit, scheduleCost } from './check-schedule';
-import { solveWithGlpk } from './glpk-reference';
-import { randomProblem, VARIANTS } from './random-problems';
+import { solveWithGlpk } from '../../support/reference-lp';
+import { brokenLimits, recomputedCost } from '../support/limit-check';
+import { randomProblem, VARIANTS } from '../support/random-problems';
 
 const INSTANCES = 500;
 
@@ -17,7 +17,7 @@ describe('exact dynamic program against GLPK on random instances', () => {
         const p = randomProblem(variant, seed);
         const dp = solveDispatchDp(p);
         // [S] GLPK (glpk.js 5.0.0), an independent general-purpose LP solver, on the
-        // LP of DESIGN section 3 written out in glpk-reference.ts.
+        // LP of docs/model.md written out in tests/support/reference-lp.ts.
         const lp = solveWithGlpk(p);
         if (lp.status === 'infeasible') {
           expect(dp.status, `seed ${seed}`).toBe('infeasible');
@@ -32,9 +32,9 @@ describe('exact dynamic program against GLPK on random instances', () => {
         expect(Math.abs(dp.objective - lp.objective), `seed ${seed}: dp ${dp.objective} lp ${lp.objective}`).toBeLessThanOrEqual(
           tol,
         );
-        expect(brokenLimit(p, dp), `seed ${seed}`).toBeNull();
-        // cost is the money of the reported flows, without terminal value [D: DESIGN section 3].
-        expect(Math.abs(dp.cost - scheduleCost(p, dp))).toBeLessThanOrEqual(tol);
+        expect(brokenLimits(p, dp), `seed ${seed}`).toEqual([]);
+        // cost is the money of the reported flows, without terminal value [D: docs/model.md, cost].
+        expect(Math.abs(dp.cost - recomputedCost(p, dp))).toBeLessThanOrEqual(tol);
         if (dp.chargeKw.some((c, t) => c > 1e-6 && (dp.dischargeKw[t] ?? 0) > 1e-6)) simultaneous++;
         compared++;
       }

@@ -1,39 +1,19 @@
 import { describe, expect, it } from 'vitest';
 import { canSolveWithDp, solveDispatchDp } from '../../../server/engine/dp';
 import type { DispatchProblem } from '../../../server/engine/types';
-import { solveWithGlpk } from './glpk-reference';
+import { solveWithGlpk } from '../../support/reference-lp';
+import { battery, problem as fixtureProblem } from '../support/problem-builder';
 
+/** A 1 MW / 1 MWh battery at 0.9 each way, starting empty, on hourly prices from 2 March 2026 (UTC). */
 function problem(
   prices: number[],
   over: Partial<DispatchProblem> = {},
-  battery: Partial<DispatchProblem['battery']> = {},
+  b: Partial<DispatchProblem['battery']> = {},
 ): DispatchProblem {
-  const n = prices.length;
   return {
-    stepHours: 1,
+    ...fixtureProblem(prices, { battery: battery({ efficiencyCharge: 0.9, efficiencyDischarge: 0.9, ...b }) }),
     timesMs: prices.map((_, t) => Date.UTC(2026, 2, 2) + t * 3_600_000),
-    priceImport: prices,
-    priceExport: prices,
-    loadKw: prices.map(() => 0),
-    generationKw: prices.map(() => 0),
-    battery: {
-      powerChargeKw: 1000,
-      powerDischargeKw: 1000,
-      energyKwh: 1000,
-      socMinPct: 0,
-      socMaxPct: 100,
-      socInitialPct: 0,
-      efficiencyCharge: 0.9,
-      efficiencyDischarge: 0.9,
-      selfDischargePctPerHour: 0,
-      degradationCostPerMwh: 0,
-      maxCyclesPerDay: null,
-      ...battery,
-    },
-    site: { timezone: 'UTC', importLimitKw: null, exportLimitKw: null, demandChargePerKw: null },
     initialEnergyKwh: 0,
-    terminal: { kind: 'free' },
-    dayIndex: Array.from({ length: n }, () => 0),
     ...over,
   };
 }
@@ -91,7 +71,7 @@ describe('models the dynamic program cannot take', () => {
 });
 
 describe('worked fixtures', () => {
-  // [D] REFERENCES.md fixture A: charge 1 MW at 20, hold 0.9 MWh, discharge 0.81 MW at 100:
+  // [D] worked fixture A: charge 1 MW at 20, hold 0.9 MWh, discharge 0.81 MW at 100:
   // profit 0.81·100 − 1·20 = 61.
   it('earns 61 on two price levels 20 and 100 with 0.9 efficiencies, free or cyclic', () => {
     expect(solveDispatchDp(problem([20, 100])).cost).toBeCloseTo(-61, 9);

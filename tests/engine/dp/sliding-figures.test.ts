@@ -5,7 +5,8 @@ import { createDpClosedLoop, solveDispatchDp } from '../../../server/engine/dp';
 import { arcFigures } from '../../../server/engine/turnpike/turnpike-figures';
 import { SlidingArcFigures } from '../../../server/engine/turnpike/sliding-arc-figures';
 import type { TerminalRule } from '../../../server/engine/types';
-import { randomProblem, rng, VARIANTS } from './random-problems';
+import { seededRandom } from '../../support/seeded-random';
+import { randomProblem, VARIANTS } from '../support/random-problems';
 
 const RULES: readonly TerminalRule[] = [
   { kind: 'free' },
@@ -21,7 +22,7 @@ describe('closed-loop plans on the dynamic program', () => {
     const wrong: string[] = [];
     for (let i = 0; i < 40; i++) {
       const seed = 7_000 + i;
-      const r = rng(seed);
+      const r = seededRandom(seed);
       const p = randomProblem(VARIANTS[i % VARIANTS.length]!, seed, 60 + Math.floor(r() * 140));
       const horizonSteps = 2 + Math.floor(r() * 40);
       const replanSteps = 1 + Math.floor(r() * Math.min(horizonSteps, 4));
@@ -63,7 +64,7 @@ describe('closed-loop plans on the dynamic program', () => {
     let withLeavingArc = 0;
     for (let i = 0; i < 40; i++) {
       const seed = 8_000 + i;
-      const r = rng(seed);
+      const r = seededRandom(seed);
       const p = randomProblem(VARIANTS[i % VARIANTS.length]!, seed, 60 + Math.floor(r() * 140));
       const usable = (p.battery.energyKwh * (p.battery.socMaxPct - p.battery.socMinPct)) / 100;
       // Reference: the whole-period optimum, with a few unknown (NaN) entries.
@@ -76,7 +77,7 @@ describe('closed-loop plans on the dynamic program', () => {
         horizonSteps: 2 + Math.floor(r() * 40),
         replanSteps: 1 + Math.floor(r() * 2),
         onPlan: (plan) => {
-          // [D] arcFigures (DESIGN section 2 words) recounts the whole plan from scratch.
+          // [D] arcFigures (docs/model.md) recounts the whole plan from scratch.
           const full = arcFigures(plan.socKwh.subarray(1), reference.slice(plan.startStep, plan.endStep), usable, band);
           const fig = sliding.update(plan.startStep, plan.endStep, plan.socKwh.subarray(1), plan.recomputedSteps);
           expect(fig.nearSteadyShare, `seed ${seed} window ${plan.startStep}`).toBe(full.nearSteadyShare);

@@ -1,8 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import { solveDispatchDp, valueCurves } from '../../../server/engine/dp';
 import type { DispatchProblem } from '../../../server/engine/types';
-import { solveWithGlpk, type GlpkTweaks } from './glpk-reference';
-import { randomProblem, rng, VARIANTS } from './random-problems';
+import { solveWithGlpk, type LpTweaks } from '../../support/reference-lp';
+import { seededRandom } from '../../support/seeded-random';
+import { randomProblem, VARIANTS } from '../support/random-problems';
 
 /**
  * The interval of stored-energy values (currency/MWh) that optimal LP duals of
@@ -16,7 +17,7 @@ import { randomProblem, rng, VARIANTS } from './random-problems';
  */
 function lpValueInterval(
   p: DispatchProblem,
-  tweak: (delta: number) => GlpkTweaks,
+  tweak: (delta: number) => LpTweaks,
   delta: number,
 ): { low: number; high: number } | null {
   const c0 = solveWithGlpk(p, tweak(0));
@@ -40,11 +41,11 @@ describe('stored-energy value of the dynamic program', () => {
       const emax = (b.energyKwh * b.socMaxPct) / 100;
       const margin = 1e-3 * b.energyKwh;
       const delta = 1e-5 * b.energyKwh;
-      const r = rng(seed);
+      const r = seededRandom(seed);
       for (let k = 0; k < 2; k++) {
         const t = Math.floor(r() * p.priceImport.length);
         const e = dp.socKwh[t + 1]!;
-        // [S: REFERENCES, degeneracy] duals are not unique at bounds: compare inside only.
+        // [S: docs/sources.md, degeneracy] duals are not unique at bounds: compare inside only.
         if (!(e > emin + margin && e < emax - margin)) continue;
         const lp = lpValueInterval(p, (d) => ({ inject: { step: t, deltaKwh: d } }), delta);
         if (!lp) continue;
@@ -70,7 +71,7 @@ describe('stored-energy value of the dynamic program', () => {
       const b = base.battery;
       const emin = (b.energyKwh * b.socMinPct) / 100;
       const emax = (b.energyKwh * b.socMaxPct) / 100;
-      const r = rng(seed);
+      const r = seededRandom(seed);
       const e0 = emin + (0.05 + 0.9 * r()) * (emax - emin);
       const p = { ...base, initialEnergyKwh: e0 };
       const curves = valueCurves(p, null, [p.timesMs[0]!]);

@@ -1,7 +1,7 @@
 // The operating limits of DESIGN section 3.3 (reserves, availability, ramp rate,
 // switching cost) against an LP built here from the design's equations
 // (reference-limits-lp.ts, on the independent section-3 LP of
-// tests/engine/support/reference-lp.ts) and solved by glpk.js 5.0.0 and
+// tests/support/reference-lp.ts) and solved by glpk.js 5.0.0 and
 // javascript-lp-solver 1.0.3. [D] An LP has one optimal value even when several
 // schedules reach it, so every correct formulation and solver must report the
 // same objective (cost + switching penalty − terminal value), within 1e-6 relative.
@@ -9,7 +9,7 @@
 // section-3 checks of tests/engine/support/limit-check.ts).
 import { describe, expect, it } from 'vitest';
 import { solveDispatch } from '../../../server/engine/dispatch/solve-dispatch';
-import { solveWithGlpkDirect, solveWithJsLpSolver } from '../support/reference-lp';
+import { solveLpWithGlpk, solveLpWithJsLpSolver } from '../../support/reference-lp';
 import { brokenLimits } from '../support/limit-check';
 import { referenceLimitsLp } from './reference-limits-lp';
 import { LIMIT_FEATURES, randomLimitProblem } from './random-limits';
@@ -23,8 +23,8 @@ describe.each(LIMIT_FEATURES)('operating limits: %s', (feature) => {
     for (let seed = 1; seed <= INSTANCES; seed++) {
       const problem = randomLimitProblem(feature, seed);
       const lp = referenceLimitsLp(problem);
-      const direct = solveWithGlpkDirect(lp);
-      const jsLp = solveWithJsLpSolver(lp);
+      const direct = solveLpWithGlpk(lp);
+      const jsLp = solveLpWithJsLpSolver(lp);
       expect(direct.status, `glpk.js, seed ${seed}`).toBe('optimal');
       expect(jsLp.status, `javascript-lp-solver, seed ${seed}`).toBe('optimal');
       for (const backend of ['highs', 'glpk'] as const) {
@@ -47,7 +47,7 @@ describe('which path solves a model with operating limits', () => {
       const problem = randomLimitProblem('availability', seed);
       const auto = solveDispatch(problem);
       const lp = solveDispatch(problem, { method: 'lp' });
-      const direct = solveWithGlpkDirect(referenceLimitsLp(problem));
+      const direct = solveLpWithGlpk(referenceLimitsLp(problem));
       // The demand-charge and throughput-cap bases go to the LP for their own reasons.
       if (problem.site.demandChargePerKw === null && problem.battery.maxCyclesPerDay === null) {
         expect(auto.method, `seed ${seed}`).toBe('dp');

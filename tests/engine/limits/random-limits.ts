@@ -5,7 +5,8 @@
 // grid limits there cover the site's own net load, and a given initial power is
 // within one ramp step of 0.
 import type { DispatchProblem } from '../../../server/engine/types';
-import { randomDispatchProblem, seeded, type ModelVariant } from '../support/random-dispatch';
+import { randomDispatchProblem, type ModelVariant } from '../support/random-problems';
+import { seededRandom as seeded } from '../../support/seeded-random';
 
 export const LIMIT_FEATURES = [
   'reserves',

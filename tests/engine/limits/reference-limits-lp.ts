@@ -1,5 +1,5 @@
 // The operating limits of DESIGN section 3.3 written out a second time, on top of
-// the independent LP of DESIGN section 3 (tests/engine/support/reference-lp.ts),
+// the independent LP of DESIGN section 3 (tests/support/reference-lp.ts),
 // with named variables and without the engine's model builder. Deliberately a
 // different formulation where one exists: |Δ net power| is an epigraph variable
 // w_t ≥ ±(p_t − p_{t−1}) and the ramp rate two inequalities on p_t − p_{t−1},
@@ -11,7 +11,7 @@
 //   x_t − m_t + r↑_t ≤ X_max,  m_t − x_t + r↓_t ≤ M_max   (where the limit exists)
 //   |p_t − p_{t−1}| ≤ R·60·Δt and cost s·|p_t − p_{t−1}|/1000 for t ≥ 1 (and t = 0 from a given p_{−1})
 import type { DispatchProblem } from '../../../server/engine/types';
-import { referenceLp, type ReferenceLp } from '../support/reference-lp';
+import { referenceLp, type ReferenceLp } from '../../support/reference-lp';
 
 type Row = ReferenceLp['rows'][number];
 
@@ -118,5 +118,5 @@ export function referenceLimitsLp(p: DispatchProblem): ReferenceLp {
       rows.push({ name: `wd${t}`, terms: [[`w${t}`, 1], ...change], lo: constant, hi: Infinity });
     }
   }
-  return { cost, box, rows };
+  return { cost, box, rows, steps: base.steps };
 }

@@ -1,8 +1,9 @@
-// Every limit of DESIGN section 3, checked on a solved schedule: power, SoC
-// window, SoC dynamics, site balance, grid limits, daily throughput cap and the
-// terminal rule. Returns the list of broken limits (empty = all kept).
+// Checks of a solved schedule written straight from the model (docs/model.md),
+// independently of the engine: every limit (power, SoC window, SoC dynamics, site
+// balance, grid limits, daily throughput cap, terminal rule) and the money paid.
 import type { DispatchProblem, DispatchSolution } from '../../../server/engine/types';
 
+/** The list of broken limits (empty = all kept). */
 export function brokenLimits(p: DispatchProblem, s: DispatchSolution): string[] {
   const b = p.battery;
   const dt = p.stepHours;
@@ -39,4 +40,18 @@ export function brokenLimits(p: DispatchProblem, s: DispatchSolution): string[] 
   if (p.terminal.kind === 'cyclic') check(Math.abs(end - s.socKwh[0]!) <= tolKwh, 'cyclic end');
   if (p.terminal.kind === 'target') check(end >= (b.energyKwh * p.terminal.socPct) / 100 - tolKwh, 'end target');
   return broken;
+}
+
+/** The money paid by a schedule, recomputed from its flows: Σ (π_imp·m − π_exp·x + c_deg·d)·Δt/1000. */
+export function recomputedCost(p: DispatchProblem, s: DispatchSolution): number {
+  let cost = 0;
+  for (let t = 0; t < p.priceImport.length; t++) {
+    cost +=
+      (((p.priceImport[t] ?? 0) * (s.gridImportKw[t] ?? 0) -
+        (p.priceExport[t] ?? 0) * (s.gridExportKw[t] ?? 0) +
+        p.battery.degradationCostPerMwh * (s.dischargeKw[t] ?? 0)) *
+        p.stepHours) /
+      1000;
+  }
+  return cost;
 }

@@ -4,7 +4,7 @@ import { alignInputs, type AlignedInputs } from '../../../server/engine/inputs/a
 import type { BatteryParams } from '../../../server/engine/types';
 import { battery } from './problem-builder';
 
-/** 1 MW / 4 MWh at 85 % round trip, the battery of REFERENCES' turnpike check values. */
+/** 1 MW / 4 MWh at 85 % round trip, the battery of the turnpike check values (docs/sources.md). */
 export const TURNPIKE_BATTERY: BatteryParams = battery({
   powerChargeKw: 1000,
   powerDischargeKw: 1000,

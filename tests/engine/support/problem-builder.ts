@@ -19,6 +19,21 @@ export function battery(overrides: Partial<BatteryParams> = {}): BatteryParams {
   };
 }
 
+/** Steps [from, to) of a problem as a problem of its own (a receding-horizon window, a truncation). */
+export function windowOf(p: DispatchProblem, from: number, to: number, over: Partial<DispatchProblem> = {}): DispatchProblem {
+  const cut = <T>(xs: readonly T[]): T[] => xs.slice(from, to);
+  return {
+    ...p,
+    timesMs: cut(p.timesMs),
+    priceImport: cut(p.priceImport),
+    priceExport: cut(p.priceExport),
+    loadKw: cut(p.loadKw),
+    generationKw: cut(p.generationKw),
+    dayIndex: cut(p.dayIndex),
+    ...over,
+  };
+}
+
 export const NO_SITE: SiteParams = { timezone: 'UTC', importLimitKw: null, exportLimitKw: null, demandChargePerKw: null };
 
 export function problem(

@@ -1,11 +1,42 @@
-import type { ReactNode } from 'react';
+import type { FormEvent, ReactNode } from 'react';
 import { Link } from 'react-router-dom';
 import { Logo } from '@/components/logo';
+import { Notice } from '@/components/text-field';
 import { TideIllustration } from './tide-illustration';
 
 /** The full-width submit button of the pages seen before signing in. */
-export const wideButton =
+const wideButton =
   'w-full rounded bg-seaglass-700 px-4 py-2.5 text-base font-semibold text-white hover:bg-seaglass-800 disabled:cursor-not-allowed disabled:opacity-50';
+
+/**
+ * The form of a page seen before signing in: its fields, the form-wide error
+ * (if any) and one full-width submit button that says when it is working.
+ */
+export function AuthForm({
+  onSubmit,
+  error,
+  pending,
+  submitLabel,
+  pendingLabel,
+  children,
+}: {
+  onSubmit: (event: FormEvent) => void;
+  error: string | null | undefined;
+  pending: boolean;
+  submitLabel: string;
+  pendingLabel: string;
+  children: ReactNode;
+}) {
+  return (
+    <form onSubmit={onSubmit} noValidate className="space-y-5">
+      {children}
+      {error && <Notice tone="error">{error}</Notice>}
+      <button type="submit" disabled={pending} className={wideButton}>
+        {pending ? pendingLabel : submitLabel}
+      </button>
+    </form>
+  );
+}
 
 /** A link between the pages seen before signing in. */
 export function FrameLink({ to, children }: { to: string; children: ReactNode }) {

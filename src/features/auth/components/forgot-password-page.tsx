@@ -1,7 +1,7 @@
 import { useState, type FormEvent } from 'react';
 import { Notice, TextField } from '@/components/text-field';
 import { useRequestPasswordReset } from '../api/request-password-reset';
-import { AuthFrame, FrameLink, wideButton } from './auth-frame';
+import { AuthForm, AuthFrame, FrameLink } from './auth-frame';
 import { fieldError, formError } from './field-errors';
 
 export function ForgotPasswordPage() {
@@ -19,7 +19,13 @@ export function ForgotPasswordPage() {
       {request.isSuccess ? (
         <Notice tone="success">{request.data.message}</Notice>
       ) : (
-        <form onSubmit={submit} noValidate className="space-y-5">
+        <AuthForm
+          onSubmit={submit}
+          error={message}
+          pending={request.isPending}
+          submitLabel="Send the link"
+          pendingLabel="Sending…"
+        >
           <TextField
             id="reset-email"
             label="E-mail address"
@@ -30,11 +36,7 @@ export function ForgotPasswordPage() {
             onValue={setEmail}
             error={emailError}
           />
-          {message && <Notice tone="error">{message}</Notice>}
-          <button type="submit" disabled={request.isPending} className={wideButton}>
-            {request.isPending ? 'Sending…' : 'Send the link'}
-          </button>
-        </form>
+        </AuthForm>
       )}
       <p className="mt-6 text-sm">
         <FrameLink to="/sign-in">Back to sign-in</FrameLink>

@@ -10,7 +10,7 @@ import { useMe } from '../api/get-me';
 import { AccountMenu } from './account-menu';
 
 export interface RoleNavItem extends NavItem {
-  /** Shown only to roles that may do this (DESIGN section 5). */
+  /** Shown only to roles that may do this. */
   action: Action;
 }
 

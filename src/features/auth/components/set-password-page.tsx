@@ -2,7 +2,7 @@ import { useState, type FormEvent } from 'react';
 import { useNavigate } from 'react-router-dom';
 import { Notice } from '@/components/text-field';
 import { usePasswordLink, useRedeemPasswordLink } from '../api/password-links';
-import { AuthFrame, FrameLink, wideButton } from './auth-frame';
+import { AuthForm, AuthFrame, FrameLink } from './auth-frame';
 import { fieldError, formError } from './field-errors';
 import { NewPasswordFields, useNewPasswordForm } from './new-password-fields';
 import { formatMoment } from '@/lib/format';
@@ -67,18 +67,20 @@ export function SetPasswordPage() {
         </>
       }
     >
-      <form onSubmit={submit} noValidate className="space-y-5">
+      <AuthForm
+        onSubmit={submit}
+        error={message}
+        pending={redeem.isPending}
+        submitLabel={invite ? 'Set my password' : 'Save the new password'}
+        pendingLabel="Saving…"
+      >
         <NewPasswordFields
           idPrefix="set"
           value={form.value}
           onChange={form.setValue}
           errors={{ password: form.errors.password ?? fieldError(redeem.error, 'password'), confirm: form.errors.confirm }}
         />
-        {message && <Notice tone="error">{message}</Notice>}
-        <button type="submit" disabled={redeem.isPending} className={wideButton}>
-          {redeem.isPending ? 'Saving…' : invite ? 'Set my password' : 'Save the new password'}
-        </button>
-      </form>
+      </AuthForm>
     </AuthFrame>
   );
 }

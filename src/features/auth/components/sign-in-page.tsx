@@ -3,7 +3,7 @@ import { Navigate, useLocation, useNavigate, useSearchParams } from 'react-route
 import { Notice, TextField } from '@/components/text-field';
 import { useMe } from '../api/get-me';
 import { useSignIn } from '../api/sign-in';
-import { AuthFrame, FrameLink, wideButton } from './auth-frame';
+import { AuthForm, AuthFrame, FrameLink } from './auth-frame';
 import { fieldError, formError, safeNextPath } from './field-errors';
 
 export function SignInPage() {
@@ -34,7 +34,7 @@ export function SignInPage() {
           <Notice tone="success">{notice}</Notice>
         </div>
       )}
-      <form onSubmit={submit} noValidate className="space-y-5">
+      <AuthForm onSubmit={submit} error={message} pending={signIn.isPending} submitLabel="Sign in" pendingLabel="Signing in…">
         <TextField
           id="sign-in-email"
           label="E-mail address"
@@ -55,11 +55,7 @@ export function SignInPage() {
           onValue={setPassword}
           error={passwordError}
         />
-        {message && <Notice tone="error">{message}</Notice>}
-        <button type="submit" disabled={signIn.isPending} className={wideButton}>
-          {signIn.isPending ? 'Signing in…' : 'Sign in'}
-        </button>
-      </form>
+      </AuthForm>
       <p className="mt-6 text-sm text-ink-700">
         <FrameLink to="/forgot-password">Forgot your password?</FrameLink>
       </p>

@@ -1,5 +1,5 @@
 /**
- * The cautions of DESIGN section 8 on every plan page: the schedule is decision
+ * The cautions on every plan page (README, "Sign-off and exports"; docs/model.md): the schedule is decision
  * support, to be checked against the interconnection agreement, grid code and
  * system operator, the battery maker's limits and the site's fire and safety
  * requirements; plus this plan's settings outside common practice.

@@ -16,7 +16,7 @@ interface Props {
   error?: string | undefined;
 }
 
-/** Terminal rule (DESIGN section 2) with the target SoC beside it when that rule is chosen. */
+/** Terminal rule (docs/model.md) with the target SoC beside it when that rule is chosen. */
 export function TerminalRuleField({ kind, targetPct, onChange, error }: Props) {
   return (
     <div className="grid gap-2 sm:grid-cols-[2fr_1fr]">

@@ -1,7 +1,7 @@
 /**
  * The turnpike figures in plain words: how long the plan stays near the steady
  * cycle, its entry and leaving arcs, the commit window, and the flags a planner
- * can act on (DESIGN sections 1 and 2).
+ * can act on (docs/model.md).
  */
 import type { PlanResults } from '@shared/schemas/plan';
 import { formatPercent, formatSteps } from '@/lib/format';

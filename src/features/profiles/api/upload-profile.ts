@@ -16,7 +16,7 @@ export interface UploadProfileInput {
   decimalSeparator?: DecimalSeparator | undefined;
 }
 
-/** multipart/form-data with the field names of DESIGN section 6; a 422 carries `{issues:[{line,message}], hint}`. */
+/** multipart/form-data with the API's field names; a 422 carries `{issues:[{line,message}], hint}`. */
 export function uploadProfile(input: UploadProfileInput) {
   const form = new FormData();
   form.append('kind', input.kind);

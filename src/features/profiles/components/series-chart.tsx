@@ -10,7 +10,7 @@ import { TimeAxis } from '@/components/charts/time-axis';
 import { formatLocalTime, formatNumber } from '@/lib/format';
 import type { SeriesPoint } from '../lib/downsample';
 
-// A profile is one sea-glass line (DESIGN section 7), where the plans' first series is ink.
+// A profile is one sea-glass line, where the plans' first series is ink.
 const theme = chartThemeWith([colours.seaglass]);
 
 const accessors = { xAccessor: (p: SeriesPoint) => new Date(p.t), yAccessor: (p: SeriesPoint) => p.v };

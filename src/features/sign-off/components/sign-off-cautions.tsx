@@ -1,6 +1,6 @@
 import { SIGN_OFF_CAUTIONS } from '@shared/schemas/sign-off';
 
-/** The cautions of DESIGN section 8, on every sign-off screen (the export carries the same words). */
+/** The cautions (docs/model.md), on every sign-off screen (the export carries the same words). */
 export function SignOffCautions() {
   return (
     <aside aria-label="Before you sign off" className="rounded border border-amber-500 bg-amber-100 p-4 text-sm text-ink-900">

@@ -10,7 +10,7 @@ import { SignOffHistory } from './sign-off-history';
 /**
  * The sign-off section of a plan page: status, who submitted and signed off,
  * when, the checksum, the actions the user may take, the CSV export, the full
- * history, and a pointer to the plan page's cautions (DESIGN section 8) just above
+ * history, and a pointer to the plan page's cautions (docs/model.md) just above
  * it. Composed into the plan page by the route (features do not import each other).
  */
 export function SignOffPanel({ planId }: { planId: string }) {

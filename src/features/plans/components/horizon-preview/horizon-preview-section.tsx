@@ -1,5 +1,5 @@
 /**
- * "Try another horizon" on the plan page (issue 9): a slider re-plans the plan's
+ * "Try another horizon" on the plan page: a slider re-plans the plan's
  * own inputs with another horizon on the exact fast path, a fraction of a
  * second per move, and shows the SoC against the plan's, the cost difference
  * and the decision horizon. Models the fast path cannot take say why instead.

@@ -1,30 +1,24 @@
 /**
- * Micro benchmark of the exact dynamic program against plain GLPK (issue 9),
- * for `npm run bench`. Pure computation on an invented, seeded year; prints
- * nothing itself. Times are process CPU milliseconds (the 2-core machine is
+ * Micro benchmark of the exact dynamic program against a plain GLPK window the
+ * caller builds, for `npm run bench` (scripts/bench.ts). Pure computation on the
+ * problem it is given; prints nothing itself. Times are process CPU milliseconds (the 2-core machine is
  * often shared, which inflates wall-clock times far more); DP times are the
  * best of `repeats` runs (the first runs include JIT compilation); GLPK
  * baselines run once in the same process.
  */
-import type { DispatchProblem, TerminalRule } from '../types';
-import { glpk } from '../lp/solver-runtime';
-import { toGlpkModel } from '../lp/glpk-backend';
-import { buildDispatchModel } from '../model/build-dispatch-model';
-import { createDpClosedLoop } from './closed-loop';
-import { solveDispatchDp } from './solve';
+import type { DispatchProblem, TerminalRule } from '../../server/engine/types';
+import { createDpClosedLoop } from '../../server/engine/dp/closed-loop';
+import { solveDispatchDp } from '../../server/engine/dp/solve';
 
 export interface DpBenchOptions {
-  /** Default: inventedYear(). */
-  readonly problem?: DispatchProblem;
+  /** The problem whose whole horizon and receding-horizon loops are timed. */
+  readonly problem: DispatchProblem;
   /** DP timings are the best of this many runs (default 5). */
   readonly repeats?: number;
   /** Measure the GLPK baselines (default true). */
   readonly glpk?: boolean;
-  /**
-   * The plain GLPK solve of steps [start, start + steps) from energy e0, returning
-   * e_1 (kWh). Default: glpk.js on the project's model builder, no tie-break.
-   */
-  readonly glpkWindow?: (start: number, steps: number, e0: number) => number;
+  /** The plain GLPK solve of steps [start, start + steps) from energy e0, returning e_1 (kWh). */
+  readonly glpkWindow: (start: number, steps: number, e0: number) => number;
   /** Closed-loop horizons compared with a plain GLPK loop, hours (default [24, 168]). */
   readonly loopHorizonsHours?: readonly number[];
   /** Time the GLPK loop on every k-th window only and scale up, for horizons above 48 h (default 8). */
@@ -50,50 +44,6 @@ export interface DpBenchResult {
   readonly sixHorizonsTwoRules: { readonly ms: number; readonly withPlansMs: number };
 }
 
-/** An invented year of hourly prices (seeded; daily and weekly shape, noise, some negative hours) and a 2-hour battery. */
-export function inventedYear(seed = 2026): DispatchProblem {
-  let s = seed >>> 0;
-  const rand = (): number => {
-    s = (Math.imul(s, 1664525) + 1013904223) >>> 0;
-    return s / 4294967296;
-  };
-  const n = 8760;
-  const start = Date.UTC(2026, 0, 1);
-  const prices: number[] = [];
-  for (let t = 0; t < n; t++) {
-    const h = t % 24;
-    const weekend = Math.floor(t / 24) % 7 >= 5 ? -12 : 0;
-    const daily = 25 * Math.sin(((h - 9) / 24) * 2 * Math.PI) + 18 * Math.sin(((h - 16) / 12) * 2 * Math.PI);
-    const dip = rand() < 0.02 ? -90 * rand() : 0;
-    prices.push(Math.round((70 + weekend + daily + 20 * (rand() - 0.5) + dip) * 100) / 100);
-  }
-  return {
-    stepHours: 1,
-    timesMs: prices.map((_, t) => start + t * 3_600_000),
-    priceImport: prices,
-    priceExport: prices,
-    loadKw: prices.map(() => 0),
-    generationKw: prices.map(() => 0),
-    battery: {
-      powerChargeKw: 1000,
-      powerDischargeKw: 1000,
-      energyKwh: 2000,
-      socMinPct: 10,
-      socMaxPct: 90,
-      socInitialPct: 50,
-      efficiencyCharge: Math.sqrt(0.85),
-      efficiencyDischarge: Math.sqrt(0.85),
-      selfDischargePctPerHour: 0,
-      degradationCostPerMwh: 0,
-      maxCyclesPerDay: null,
-    },
-    site: { timezone: 'UTC', importLimitKw: null, exportLimitKw: null, demandChargePerKw: null },
-    initialEnergyKwh: 1000,
-    terminal: { kind: 'free' },
-    dayIndex: prices.map((_, t) => Math.floor(t / 24)),
-  };
-}
-
 /** Process CPU milliseconds of one call. */
 function cpuMs(run: () => void): number {
   const before = process.cpuUsage();
@@ -106,29 +56,6 @@ function bestOf(repeats: number, run: () => void): number {
   let best = Infinity;
   for (let i = 0; i < repeats; i++) best = Math.min(best, cpuMs(run));
   return best;
-}
-
-function windowOf(p: DispatchProblem, from: number, to: number, e0: number): DispatchProblem {
-  const cut = <T>(xs: readonly T[]): T[] => xs.slice(from, to);
-  return {
-    ...p,
-    timesMs: cut(p.timesMs),
-    priceImport: cut(p.priceImport),
-    priceExport: cut(p.priceExport),
-    loadKw: cut(p.loadKw),
-    generationKw: cut(p.generationKw),
-    dayIndex: cut(p.dayIndex),
-    initialEnergyKwh: e0,
-  };
-}
-
-/** One plain glpk.js solve of a window (the project's model builder, no tie-break); returns e_1. */
-function glpkWindowOf(p: DispatchProblem): (start: number, steps: number, e0: number) => number {
-  return (start, steps, e0) => {
-    const model = buildDispatchModel(windowOf(p, start, start + steps, e0));
-    const res = glpk.solve(toGlpkModel(model.lp), { msglev: glpk.GLP_MSG_OFF, presol: false });
-    return res.result.vars[`x${model.layout.energy}`] ?? Number.NaN;
-  };
 }
 
 /**
@@ -157,14 +84,14 @@ function glpkLoopMs(
   return (ms * n) / solved;
 }
 
-/** Runs the DP figures of issue 9 (and, unless given, their GLPK baselines). */
-export function benchDp(options: DpBenchOptions = {}): DpBenchResult {
-  const p = options.problem ?? inventedYear();
+/** Runs the DP figures and (unless `glpk` is false) their GLPK baselines. */
+export function benchDp(options: DpBenchOptions): DpBenchResult {
+  const p = options.problem;
   const repeats = options.repeats ?? 5;
   const n = p.priceImport.length;
   const steps = (hours: number): number => Math.round(hours / p.stepHours);
   const measure = options.glpk !== false;
-  const solveWindow = options.glpkWindow ?? glpkWindowOf(p);
+  const solveWindow = options.glpkWindow;
   const dpMs = bestOf(repeats * 3, () => solveDispatchDp(p));
   const glpkYearMs = measure ? cpuMs(() => solveWindow(0, n, p.initialEnergyKwh)) : null;
   const loop = createDpClosedLoop(p);
