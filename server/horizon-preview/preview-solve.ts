@@ -16,7 +16,7 @@ import {
   type SteadyCycle,
 } from '../engine';
 import { AppError } from '../http/app-error';
-import { summarisePlan } from '../plans/insights/plan-summary';
+import { netMoney, summarisePlan } from '../plans/insights/plan-summary';
 
 export const hours = (h: number) => `${Number(h.toFixed(4))} h`;
 
@@ -45,7 +45,10 @@ export function needsExactPath(reason: string): AppError {
   );
 }
 
-export type PreviewFigures = Omit<HorizonPreview, 'planId' | 'planCost' | 'costDifference' | 'limits' | 'serverMs'>;
+export type PreviewFigures = Omit<
+  HorizonPreview,
+  'planId' | 'planCost' | 'costDifference' | 'planNetCost' | 'netCostDifference' | 'limits' | 'serverMs'
+>;
 
 export type PreviewOutcome = { ok: true; preview: PreviewFigures } | { ok: false; message: string };
 
@@ -83,6 +86,7 @@ export function solvePreview(a: AlignedInputs, steady: SteadyCycle, inputs: Plan
       deliverySteps,
       cost: summary.cost,
       earnings: summary.earnings,
+      ...netMoney(plan.netFigures),
       endSocPct: summary.endSocPct,
       steps,
       decisionHorizonHours: plan.dpInsights?.decisionHorizonHours ?? null,
