@@ -16,7 +16,8 @@ import {
   type SteadyCycle,
 } from '../engine';
 import { AppError } from '../http/app-error';
-import { netMoney, summarisePlan } from '../plans/insights/plan-summary';
+import { summarisePlan } from '../plans/insights/plan-summary';
+import { netMoney } from '../runs/net-money';
 
 export const hours = (h: number) => `${Number(h.toFixed(4))} h`;
 

@@ -9,7 +9,8 @@ import { parseTerminal, solvePlan, steadySocAt, steadyValueAt, type AlignedInput
 import { alignSnapshot } from '../runs/align-snapshot';
 import type { ComputeOutcome, ReportProgress } from '../runs/run-task';
 import { exactPathInsights } from './insights/exact-path-insights';
-import { netMoney, summarisePlan } from './insights/plan-summary';
+import { summarisePlan } from './insights/plan-summary';
+import { netMoney } from '../runs/net-money';
 import { turnpikeInsight } from './insights/turnpike-insight';
 import type { PlanComputeInput } from './plan-task';
 

@@ -7,7 +7,7 @@ import type { StudyResults } from '@shared/schemas/study';
 import { DEFAULT_GAP_TARGET_PCT, parseTerminal, runHorizonStudy, type TerminalChoice } from '../engine';
 import { alignSnapshot } from '../runs/align-snapshot';
 import type { ComputeOutcome, ReportProgress } from '../runs/run-task';
-import { valuationOf } from '../plans/insights/plan-summary';
+import { valuationOf } from '../runs/net-money';
 import type { StudyComputeInput } from './study-task';
 
 export async function computeStudy(input: StudyComputeInput, report: ReportProgress): Promise<ComputeOutcome<StudyResults>> {

@@ -3,41 +3,8 @@
  * money paid, what the battery earns against the same site without it,
  * equivalent full cycles, peak import.
  */
-import type { NetMoney, PlanSummary, StoredEnergyValuation } from '@shared/schemas/plan';
-import {
-  scheduleCost,
-  type AlignedInputs,
-  type DispatchSolution,
-  type NetFigures,
-  type StoredEnergyValuation as EngineValuation,
-} from '../../engine';
-
-const finiteOrNull = (v: number) => (Number.isFinite(v) ? v : null);
-
-/** How stored energy was valued, in the API's shape (values per MWh are null when it is not valued: JSON has no NaN). */
-export function valuationOf(v: EngineValuation): StoredEnergyValuation {
-  return {
-    valued: v.valued,
-    startValuePerMwh: finiteOrNull(v.startValuePerMwh),
-    endValuePerMwh: finiteOrNull(v.endValuePerMwh),
-    startClock: v.startClock,
-    endClock: v.endClock,
-    startEnergyKwh: v.startEnergyKwh,
-    endEnergyKwh: v.endEnergyKwh,
-    description: v.description,
-  };
-}
-
-/** The engine's net figures in the API's shape. */
-export function netMoney(net: NetFigures): NetMoney {
-  return {
-    storedEnergyChange: net.storedEnergyChange,
-    netCost: net.netCost,
-    noBatteryCost: net.noBatteryCost,
-    batteryValue: net.batteryValue,
-    storedEnergyValuation: valuationOf(net.storedEnergyValuation),
-  };
-}
+import type { PlanSummary } from '@shared/schemas/plan';
+import { scheduleCost, type AlignedInputs, type DispatchSolution } from '../../engine';
 
 export function summarisePlan(a: AlignedInputs, from: number, steps: number, sol: DispatchSolution): PlanSummary {
   const slice = (xs: readonly number[], offset = 0) => xs.slice(offset, offset + steps);
