@@ -68,6 +68,8 @@ export async function previewHorizon(planId: string, body: HorizonPreviewRequest
     ...preview,
     planCost: row.planCost,
     costDifference: row.planCost === null ? null : preview.cost - row.planCost,
+    planNetCost: row.planNetCost,
+    netCostDifference: row.planNetCost === null ? null : preview.netCost - row.planNetCost,
     limits,
     serverMs: performance.now() - started,
   };

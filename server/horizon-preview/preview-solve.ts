@@ -17,6 +17,7 @@ import {
 } from '../engine';
 import { AppError } from '../http/app-error';
 import { summarisePlan } from '../plans/insights/plan-summary';
+import { netMoney } from '../runs/net-money';
 
 export const hours = (h: number) => `${Number(h.toFixed(4))} h`;
 
@@ -45,7 +46,10 @@ export function needsExactPath(reason: string): AppError {
   );
 }
 
-export type PreviewFigures = Omit<HorizonPreview, 'planId' | 'planCost' | 'costDifference' | 'limits' | 'serverMs'>;
+export type PreviewFigures = Omit<
+  HorizonPreview,
+  'planId' | 'planCost' | 'costDifference' | 'planNetCost' | 'netCostDifference' | 'limits' | 'serverMs'
+>;
 
 export type PreviewOutcome = { ok: true; preview: PreviewFigures } | { ok: false; message: string };
 
@@ -83,6 +87,7 @@ export function solvePreview(a: AlignedInputs, steady: SteadyCycle, inputs: Plan
       deliverySteps,
       cost: summary.cost,
       earnings: summary.earnings,
+      ...netMoney(plan.netFigures),
       endSocPct: summary.endSocPct,
       steps,
       decisionHorizonHours: plan.dpInsights?.decisionHorizonHours ?? null,

@@ -10,6 +10,7 @@ import { alignSnapshot } from '../runs/align-snapshot';
 import type { ComputeOutcome, ReportProgress } from '../runs/run-task';
 import { exactPathInsights } from './insights/exact-path-insights';
 import { summarisePlan } from './insights/plan-summary';
+import { netMoney } from '../runs/net-money';
 import { turnpikeInsight } from './insights/turnpike-insight';
 import type { PlanComputeInput } from './plan-task';
 
@@ -88,7 +89,7 @@ export async function computePlan(input: PlanComputeInput, report: ReportProgres
       stepMinutes: a.stepMinutes,
       deliverySteps,
       steps,
-      summary: summarisePlan(a, plan.from, deliverySteps, sol),
+      summary: { ...summarisePlan(a, plan.from, deliverySteps, sol), ...netMoney(plan.netFigures) },
       turnpike: turnpikeInsight(plan, inputs.bandPct, a.stepMinutes, inputs.terminalRule),
       steadyCycle: { costPerDay: plan.steady.costPerDay, equivalentCyclesPerDay: plan.steady.equivalentCyclesPerDay },
       decisionHorizonHours: insights.decisionHorizonHours,

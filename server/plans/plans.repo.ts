@@ -145,7 +145,7 @@ export async function lastApprovedEndSoc(db: DbOrTx, batteryId: string, atOrBefo
   return row;
 }
 
-/** The inputs snapshot and the plan's own delivery-window cost (when computed), for the horizon preview; no series are read. */
+/** The inputs snapshot and the plan's own delivery-window cost and net cost (when computed), for the horizon preview; no series are read. */
 export async function findPlanForPreview(db: DbOrTx, id: string) {
   const [row] = await db
     .select({
@@ -153,6 +153,7 @@ export async function findPlanForPreview(db: DbOrTx, id: string) {
       inputVersion: plans.inputVersion,
       inputs: plans.inputs,
       planCost: sql<number | null>`(${plans.results}->'summary'->>'cost')::double precision`,
+      planNetCost: sql<number | null>`(${plans.results}->'summary'->>'netCost')::double precision`,
     })
     .from(plans)
     .where(eq(plans.id, id));

@@ -9,12 +9,12 @@
  */
 import { createHash } from 'node:crypto';
 import { decodeProfileBytes, parseProfileCsv } from '@shared/profile-csv';
-import type { ProfileUploadOptions } from '@shared/schemas/profile-upload';
 import { recordAudit } from '../audit/audit.service';
 import { getDb } from '../db/client';
 import { AppError } from '../http/app-error';
 import type { Actor } from '../http/request-context';
 import { requireSite } from '../sites/sites.service';
+import { parseUploadFields } from './profile-upload-options';
 import * as repo from './profiles.repo';
 
 export interface UploadedFile {
@@ -65,10 +65,12 @@ function summarise(values: readonly number[]) {
 export async function uploadProfile(
   siteId: string,
   file: UploadedFile | undefined,
-  options: ProfileUploadOptions & { name?: string | undefined },
+  fields: unknown,
   actor: Actor,
 ): Promise<{ id: string; created: boolean }> {
   const site = await requireSite(getDb(), siteId);
+  // The unit is read for this site: a price may be given in its currency per MWh or kWh.
+  const options = parseUploadFields(fields, site.currency);
   if (!file) {
     const message = 'No file was attached: send the CSV in the form field "file".';
     throw rejectUpload(message, [{ line: 0, message }], 'Nothing was stored. Choose a CSV file and upload again.');
@@ -80,6 +82,7 @@ export async function uploadProfile(
     kind: options.kind,
     unit: options.unit,
     timezone: site.timezone,
+    currency: site.currency,
     intervalEnding: options.intervalEnding,
     fillGaps: options.fillGaps,
     ...(options.dateOrder ? { dateOrder: options.dateOrder } : {}),

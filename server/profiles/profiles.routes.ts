@@ -4,9 +4,7 @@
  * `DELETE /api/profiles/:id`.
  */
 import { Router } from 'express';
-import { profileListQuerySchema, profileNameSchema, profileWindowQuerySchema } from '@shared/schemas/profile';
-import { profileUploadOptionsSchema } from '@shared/schemas/profile-upload';
-import { AppError } from '../http/app-error';
+import { profileListQuerySchema, profileWindowQuerySchema } from '@shared/schemas/profile';
 import { actorOf, pathId } from '../http/request-context';
 import { honourIdempotencyKey } from '../idempotency/idempotency-key';
 import { receiveProfileUpload } from './profile-upload.middleware';
@@ -15,25 +13,9 @@ import * as service from './profiles.service';
 
 export const profilesRouter = Router();
 
-/** Option errors in the same `{line, message}` shape as file errors (line 0 = the form), so one table shows both. */
-function parseUploadFields(body: unknown) {
-  const options = profileUploadOptionsSchema.safeParse(body);
-  const name = profileNameSchema.safeParse(body);
-  if (options.success && name.success) return { ...options.data, name: name.data.name };
-  const issues = [...(options.error?.issues ?? []), ...(name.error?.issues ?? [])].map((i) => ({
-    line: 0,
-    path: i.path.join('.'),
-    message: `${i.path.join('.') || 'form'}: ${i.message}`,
-  }));
-  throw new AppError('invalid_upload', 'The upload options are invalid: see issues.', 422, issues, {
-    hint: 'Nothing was stored. Choose a kind (price, load or generation) and a unit that fits it, then upload again.',
-  });
-}
-
 profilesRouter.post('/sites/:id/profiles', receiveProfileUpload, honourIdempotencyKey({ forUploads: true }), async (req, res) => {
   const siteId = pathId(req, 'site');
-  const options = parseUploadFields(req.body ?? {});
-  const { id, created } = await uploadProfile(siteId, req.file, options, actorOf(req));
+  const { id, created } = await uploadProfile(siteId, req.file, req.body ?? {}, actorOf(req));
   // 200 when the same file was already stored (a retried push): the existing profile, no duplicate.
   res.status(created ? 201 : 200).json(await service.getProfileSummary(id));
 });

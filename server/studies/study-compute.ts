@@ -7,6 +7,7 @@ import type { StudyResults } from '@shared/schemas/study';
 import { DEFAULT_GAP_TARGET_PCT, parseTerminal, runHorizonStudy, type TerminalChoice } from '../engine';
 import { alignSnapshot } from '../runs/align-snapshot';
 import type { ComputeOutcome, ReportProgress } from '../runs/run-task';
+import { valuationOf } from '../runs/net-money';
 import type { StudyComputeInput } from './study-task';
 
 export async function computeStudy(input: StudyComputeInput, report: ReportProgress): Promise<ComputeOutcome<StudyResults>> {
@@ -48,6 +49,10 @@ export async function computeStudy(input: StudyComputeInput, report: ReportProgr
     results: {
       method: methods.size === 1 ? [...methods][0]! : 'mixed',
       referenceCost: study.referenceCost,
+      referenceNetCost: study.referenceNetCost,
+      referenceBatteryValue: study.referenceBatteryValue,
+      noBatteryCost: study.noBatteryCost,
+      storedEnergyValuation: valuationOf(study.storedEnergyValuation),
       referenceEquivalentCycles: study.referenceEquivalentCycles,
       steps: Math.round((Date.parse(inputs.end) - Date.parse(inputs.start)) / (a.stepMinutes * 60_000)),
       stepMinutes: a.stepMinutes,
@@ -65,6 +70,12 @@ export async function computeStudy(input: StudyComputeInput, report: ReportProgr
         meanLeavingArcSteps: finite(r.meanLeavingArcSteps),
         leavingIntoCommitted: r.leavingIntoCommitted,
         method: r.method,
+        storedEnergyChange: finiteOrNull(r.storedEnergyChange),
+        netCost: finiteOrNull(r.netCost),
+        noBatteryCost: finiteOrNull(r.noBatteryCost),
+        batteryValue: finiteOrNull(r.batteryValue),
+        gapValue: finiteOrNull(r.gapValue),
+        valueGapPct: finiteOrNull(r.valueGapPct),
       })),
       recommendation: study.recommendation,
       targetGapPct: DEFAULT_GAP_TARGET_PCT,

@@ -6,7 +6,7 @@
  * Units: hours, % of nameplate energy; money in the site's currency.
  */
 import { z } from 'zod';
-import { horizonHoursSchema, type PlanInputs } from './plan';
+import { horizonHoursSchema, type NetMoney, type PlanInputs } from './plan';
 
 export const horizonPreviewRequestSchema = z.strictObject({ horizonHours: horizonHoursSchema });
 export type HorizonPreviewRequest = z.infer<typeof horizonPreviewRequestSchema>;
@@ -62,7 +62,7 @@ export interface HorizonPreviewStep {
   socPct: number;
 }
 
-export interface HorizonPreview {
+export interface HorizonPreview extends NetMoney {
   planId: string;
   horizonHours: number;
   /** Always the exact dynamic program: the preview has no other path. */
@@ -75,6 +75,9 @@ export interface HorizonPreview {
   /** The plan's own summary.cost, when it has results, and cost − planCost. */
   planCost: number | null;
   costDifference: number | null;
+  /** The plan's own summary.netCost (null for plans computed before net figures), and netCost − planNetCost: what "costs X more" ranks by. */
+  planNetCost: number | null;
+  netCostDifference: number | null;
   endSocPct: number;
   /** Delivery window first, then the lookahead. */
   steps: HorizonPreviewStep[];

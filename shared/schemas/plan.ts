@@ -158,6 +158,34 @@ export interface PlanStep {
   arc: 'entry' | 'near' | 'leaving' | 'outside';
 }
 
+/** How stored energy was valued (the steady cycle's value per MWh at the window's start and end clock times). */
+export interface StoredEnergyValuation {
+  valued: boolean;
+  /** Currency/MWh; null when stored energy is not valued. */
+  startValuePerMwh: number | null;
+  endValuePerMwh: number | null;
+  /** Local clock times, HH:MM. */
+  startClock: string;
+  endClock: string;
+  startEnergyKwh: number;
+  endEnergyKwh: number;
+  /** One line for the screens. */
+  description: string;
+}
+
+/** Net figures of a window: cash cost with the change in stored energy's value taken off. */
+export interface NetMoney {
+  /** Change in the value of the energy in the battery over the window (currency). */
+  storedEnergyChange: number;
+  /** cost − storedEnergyChange: what comparisons rank by. */
+  netCost: number;
+  /** The same site, window and prices without the battery. */
+  noBatteryCost: number;
+  /** noBatteryCost − netCost. */
+  batteryValue: number;
+  storedEnergyValuation: StoredEnergyValuation;
+}
+
 export interface PlanSummary {
   /** Money paid over the delivery window incl. degradation and demand charge (negative = net earnings). */
   cost: number;
@@ -170,6 +198,19 @@ export interface PlanSummary {
   endSocPct: number;
   /** Steps that charge and discharge at once (only pays at negative prices). */
   simultaneousSteps: number;
+  /** Net figures; absent in plans computed before they existed. */
+  storedEnergyChange?: number;
+  netCost?: number;
+  noBatteryCost?: number;
+  batteryValue?: number;
+  storedEnergyValuation?: StoredEnergyValuation;
+}
+
+/** Stretches outside the band between the entry and the leaving arc (distances as fractions of usable energy). */
+export interface PlanExcursions {
+  count: number;
+  steps: number;
+  largestDistance: number;
 }
 
 export interface PlanTurnpike {
@@ -180,6 +221,8 @@ export interface PlanTurnpike {
   nearSteadyShare: number;
   entryArcSteps: number;
   leavingArcSteps: number;
+  /** Absent in plans computed before excursions were counted. */
+  excursions?: PlanExcursions;
   /** Leading steps that agree with a plan of a much longer lookahead; null when none could be solved. */
   commitWindowSteps: number | null;
   /** Hours of that longer lookahead, or null. */

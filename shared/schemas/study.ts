@@ -5,7 +5,7 @@
  */
 import { z } from 'zod';
 import type { JobProgress, JobState } from './job';
-import type { BatterySnapshot, InitialSocSource, ProfileRef, SiteSnapshot } from './plan';
+import type { BatterySnapshot, InitialSocSource, ProfileRef, SiteSnapshot, StoredEnergyValuation } from './plan';
 import { horizonHoursSchema, socPctSchema } from './plan';
 import { terminalRuleSchema, type TerminalRuleText } from './terminal-rule';
 import { steadyDaysSchema, type SteadyDays } from './steady-days';
@@ -107,6 +107,14 @@ export interface StudyRun {
   /** Open-loop plans whose leaving arc reached into the steps they commit. */
   leavingIntoCommitted: number;
   method: 'dp' | 'lp' | 'mixed';
+  /** Net figures (stored energy valued as for the reference path); null when the run failed, absent in older studies. */
+  storedEnergyChange?: number | null;
+  netCost?: number | null;
+  noBatteryCost?: number | null;
+  batteryValue?: number | null;
+  /** netCost − referenceNetCost, currency, and the same in % of the reference path's battery value. */
+  gapValue?: number | null;
+  valueGapPct?: number | null;
 }
 
 export interface StudyRecommendation {
@@ -119,6 +127,11 @@ export interface StudyRecommendation {
 export interface StudyResults {
   method: 'dp' | 'lp' | 'mixed';
   referenceCost: number;
+  /** The reference path's net cost and battery value, the site without a battery, how stored energy was valued; absent in older studies. */
+  referenceNetCost?: number;
+  referenceBatteryValue?: number;
+  noBatteryCost?: number;
+  storedEnergyValuation?: StoredEnergyValuation;
   referenceEquivalentCycles: number;
   steps: number;
   stepMinutes: number;

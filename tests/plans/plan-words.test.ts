@@ -43,6 +43,28 @@ describe('the turnpike sentence', () => {
     );
   });
 
+  it('names the excursions between the arcs and never says the plan stays when it leaves', () => {
+    // [D] 28 steps of 15 minutes = 7 h outside the band in 2 stretches, at most 0.67 of usable energy away.
+    const away = { ...figures, leavingArcSteps: 0, excursions: { count: 2, steps: 28, largestDistance: 0.67 } };
+    const text = turnpikeSentence(away, 15, 'steady-value');
+    expect(text).toContain('in between it leaves the band twice, for 7 h in all, at most 67 % of usable energy away');
+    expect(text).toContain('it is back near the steady cycle at the end of the horizon');
+    expect(text).not.toContain('does not leave');
+    // [D] one stretch of 3 steps of 60 minutes, then a leaving arc of 20 h: both clauses, in that order.
+    const once = turnpikeSentence({ ...figures, excursions: { count: 1, steps: 3, largestDistance: 0.2 } }, 60, 'free');
+    expect(once).toContain(
+      'in between it leaves the band once, for 3 h, at most 20 % of usable energy away; the last 20 h leave it',
+    );
+  });
+
+  it('keeps the old sentence for plans with no excursions, counted or not', () => {
+    const none = { ...figures, leavingArcSteps: 0, excursions: { count: 0, steps: 0, largestDistance: 0 } };
+    const text = turnpikeSentence(none, 60, 'steady-value');
+    expect(text).toContain('it does not leave the steady cycle before the end of the horizon');
+    expect(text).not.toContain('in between');
+    expect(turnpikeSentence({ ...figures, leavingArcSteps: 0 }, 60, 'steady-value')).toBe(text);
+  });
+
   it('says durations in minutes below an hour and in hours above', () => {
     expect(durationWords(3, 15)).toBe('45 min');
     expect(durationWords(6, 15)).toBe('1.5 h');

@@ -79,6 +79,24 @@ describe('a horizon study computed by a background job', () => {
     for (const run of study.results!.runs) expect(run.gapPct!).toBeGreaterThanOrEqual(-1e-6);
   });
 
+  it('gives every run its net figures, and gaps in currency against the reference net cost', () => {
+    const r = study.results!;
+    expect(typeof r.referenceNetCost).toBe('number');
+    expect(r.storedEnergyValuation!.description.length).toBeGreaterThan(20);
+    // [D] the reference path's battery value is the site without a battery minus its net cost.
+    expect(r.referenceBatteryValue!).toBeCloseTo(r.noBatteryCost! - r.referenceNetCost!, 6);
+    for (const run of r.runs) {
+      // [D] definitions: netCost = cost − storedEnergyChange, batteryValue = noBatteryCost − netCost,
+      // gapValue = netCost − referenceNetCost, valueGapPct = 100·gapValue / |reference battery value|.
+      expect(run.netCost!).toBeCloseTo(run.cost! - run.storedEnergyChange!, 6);
+      expect(run.batteryValue!).toBeCloseTo(run.noBatteryCost! - run.netCost!, 6);
+      expect(run.gapValue!).toBeCloseTo(run.netCost! - r.referenceNetCost!, 6);
+      expect(run.valueGapPct!).toBeCloseTo((100 * run.gapValue!) / Math.abs(r.referenceBatteryValue!), 6);
+      // [D] pure arbitrage: no battery, no cost.
+      expect(run.noBatteryCost!).toBeCloseTo(0, 9);
+    }
+  });
+
   it('recommends one of the studied horizons with its reason', () => {
     const rec = study.results!.recommendation!;
     expect([6, 12, 24]).toContain(rec.horizonHours);

@@ -17,6 +17,11 @@ export function turnpikeInsight(plan: Plan, bandPct: number, stepMinutes: number
     nearSteadyShare: tp.nearSteadyShare,
     entryArcSteps: tp.entryArcSteps,
     leavingArcSteps: tp.leavingArcSteps,
+    excursions: {
+      count: tp.excursions.count,
+      steps: tp.excursions.steps,
+      largestDistance: tp.excursions.largestDistance,
+    },
     commitWindowSteps: tp.commitWindowSteps,
     longerLookaheadHours: tp.commitWindowSteps === null ? null : plan.longerLookaheadHours,
     value: {

@@ -79,6 +79,19 @@ export const planInputsSchema = z
   })
   .meta({ id: 'PlanInputs' });
 
+export const storedEnergyValuationSchema = z
+  .object({
+    valued: z.boolean(),
+    startValuePerMwh: z.number().nullable(),
+    endValuePerMwh: z.number().nullable(),
+    startClock: z.string(),
+    endClock: z.string(),
+    startEnergyKwh: z.number(),
+    endEnergyKwh: z.number(),
+    description: z.string(),
+  })
+  .meta({ id: 'StoredEnergyValuation' });
+
 const planStepSchema = z.object({
   time: instant,
   delivery: z.boolean(),
@@ -112,6 +125,11 @@ export const planResultsSchema = z
       dischargedKwh: z.number(),
       endSocPct: z.number(),
       simultaneousSteps: z.number().int(),
+      storedEnergyChange: z.number().optional(),
+      netCost: z.number().optional(),
+      noBatteryCost: z.number().optional(),
+      batteryValue: z.number().optional(),
+      storedEnergyValuation: storedEnergyValuationSchema.optional(),
     }),
     turnpike: z.object({
       bandPct: z.number(),
@@ -119,6 +137,10 @@ export const planResultsSchema = z
       nearSteadyShare: z.number(),
       entryArcSteps: z.number().int(),
       leavingArcSteps: z.number().int(),
+      excursions: z
+        .object({ count: z.number().int(), steps: z.number().int(), largestDistance: z.number() })
+        .optional()
+        .meta({ description: 'Absent in plans computed before excursions were counted.' }),
       commitWindowSteps: z.number().int().nullable(),
       longerLookaheadHours: z.number().nullable(),
       value: z.object({

@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { PLAN_EVENT_ACTIONS, PLAN_STATUSES, type PendingSignOff, type SignOffRecord } from '../sign-off';
 import type { HorizonPreview } from '../horizon-preview';
 import { instant, uuid } from './common';
+import { storedEnergyValuationSchema } from './plan-responses';
 import type { SameType } from './same-type';
 
 const personAt = z.object({ id: z.string(), name: z.string().nullable(), email: z.string().nullable(), at: instant });
@@ -73,6 +74,13 @@ export const horizonPreviewSchema = z
     earnings: z.number(),
     planCost: z.number().nullable(),
     costDifference: z.number().nullable(),
+    planNetCost: z.number().nullable(),
+    netCostDifference: z.number().nullable(),
+    storedEnergyChange: z.number(),
+    netCost: z.number(),
+    noBatteryCost: z.number(),
+    batteryValue: z.number(),
+    storedEnergyValuation: storedEnergyValuationSchema,
     endSocPct: z.number(),
     steps: z.array(z.object({ time: instant, delivery: z.boolean(), socPct: z.number() })),
     decisionHorizonHours: z.number().nullable(),

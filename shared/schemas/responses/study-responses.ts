@@ -9,6 +9,7 @@ import {
   initialSocSourceSchema,
   runProfilesSchema,
   siteSnapshotSchema,
+  storedEnergyValuationSchema,
   terminalRuleTextSchema,
 } from './plan-responses';
 import type { SameType } from './same-type';
@@ -41,6 +42,10 @@ export const studyResultsSchema = z
   .object({
     method,
     referenceCost: z.number(),
+    referenceNetCost: z.number().optional(),
+    referenceBatteryValue: z.number().optional(),
+    noBatteryCost: z.number().optional(),
+    storedEnergyValuation: storedEnergyValuationSchema.optional(),
     referenceEquivalentCycles: z.number(),
     steps: z.number().int(),
     stepMinutes: z.number().int(),
@@ -59,6 +64,12 @@ export const studyResultsSchema = z
         meanLeavingArcSteps: z.number(),
         leavingIntoCommitted: z.number().int(),
         method,
+        storedEnergyChange: z.number().nullable().optional(),
+        netCost: z.number().nullable().optional(),
+        noBatteryCost: z.number().nullable().optional(),
+        batteryValue: z.number().nullable().optional(),
+        gapValue: z.number().nullable().optional(),
+        valueGapPct: z.number().nullable().optional(),
       }),
     ),
     recommendation: orNull(recommendationSchema),
