@@ -16,34 +16,35 @@ const optionalChoice = <T extends string>(values: readonly [T, ...T[]], message:
 
 export const profileKindSchema = z.enum(PROFILE_KINDS);
 
-export const profileUploadOptionsSchema = z
-  .object({
-    kind: profileKindSchema,
-    unit: z.string().trim().min(1, 'Choose a unit.'),
-    /** Labels mark the end of each interval; default: interval-beginning. */
-    intervalEnding: flag,
-    /** Fill missing intervals by linear interpolation; default: reject gaps. */
-    fillGaps: flag,
-    /** Dates written day first (08.12.2026 00:00) or month first (12/08/2026 00:00); default: ISO 8601 only. */
-    dateOrder: optionalChoice(
-      ['dmy', 'mdy'],
-      'Choose dmy (day-month-year) or mdy (month-day-year), or leave dateOrder out for ISO 8601 dates.',
-    ),
-    /** The values' decimal separator; the other of "." and "," then separates thousands. Default: plain numbers. */
-    decimalSeparator: optionalChoice(
-      ['.', ','],
-      'Choose "." or "," as the decimal separator, or leave decimalSeparator out for plain numbers.',
-    ),
-  })
-  .superRefine((value, ctx) => {
-    if (!isAcceptedUnit(value.kind, value.unit)) {
-      ctx.addIssue({
-        code: 'custom',
-        path: ['unit'],
-        message: `A ${value.kind} profile takes one of: ${ACCEPTED_UNITS[value.kind].join(', ')}.`,
-      });
-    }
-  });
+/** The upload's fields, whatever the site's currency. */
+const uploadFields = {
+  kind: profileKindSchema,
+  unit: z.string().trim().min(1, 'Choose a unit.'),
+  /** Labels mark the end of each interval; default: interval-beginning. */
+  intervalEnding: flag,
+  /** Fill missing intervals by linear interpolation; default: reject gaps. */
+  fillGaps: flag,
+  /** Dates written day first (08.12.2026 00:00) or month first (12/08/2026 00:00); default: ISO 8601 only. */
+  dateOrder: optionalChoice(
+    ['dmy', 'mdy'],
+    'Choose dmy (day-month-year) or mdy (month-day-year), or leave dateOrder out for ISO 8601 dates.',
+  ),
+  /** The values' decimal separator; the other of "." and "," then separates thousands. Default: plain numbers. */
+  decimalSeparator: optionalChoice(
+    ['.', ','],
+    'Choose "." or "," as the decimal separator, or leave decimalSeparator out for plain numbers.',
+  ),
+};
+
+export const profileUploadOptionsSchema = z.object(uploadFields).superRefine((value, ctx) => {
+  if (!isAcceptedUnit(value.kind, value.unit)) {
+    ctx.addIssue({
+      code: 'custom',
+      path: ['unit'],
+      message: `A ${value.kind} profile takes one of: ${ACCEPTED_UNITS[value.kind].join(', ')}.`,
+    });
+  }
+});
 
 export type ProfileUploadOptions = z.infer<typeof profileUploadOptionsSchema>;
 
@@ -53,15 +54,8 @@ export type ProfileUploadOptions = z.infer<typeof profileUploadOptionsSchema>;
  * EUR/MWh); another currency is refused on the unit field with the reason.
  */
 export function profileUploadOptionsSchemaFor(currency: string) {
-  return z
-    .object({
-      kind: profileKindSchema,
-      unit: z.string().trim().min(1, 'Choose a unit.'),
-      intervalEnding: flag,
-      fillGaps: flag,
-    })
-    .superRefine((value, ctx) => {
-      const resolved = resolveProfileUnit(value.kind, value.unit, currency);
-      if (!resolved.ok) ctx.addIssue({ code: 'custom', path: ['unit'], message: resolved.message });
-    });
+  return z.object(uploadFields).superRefine((value, ctx) => {
+    const resolved = resolveProfileUnit(value.kind, value.unit, currency);
+    if (!resolved.ok) ctx.addIssue({ code: 'custom', path: ['unit'], message: resolved.message });
+  });
 }
