@@ -9,7 +9,7 @@ import { steadyValueAt, solveSteadyCycle } from '../../server/engine/steady/solv
 import { minuteOfDayAt } from '../../server/engine/terminal/terminal-choice';
 import { demoInputs } from './support/demo-inputs';
 import { dailyPrice, TURNPIKE_BATTERY } from './support/periodic-inputs';
-import { seededRandom as seeded } from '../support/seeded-random';
+import { xorshiftRandom as seeded } from '../support/seeded-random';
 import { referenceLp, solveLpWithGlpk } from '../support/reference-lp';
 
 /** Daily-shaped prices with weekend dips and seeded noise, so plans are near but not on the steady cycle. */

@@ -11,7 +11,7 @@ import { minuteOfDayAt } from '../../server/engine/terminal/terminal-choice';
 import type { AlignedInputs } from '../../server/engine/inputs/align-inputs';
 import type { TerminalChoice } from '../../server/engine/terminal/terminal-choice';
 import { randomDaysInputs } from './support/random-days';
-import { seededRandom as seeded } from '../support/seeded-random';
+import { xorshiftRandom as seeded } from '../support/seeded-random';
 import { referenceLp, solveLpWithGlpk } from '../support/reference-lp';
 import { periodicInputs } from './support/periodic-inputs';
 

@@ -11,7 +11,7 @@ import { minuteOfDayAt } from '../../server/engine/terminal/terminal-choice';
 import { battery } from './support/problem-builder';
 import { randomSteadyCase, type SteadyCaseOptions } from './support/random-steady';
 import { referenceLp, solveLpWithGlpk } from '../support/reference-lp';
-import { seededRandom as seeded } from '../support/seeded-random';
+import { xorshiftRandom as seeded } from '../support/seeded-random';
 import type { AlignedInputs } from '../../server/engine/inputs/align-inputs';
 
 function steadyOf(inputs: AlignedInputs): SteadyCycle {

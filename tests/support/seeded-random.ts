@@ -13,3 +13,20 @@ export function seededRandom(seed: number): () => number {
     return ((x ^ (x >>> 14)) >>> 0) / 4294967296;
   };
 }
+
+/**
+ * A 32-bit xorshift generator (Marsaglia, "Xorshift RNGs", J. Stat. Softw. 8(14), 2003): the
+ * stream the steady-value, net-figure and operating-limit checks were drawn from, kept so
+ * their random instances stay the ones they were validated on.
+ */
+export function xorshiftRandom(seed: number): () => number {
+  let x = (seed * 2654435761) >>> 0 || 1;
+  return () => {
+    x ^= x << 13;
+    x >>>= 0;
+    x ^= x >>> 17;
+    x ^= x << 5;
+    x >>>= 0;
+    return x / 4294967296;
+  };
+}

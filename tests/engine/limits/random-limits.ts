@@ -6,7 +6,7 @@
 // within one ramp step of 0.
 import type { DispatchProblem } from '../../../server/engine/types';
 import { randomDispatchProblem, type ModelVariant } from '../support/random-problems';
-import { seededRandom as seeded } from '../../support/seeded-random';
+import { xorshiftRandom as seeded } from '../../support/seeded-random';
 
 export const LIMIT_FEATURES = [
   'reserves',

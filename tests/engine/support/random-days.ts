@@ -2,7 +2,7 @@
 // with noise, so plans and studies see prices near, but not on, the steady cycle.
 import { alignInputs, type AlignedInputs } from '../../../server/engine/inputs/align-inputs';
 import { randomSteadyCase, type SteadyCaseOptions } from './random-steady';
-import { seededRandom as seeded } from '../../support/seeded-random';
+import { xorshiftRandom as seeded } from '../../support/seeded-random';
 
 export function randomDaysInputs(seed: number, days: number, options: SteadyCaseOptions): AlignedInputs {
   const r = seeded(seed + 1);

@@ -5,7 +5,7 @@
 import { alignInputs, type AlignedInputs } from '../../../server/engine/inputs/align-inputs';
 import type { DispatchProblem } from '../../../server/engine/types';
 import { battery } from './problem-builder';
-import { seededRandom as seeded } from '../../support/seeded-random';
+import { xorshiftRandom as seeded } from '../../support/seeded-random';
 
 export interface SteadyCaseOptions {
   readonly stepMinutes: 60 | 15;
